@@ -1,0 +1,210 @@
+
+import { index, integer, primaryKey, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
+
+const id = () =>
+	text('id')
+		.primaryKey()
+		.$defaultFn(() => crypto.randomUUID());
+const createdAt = () =>
+	integer('created_at', { mode: 'timestamp_ms' })
+		.notNull()
+		.$defaultFn(() => new Date());
+
+// ---- Auth.js tables (shape required by @auth/drizzle-adapter), plus our password hash ----
+export const users = sqliteTable('user', {
+	id: id(),
+	name: text('name'),
+	email: text('email').unique(),
+	emailVerified: integer('emailVerified', { mode: 'timestamp_ms' }),
+	image: text('image'),
+	passwordHash: text('password_hash'),
+	// 'frac32' | 'frac16' | 'frac64' | 'decimal-in' | 'mm'
+	lengthUnit: text('length_unit').notNull().default('frac16'),
+	currentWorkshopId: text('current_workshop_id'),
+	createdAt: createdAt()
+});
+
+export const accounts = sqliteTable(
+	'account',
+	{
+		userId: text('userId')
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		type: text('type').notNull(),
+		provider: text('provider').notNull(),
+		providerAccountId: text('providerAccountId').notNull(),
+		refresh_token: text('refresh_token'),
+		access_token: text('access_token'),
+		expires_at: integer('expires_at'),
+		token_type: text('token_type'),
+		scope: text('scope'),
+		id_token: text('id_token'),
+		session_state: text('session_state')
+	},
+	(t) => [primaryKey({ columns: [t.provider, t.providerAccountId] })]
+);
+
+export const sessions = sqliteTable('session', {
+	sessionToken: text('sessionToken').primaryKey(),
+	userId: text('userId')
+		.notNull()
+		.references(() => users.id, { onDelete: 'cascade' }),
+	expires: integer('expires', { mode: 'timestamp_ms' }).notNull()
+});
+
+export const verificationTokens = sqliteTable(
+	'verificationToken',
+	{
+		identifier: text('identifier').notNull(),
+		token: text('token').notNull(),
+		expires: integer('expires', { mode: 'timestamp_ms' }).notNull()
+	},
+	(t) => [primaryKey({ columns: [t.identifier, t.token] })]
+);
+
+// ---- Spanwright ----
+export const workshops = sqliteTable('workshop', {
+	id: id(),
+	name: text('name').notNull(),
+	personal: integer('personal', { mode: 'boolean' }).notNull().default(false),
+	createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+	createdAt: createdAt()
+});
+
+export const ROLES = ['viewer', 'editor', 'owner'] as const;
+export type Role = (typeof ROLES)[number];
+
+export const memberships = sqliteTable(
+	'membership',
+	{
+		userId: text('user_id')
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		workshopId: text('workshop_id')
+			.notNull()
+			.references(() => workshops.id, { onDelete: 'cascade' }),
+		role: text('role', { enum: ROLES }).notNull(),
+		createdAt: createdAt()
+	},
+	(t) => [primaryKey({ columns: [t.userId, t.workshopId] }), index('membership_workshop').on(t.workshopId)]
+);
+
+export const invitations = sqliteTable(
+	'invitation',
+	{
+		id: id(),
+		workshopId: text('workshop_id')
+			.notNull()
+			.references(() => workshops.id, { onDelete: 'cascade' }),
+		email: text('email').notNull(),
+		role: text('role', { enum: ROLES }).notNull(),
+		// sha-256 of the token sent by mail; the token itself is never stored
+		tokenHash: text('token_hash').notNull().unique(),
+		invitedBy: text('invited_by').references(() => users.id, { onDelete: 'set null' }),
+		expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
+		acceptedAt: integer('accepted_at', { mode: 'timestamp_ms' }),
+		createdAt: createdAt()
+	},
+	(t) => [index('invitation_workshop').on(t.workshopId)]
+);
+
+export const projects = sqliteTable(
+	'project',
+	{
+		id: id(),
+		workshopId: text('workshop_id')
+			.notNull()
+			.references(() => workshops.id, { onDelete: 'cascade' }),
+		name: text('name').notNull(),
+		client: text('client').notNull().default(''),
+		siteNotes: text('site_notes').notNull().default(''),
+		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: createdAt(),
+		updatedAt: integer('updated_at', { mode: 'timestamp_ms' })
+			.notNull()
+			.$defaultFn(() => new Date())
+	},
+	(t) => [index('project_workshop').on(t.workshopId)]
+);
+
+export const apiTokens = sqliteTable('api_token', {
+	id: id(),
+	userId: text('user_id')
+		.notNull()
+		.references(() => users.id, { onDelete: 'cascade' }),
+	name: text('name').notNull(),
+	// sha-256 of the secret; the secret is shown once at creation
+	tokenHash: text('token_hash').notNull().unique(),
+	prefix: text('prefix').notNull(),
+	lastUsedAt: integer('last_used_at', { mode: 'timestamp_ms' }),
+	revokedAt: integer('revoked_at', { mode: 'timestamp_ms' }),
+	createdAt: createdAt()
+});
+
+export const passwordResets = sqliteTable('password_reset', {
+	tokenHash: text('token_hash').primaryKey(),
+	userId: text('user_id')
+		.notNull()
+		.references(() => users.id, { onDelete: 'cascade' }),
+	expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
+	usedAt: integer('used_at', { mode: 'timestamp_ms' })
+});
+
+// Failed sign-ins by key (an e-mail or a client address), for slowing and refusing guessing.
+export const signInFailures = sqliteTable(
+	'sign_in_failure',
+	{
+		key: text('key').notNull(),
+		at: integer('at', { mode: 'timestamp_ms' }).notNull()
+	},
+	(t) => [index('sign_in_failure_key_at').on(t.key, t.at)]
+);
+
+// ---- Analyses (workbench): inputs, results, engine version, revisions ----
+export const ANALYSIS_KINDS = ['shelf', 'comparison', 'joint', 'stability', 'case'] as const;
+export type AnalysisKind = (typeof ANALYSIS_KINDS)[number];
+
+export const analyses = sqliteTable(
+	'analysis',
+	{
+		id: id(),
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		kind: text('kind', { enum: ANALYSIS_KINDS }).notNull(),
+		name: text('name').notNull(),
+		input: text('input', { mode: 'json' }).notNull(),
+		result: text('result', { mode: 'json' }),
+		summary: text('summary').notNull().default(''),
+		pass: integer('pass', { mode: 'boolean' }),
+		engineVersion: text('engine_version').notNull(),
+		version: integer('version').notNull().default(1),
+		deletedAt: integer('deleted_at', { mode: 'timestamp_ms' }),
+		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+		updatedBy: text('updated_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: createdAt(),
+		updatedAt: integer('updated_at', { mode: 'timestamp_ms' })
+			.notNull()
+			.$defaultFn(() => new Date())
+	},
+	(t) => [index('analysis_project').on(t.projectId)]
+);
+
+export const analysisRevisions = sqliteTable(
+	'analysis_revision',
+	{
+		id: id(),
+		analysisId: text('analysis_id')
+			.notNull()
+			.references(() => analyses.id, { onDelete: 'cascade' }),
+		version: integer('version').notNull(),
+		name: text('name').notNull(),
+		input: text('input', { mode: 'json' }).notNull(),
+		result: text('result', { mode: 'json' }),
+		engineVersion: text('engine_version').notNull(),
+		changedBy: text('changed_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: createdAt()
+	},
+	(t) => [uniqueIndex('analysis_revision_version').on(t.analysisId, t.version)]
+);
+
