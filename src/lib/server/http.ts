@@ -1,0 +1,51 @@
+import { json } from '@sveltejs/kit';
+import type { z } from 'zod';
+
+/** One issue with one field of a request: where it is and what was expected. */
+export interface ProblemIssue {
+	path: (string | number)[];
+	message: string;
+}
+
+/** A JSON problem body `{ error, issues }` with the given status. */
+export function problem(status: number, error: string, issues: ProblemIssue[] = []) {
+	return json({ error, issues }, { status });
+}
+
+export function zodIssues(err: z.ZodError): ProblemIssue[] {
+	return err.issues.map((i) => ({
+		path: i.path.filter((p): p is string | number => typeof p !== 'symbol'),
+		message: i.message
+	}));
+}
+
+const MAX_BODY_BYTES = 256 * 1024;
+
+/**
+ * Read and validate a JSON body with a shared schema. Returns the parsed data, or a problem
+ * Response (400 for unreadable JSON, 413 for an oversized body, 422 for a body that fails the schema).
+ */
+export async function readJson<S extends z.ZodType>(
+	request: Request,
+	schema: S
+): Promise<{ ok: true; data: z.output<S> } | { ok: false; response: Response }> {
+	const length = Number(request.headers.get('content-length') ?? 0);
+	if (length > MAX_BODY_BYTES)
+		return { ok: false, response: problem(413, 'The request body is too large.') };
+	let raw: unknown;
+	try {
+		const text = await request.text();
+		if (text.length > MAX_BODY_BYTES)
+			return { ok: false, response: problem(413, 'The request body is too large.') };
+		raw = text.length ? JSON.parse(text) : {};
+	} catch {
+		return { ok: false, response: problem(400, 'The request body is not valid JSON.') };
+	}
+	const parsed = schema.safeParse(raw);
+	if (!parsed.success)
+		return {
+			ok: false,
+			response: problem(422, 'Some fields need attention.', zodIssues(parsed.error))
+		};
+	return { ok: true, data: parsed.data };
+}

@@ -1,0 +1,3 @@
+import type { ApiOperation } from './types';
+
+export const joineryOperations: ApiOperation[] = [];
