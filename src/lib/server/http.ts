@@ -1,4 +1,4 @@
-import { json } from '@sveltejs/kit';
+import { isHttpError, json } from '@sveltejs/kit';
 import type { z } from 'zod';
 
 /** One issue with one field of a request: where it is and what was expected. */
@@ -46,6 +46,35 @@ export async function readJson<S extends z.ZodType>(
 		return {
 			ok: false,
 			response: problem(422, 'Some fields need attention.', zodIssues(parsed.error))
+		};
+	return { ok: true, data: parsed.data };
+}
+
+/**
+ * Wrap an API handler so that the errors thrown by the data modules (`error(403, …)` from
+ * requireRole, say) answer as JSON problems rather than SvelteKit's HTML or `{ message }`.
+ */
+export function api<E>(handler: (event: E) => Promise<Response> | Response) {
+	return async (event: E): Promise<Response> => {
+		try {
+			return await handler(event);
+		} catch (e) {
+			if (isHttpError(e)) return problem(e.status, e.body.message);
+			throw e;
+		}
+	};
+}
+
+/** Validate a URL's query string with a shared schema; a problem Response (422) when it fails. */
+export function readQuery<S extends z.ZodType>(
+	url: URL,
+	schema: S
+): { ok: true; data: z.output<S> } | { ok: false; response: Response } {
+	const parsed = schema.safeParse(Object.fromEntries(url.searchParams));
+	if (!parsed.success)
+		return {
+			ok: false,
+			response: problem(422, 'Some query parameters need attention.', zodIssues(parsed.error))
 		};
 	return { ok: true, data: parsed.data };
 }

@@ -1,0 +1,2 @@
+export { default as AppShell } from './AppShell.svelte';
+export { default as Wordmark } from './Wordmark.svelte';

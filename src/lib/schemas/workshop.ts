@@ -1,0 +1,19 @@
+import { z } from 'zod';
+
+export const roleSchema = z.enum(['viewer', 'editor', 'owner']);
+
+export const workshopNameSchema = z.object({
+	name: z.string().trim().min(2, 'Give the workshop a name of at least 2 characters.').max(80)
+});
+
+export const invitationSchema = z.object({
+	email: z.email('Enter an e-mail address such as name@example.com.').trim().toLowerCase(),
+	role: roleSchema.default('viewer')
+});
+
+export const memberRoleSchema = z.object({
+	userId: z.string().min(1),
+	role: roleSchema
+});
+
+export const memberRemoveSchema = z.object({ userId: z.string().min(1) });

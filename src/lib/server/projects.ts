@@ -1,0 +1,93 @@
+import { and, asc, count, desc, eq, like, or, type SQL } from 'drizzle-orm';
+import { requireRole, type Actor } from './access';
+import { getDb } from './db';
+import { projects, users } from './db/schema';
+import type { ProjectInput, ProjectListQuery } from '$lib/schemas/project';
+import { error } from '@sveltejs/kit';
+
+export type Project = typeof projects.$inferSelect;
+
+const sortColumn = {
+	updated: projects.updatedAt,
+	name: projects.name,
+	client: projects.client,
+	created: projects.createdAt
+} as const;
+
+function escapeLike(s: string) {
+	return s.replace(/[\\%_]/g, (c) => `\\${c}`);
+}
+
+/** A page of the workshop's projects, searched by name, client and site notes. */
+export function listProjects(actor: Actor, query: ProjectListQuery) {
+	requireRole(actor, query.workshop, 'viewer');
+	const db = getDb();
+	const where: SQL[] = [eq(projects.workshopId, query.workshop)];
+	if (query.q) {
+		const pattern = `%${escapeLike(query.q)}%`;
+		where.push(
+			or(
+				like(projects.name, pattern),
+				like(projects.client, pattern),
+				like(projects.siteNotes, pattern)
+			)!
+		);
+	}
+	const filter = and(...where);
+	const order = query.dir === 'asc' ? asc(sortColumn[query.sort]) : desc(sortColumn[query.sort]);
+	const items = db
+		.select({
+			id: projects.id,
+			workshopId: projects.workshopId,
+			name: projects.name,
+			client: projects.client,
+			siteNotes: projects.siteNotes,
+			createdAt: projects.createdAt,
+			updatedAt: projects.updatedAt,
+			createdByName: users.name
+		})
+		.from(projects)
+		.leftJoin(users, eq(users.id, projects.createdBy))
+		.where(filter)
+		.orderBy(order, asc(projects.id))
+		.limit(query.perPage)
+		.offset((query.page - 1) * query.perPage)
+		.all();
+	const total = db.select({ n: count() }).from(projects).where(filter).get()?.n ?? 0;
+	return { items, total, page: query.page, perPage: query.perPage };
+}
+
+/** One project, if the actor may see its workshop; 404 otherwise. */
+export function getProject(actor: Actor, projectId: string) {
+	const row = getDb().select().from(projects).where(eq(projects.id, projectId)).get();
+	if (!row) error(404, 'Not found.');
+	const { role } = requireRole(actor, row.workshopId, 'viewer');
+	return { project: row, role };
+}
+
+export function createProject(actor: Actor, workshopId: string, input: ProjectInput) {
+	requireRole(actor, workshopId, 'editor');
+	return getDb()
+		.insert(projects)
+		.values({ ...input, workshopId, createdBy: actor.id })
+		.returning()
+		.get();
+}
+
+export function updateProject(actor: Actor, projectId: string, patch: Partial<ProjectInput>) {
+	const { project } = getProject(actor, projectId);
+	requireRole(actor, project.workshopId, 'editor');
+	return getDb()
+		.update(projects)
+		.set({ ...patch, updatedAt: new Date() })
+		.where(eq(projects.id, projectId))
+		.returning()
+		.get();
+}
+
+export function deleteProject(actor: Actor, projectId: string) {
+	const { project } = getProject(actor, projectId);
+	requireRole(actor, project.workshopId, 'editor');
+	getDb().delete(projects).where(eq(projects.id, projectId)).run();
+	return project;
+}

@@ -1,0 +1,25 @@
+import { error, fail, redirect } from '@sveltejs/kit';
+import { superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { requireActor } from '$lib/server/access';
+import { createProject } from '$lib/server/projects';
+import { currentWorkshop } from '$lib/server/workshops';
+import { projectSchema } from '$lib/schemas/project';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async ({ locals }) => {
+	requireActor(locals.actor);
+	return { createForm: await superValidate(zod4(projectSchema)) };
+};
+
+export const actions: Actions = {
+	create: async ({ locals, request }) => {
+		const actor = requireActor(locals.actor);
+		const ws = currentWorkshop(actor);
+		if (!ws) error(404, 'You belong to no workshop yet.');
+		const form = await superValidate(request, zod4(projectSchema));
+		if (!form.valid) return fail(400, { createForm: form });
+		const project = createProject(actor, ws.id, form.data);
+		redirect(303, `/projects/${project.id}`);
+	}
+};

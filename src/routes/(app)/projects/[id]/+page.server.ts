@@ -1,0 +1,26 @@
+import { fail, redirect } from '@sveltejs/kit';
+import { message, superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { requireActor } from '$lib/server/access';
+import { deleteProject, getProject, updateProject } from '$lib/server/projects';
+import { projectSchema } from '$lib/schemas/project';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async ({ locals, params }) => {
+	const { project, role } = getProject(requireActor(locals.actor), params.id);
+	return { project, role, editForm: await superValidate(project, zod4(projectSchema)) };
+};
+
+export const actions: Actions = {
+	update: async ({ locals, params, request }) => {
+		const actor = requireActor(locals.actor);
+		const form = await superValidate(request, zod4(projectSchema));
+		if (!form.valid) return fail(400, { editForm: form });
+		updateProject(actor, params.id, form.data);
+		return message(form, 'Saved.');
+	},
+	delete: async ({ locals, params }) => {
+		deleteProject(requireActor(locals.actor), params.id);
+		redirect(303, '/projects');
+	}
+};

@@ -1,0 +1,24 @@
+import type { RequestHandler } from './$types';
+import { json } from '@sveltejs/kit';
+import { requireActor } from '$lib/server/access';
+import { api, readJson } from '$lib/server/http';
+import { deleteProject, getProject, updateProject } from '$lib/server/projects';
+import { projectPatchSchema } from '$lib/schemas/project';
+
+export const GET: RequestHandler = api(({ locals, params }) => {
+	const { project, role } = getProject(requireActor(locals.actor), params.id);
+	return json({ ...project, role });
+});
+
+export const PATCH: RequestHandler = api(async ({ locals, params, request }) => {
+	const actor = requireActor(locals.actor);
+	getProject(actor, params.id);
+	const body = await readJson(request, projectPatchSchema);
+	if (!body.ok) return body.response;
+	return json(updateProject(actor, params.id, body.data));
+});
+
+export const DELETE: RequestHandler = api(({ locals, params }) => {
+	deleteProject(requireActor(locals.actor), params.id);
+	return new Response(null, { status: 204 });
+});

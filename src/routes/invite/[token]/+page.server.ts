@@ -1,0 +1,24 @@
+import { error, redirect } from '@sveltejs/kit';
+import { requireActor } from '$lib/server/access';
+import { acceptInvitation, findInvitation } from '$lib/server/workshops';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = ({ params, locals }) => {
+	const found = findInvitation(params.token);
+	if (found.state === 'unknown') error(404, 'This invitation link is not known.');
+	const inv = found.invitation;
+	return {
+		state: found.state,
+		workshopName: inv.workshopName,
+		role: inv.role,
+		email: inv.email,
+		signedInAs: locals.actor?.email ?? null
+	};
+};
+
+export const actions: Actions = {
+	accept: async ({ params, locals }) => {
+		acceptInvitation(requireActor(locals.actor), params.token);
+		redirect(303, '/projects');
+	}
+};
