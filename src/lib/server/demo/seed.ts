@@ -1,0 +1,81 @@
+import { eq, inArray } from 'drizzle-orm';
+import { createUser } from '../accounts';
+import { getDb } from '../db';
+import { memberships, projects, users, workshops } from '../db/schema';
+import { DEMO_ACCOUNTS } from './accounts';
+
+// The demo scenario (invented): Quillfeather Casework, a two-person built-in shop, and Dana
+// Whitlock, a client who follows her library wall as a viewer.
+export const DEMO_WORKSHOP = 'Quillfeather Casework';
+
+const DEMO_PROJECTS = [
+	{
+		name: 'Whitlock library wall',
+		client: 'Dana Whitlock',
+		siteNotes:
+			'Built-in bookcases either side of the fireplace, 94" tall to the crown. Plaster over lath; studs at 16" on centre found on the left wall only. Oak-faced plywood carcases, painted poplar face frame.'
+	},
+	{
+		name: 'Harbour Street school reading nook',
+		client: 'Harbour Street Primary (facilities office)',
+		siteNotes:
+			'Low open shelving for picture books and a tall teacher cabinet. Children climb: every tall unit anchored. Design load for school shelving.'
+	},
+	{
+		name: 'Kiln Lane pantry',
+		client: 'R. and M. Osei',
+		siteNotes:
+			'Deep pantry shelves for jars and small appliances, melamine-faced particleboard with hardwood nosings. Masonry back wall.'
+	}
+];
+
+/** Remove the demo accounts (and what only they own), then create the scenario afresh. */
+export async function seedDemo() {
+	const db = getDb();
+	const emails = DEMO_ACCOUNTS.map((a) => a.email);
+	const old = db.select({ id: users.id }).from(users).where(inArray(users.email, emails)).all();
+	if (old.length) {
+		const ids = old.map((u) => u.id);
+		db.delete(workshops).where(inArray(workshops.createdBy, ids)).run();
+		db.delete(users).where(inArray(users.id, ids)).run();
+	}
+
+	const created = [];
+	for (const account of DEMO_ACCOUNTS) {
+		const user = await createUser({ name: account.name, email: account.email, password: account.password });
+		db.update(users).set({ emailVerified: new Date() }).where(eq(users.id, user.id)).run();
+		created.push({ ...account, id: user.id });
+	}
+	const owner = created.find((a) => a.role === 'owner')!;
+	const shop = db
+		.insert(workshops)
+		.values({ name: DEMO_WORKSHOP, createdBy: owner.id })
+		.returning()
+		.get();
+	for (const member of created) {
+		db.insert(memberships).values({ userId: member.id, workshopId: shop.id, role: member.role }).run();
+		db.update(users).set({ currentWorkshopId: shop.id }).where(eq(users.id, member.id)).run();
+	}
+	// Dana is a client, not a builder: her shop is Quillfeather's, her own remains empty.
+	const editor = created.find((a) => a.role === 'editor')!;
+	const projectIds: Record<string, string> = {};
+	DEMO_PROJECTS.forEach((p, i) => {
+		const row = db
+			.insert(projects)
+			.values({
+				...p,
+				workshopId: shop.id,
+				createdBy: i === 0 ? owner.id : editor.id,
+				updatedAt: new Date(Date.now() - i * 86_400_000)
+			})
+			.returning()
+			.get();
+		projectIds[p.name] = row.id;
+	});
+	return { workshopId: shop.id, users: created, projectIds };
+}
+
+/** True when the demo scenario is already in the database. */
+export function demoIsSeeded() {
+	return !!getDb().select({ id: users.id }).from(users).where(eq(users.email, DEMO_ACCOUNTS[0].email)).get();
+}
