@@ -1,7 +1,11 @@
 import { z } from 'zod';
 
 export const projectSchema = z.object({
-	name: z.string().trim().min(1, 'Give the project a name.').max(120, 'Keep the name under 120 characters.'),
+	name: z
+		.string()
+		.trim()
+		.min(1, 'Give the project a name.')
+		.max(120, 'Keep the name under 120 characters.'),
 	client: z.string().trim().max(120, 'Keep the client under 120 characters.').default(''),
 	siteNotes: z.string().trim().max(4000, 'Keep the site notes under 4000 characters.').default('')
 });

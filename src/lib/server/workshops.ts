@@ -16,7 +16,11 @@ export interface WorkshopSummary {
 export function createWorkshopFor(ownerId: string, name: string, personal = false) {
 	const db = getDb();
 	return db.transaction((tx) => {
-		const ws = tx.insert(workshops).values({ name, personal, createdBy: ownerId }).returning().get();
+		const ws = tx
+			.insert(workshops)
+			.values({ name, personal, createdBy: ownerId })
+			.returning()
+			.get();
 		tx.insert(memberships).values({ userId: ownerId, workshopId: ws.id, role: 'owner' }).run();
 		tx.update(users).set({ currentWorkshopId: ws.id }).where(eq(users.id, ownerId)).run();
 		return ws;
@@ -26,7 +30,12 @@ export function createWorkshopFor(ownerId: string, name: string, personal = fals
 /** Every workshop the actor belongs to, with their role in it. */
 export function listWorkshops(actor: Actor): WorkshopSummary[] {
 	return getDb()
-		.select({ id: workshops.id, name: workshops.name, personal: workshops.personal, role: memberships.role })
+		.select({
+			id: workshops.id,
+			name: workshops.name,
+			personal: workshops.personal,
+			role: memberships.role
+		})
 		.from(memberships)
 		.innerJoin(workshops, eq(workshops.id, memberships.workshopId))
 		.where(eq(memberships.userId, actor.id))
@@ -53,7 +62,12 @@ export function membershipOf(userId: string, workshopId: string) {
 
 export function renameWorkshop(actor: Actor, workshopId: string, name: string) {
 	requireRole(actor, workshopId, 'owner');
-	return getDb().update(workshops).set({ name }).where(eq(workshops.id, workshopId)).returning().get();
+	return getDb()
+		.update(workshops)
+		.set({ name })
+		.where(eq(workshops.id, workshopId))
+		.returning()
+		.get();
 }
 
 export function deleteWorkshop(actor: Actor, workshopId: string) {
@@ -62,7 +76,10 @@ export function deleteWorkshop(actor: Actor, workshopId: string) {
 	const ws = db.select().from(workshops).where(eq(workshops.id, workshopId)).get();
 	if (ws?.personal) error(409, 'A personal workshop cannot be deleted.');
 	db.delete(workshops).where(eq(workshops.id, workshopId)).run();
-	db.update(users).set({ currentWorkshopId: null }).where(eq(users.currentWorkshopId, workshopId)).run();
+	db.update(users)
+		.set({ currentWorkshopId: null })
+		.where(eq(users.currentWorkshopId, workshopId))
+		.run();
 }
 
 /** Make a workshop the actor's current one (they must belong to it). */
@@ -195,7 +212,8 @@ export function findInvitation(token: string) {
 export function acceptInvitation(actor: Actor, token: string) {
 	const found = findInvitation(token);
 	if (found.state === 'unknown') error(404, 'This invitation link is not known.');
-	if (found.state !== 'open') error(410, `This invitation is ${found.state}. Ask the owner for a new one.`);
+	if (found.state !== 'open')
+		error(410, `This invitation is ${found.state}. Ask the owner for a new one.`);
 	const inv = found.invitation;
 	if (inv.email !== actor.email.toLowerCase())
 		error(403, `This invitation was sent to ${inv.email}. Sign in with that address to accept it.`);
@@ -207,7 +225,9 @@ export function acceptInvitation(actor: Actor, token: string) {
 			.where(and(eq(memberships.userId, actor.id), eq(memberships.workshopId, inv.workshopId)))
 			.get();
 		if (!existing)
-			tx.insert(memberships).values({ userId: actor.id, workshopId: inv.workshopId, role: inv.role }).run();
+			tx.insert(memberships)
+				.values({ userId: actor.id, workshopId: inv.workshopId, role: inv.role })
+				.run();
 		tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, inv.id)).run();
 		tx.update(users).set({ currentWorkshopId: inv.workshopId }).where(eq(users.id, actor.id)).run();
 	});

@@ -18,10 +18,14 @@ process.env.SMTP_URL ??= `smtp://127.0.0.1:${mailPort}`;
 console.log(`Mail catcher on port ${mailPort}; caught mail at http://localhost:5173/dev/mail`);
 console.log(`Data folder: ${dataDir}`);
 
-const vite = spawn('npx', ['vite', 'dev', '--port', process.env.PORT ?? '5173', ...process.argv.slice(2)], {
-	stdio: 'inherit',
-	env: process.env
-});
+const vite = spawn(
+	'npx',
+	['vite', 'dev', '--port', process.env.PORT ?? '5173', ...process.argv.slice(2)],
+	{
+		stdio: 'inherit',
+		env: process.env
+	}
+);
 const stop = () => vite.kill('SIGTERM');
 process.on('SIGINT', stop);
 process.on('SIGTERM', stop);

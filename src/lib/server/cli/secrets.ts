@@ -11,7 +11,8 @@ export function ensureAuthSecret() {
 	if (process.env.AUTH_SECRET) return process.env.AUTH_SECRET;
 	mkdirSync(dataDir, { recursive: true });
 	const file = join(dataDir, '.auth-secret');
-	if (!existsSync(file)) writeFileSync(file, randomBytes(32).toString('base64url'), { mode: 0o600 });
+	if (!existsSync(file))
+		writeFileSync(file, randomBytes(32).toString('base64url'), { mode: 0o600 });
 	process.env.AUTH_SECRET = readFileSync(file, 'utf8').trim();
 	return process.env.AUTH_SECRET;
 }

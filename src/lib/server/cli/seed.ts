@@ -4,4 +4,6 @@ import { ensureAuthSecret } from './secrets';
 
 ensureAuthSecret();
 const result = await seedDemo();
-console.log(`Demo scenario seeded: workshop ${result.workshopId}, ${result.users.length} accounts.`);
+console.log(
+	`Demo scenario seeded: workshop ${result.workshopId}, ${result.users.length} accounts.`
+);

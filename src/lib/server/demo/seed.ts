@@ -42,7 +42,11 @@ export async function seedDemo() {
 
 	const created = [];
 	for (const account of DEMO_ACCOUNTS) {
-		const user = await createUser({ name: account.name, email: account.email, password: account.password });
+		const user = await createUser({
+			name: account.name,
+			email: account.email,
+			password: account.password
+		});
 		db.update(users).set({ emailVerified: new Date() }).where(eq(users.id, user.id)).run();
 		created.push({ ...account, id: user.id });
 	}
@@ -53,7 +57,9 @@ export async function seedDemo() {
 		.returning()
 		.get();
 	for (const member of created) {
-		db.insert(memberships).values({ userId: member.id, workshopId: shop.id, role: member.role }).run();
+		db.insert(memberships)
+			.values({ userId: member.id, workshopId: shop.id, role: member.role })
+			.run();
 		db.update(users).set({ currentWorkshopId: shop.id }).where(eq(users.id, member.id)).run();
 	}
 	// Dana is a client, not a builder: her shop is Quillfeather's, her own remains empty.
@@ -77,5 +83,9 @@ export async function seedDemo() {
 
 /** True when the demo scenario is already in the database. */
 export function demoIsSeeded() {
-	return !!getDb().select({ id: users.id }).from(users).where(eq(users.email, DEMO_ACCOUNTS[0].email)).get();
+	return !!getDb()
+		.select({ id: users.id })
+		.from(users)
+		.where(eq(users.email, DEMO_ACCOUNTS[0].email))
+		.get();
 }

@@ -1,3 +1,110 @@
+import {
+	projectCreateSchema,
+	projectListQuerySchema,
+	projectPatchSchema
+} from '$lib/schemas/project';
+import { workshopNameSchema } from '$lib/schemas/workshop';
 import type { ApiOperation } from './types';
 
-export const foundationOperations: ApiOperation[] = [];
+const signedIn = { 401: 'Not signed in' };
+const member = { ...signedIn, 404: 'No such workshop or project, or not a member' };
+
+// ---- health, workshops, projects ----
+const workshopAndProjectOperations: ApiOperation[] = [
+	{
+		method: 'get',
+		path: '/health',
+		tag: 'service',
+		summary: 'Whether the service and its database answer',
+		auth: 'none',
+		responses: { 200: 'Healthy' }
+	},
+	{
+		method: 'get',
+		path: '/workshops',
+		tag: 'workshops',
+		summary: "The actor's workshops with their role in each",
+		responses: { 200: 'Workshops', ...signedIn }
+	},
+	{
+		method: 'post',
+		path: '/workshops',
+		tag: 'workshops',
+		summary: 'Create a workshop owned by the actor',
+		body: workshopNameSchema,
+		responses: { 201: 'Created', 422: 'Invalid fields', ...signedIn }
+	},
+	{
+		method: 'get',
+		path: '/workshops/{id}',
+		tag: 'workshops',
+		summary: 'A workshop and its members',
+		responses: { 200: 'Workshop', ...member }
+	},
+	{
+		method: 'patch',
+		path: '/workshops/{id}',
+		tag: 'workshops',
+		summary: 'Rename a workshop (owner)',
+		body: workshopNameSchema,
+		responses: { 200: 'Renamed', 403: 'Owners only', 422: 'Invalid fields', ...member }
+	},
+	{
+		method: 'delete',
+		path: '/workshops/{id}',
+		tag: 'workshops',
+		summary: 'Delete a workshop and everything in it (owner)',
+		responses: {
+			204: 'Deleted',
+			403: 'Owners only',
+			409: 'A personal workshop cannot be deleted',
+			...member
+		}
+	},
+	{
+		method: 'get',
+		path: '/projects',
+		tag: 'projects',
+		summary: "A page of a workshop's projects, searched and sorted",
+		query: projectListQuerySchema,
+		responses: { 200: '{ items, total, page, perPage }', 422: 'Invalid query', ...member }
+	},
+	{
+		method: 'post',
+		path: '/projects',
+		tag: 'projects',
+		summary: 'Create a project (editor)',
+		body: projectCreateSchema,
+		responses: { 201: 'Created', 403: 'Editors only', 422: 'Invalid fields', ...member }
+	},
+	{
+		method: 'get',
+		path: '/projects/{id}',
+		tag: 'projects',
+		summary: 'A project, with the actor’s role',
+		responses: { 200: 'Project', ...member }
+	},
+	{
+		method: 'patch',
+		path: '/projects/{id}',
+		tag: 'projects',
+		summary: 'Change a project’s name, client or site notes (editor)',
+		body: projectPatchSchema,
+		responses: { 200: 'Changed', 403: 'Editors only', 422: 'Invalid fields', ...member }
+	},
+	{
+		method: 'delete',
+		path: '/projects/{id}',
+		tag: 'projects',
+		summary: 'Delete a project and its analyses (editor)',
+		responses: { 204: 'Deleted', 403: 'Editors only', ...member }
+	}
+];
+
+// ---- accounts (me, tokens): appended by the accounts work ----
+const accountOperations: ApiOperation[] = [];
+
+export const foundationOperations: ApiOperation[] = [
+	...workshopAndProjectOperations,
+	...accountOperations
+];

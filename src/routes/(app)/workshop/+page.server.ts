@@ -57,7 +57,13 @@ export const actions: Actions = {
 		const form = await superValidate(request, zod4(invitationSchema), { id: 'invite' });
 		if (!form.valid) return fail(400, { inviteForm: form });
 		const { token } = workshops.createInvitation(actor, ws.id, form.data.email, form.data.role);
-		await sendInvitation({ to: form.data.email, from: actor, workshopName: ws.name, role: form.data.role, link: `${url.origin}/invite/${token}` });
+		await sendInvitation({
+			to: form.data.email,
+			from: actor,
+			workshopName: ws.name,
+			role: form.data.role,
+			link: `${url.origin}/invite/${token}`
+		});
 		return message(form, `Invitation sent to ${form.data.email}.`);
 	},
 	role: async ({ locals, request }) => {

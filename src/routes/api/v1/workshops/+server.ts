@@ -5,7 +5,9 @@ import { api, readJson } from '$lib/server/http';
 import { createWorkshopFor, listWorkshops } from '$lib/server/workshops';
 import { workshopNameSchema } from '$lib/schemas/workshop';
 
-export const GET: RequestHandler = api(({ locals }) => json({ items: listWorkshops(requireActor(locals.actor)) }));
+export const GET: RequestHandler = api(({ locals }) =>
+	json({ items: listWorkshops(requireActor(locals.actor)) })
+);
 
 export const POST: RequestHandler = api(async ({ locals, request }) => {
 	const actor = requireActor(locals.actor);

@@ -1,0 +1,114 @@
+// Every API route that touches stored data × who is asking → the expected status.
+// anonymous: no actor; viewer/editor/owner: members of the workshop; outsider: a member of another.
+import { describe, expect, it } from 'vitest';
+import { useTempDb } from './support/db';
+import { event, makeWorkshopWithCast } from './support/actors';
+import * as workshopsApi from '../../src/routes/api/v1/workshops/+server';
+import * as workshopApi from '../../src/routes/api/v1/workshops/[id]/+server';
+import * as projectsApi from '../../src/routes/api/v1/projects/+server';
+import * as projectApi from '../../src/routes/api/v1/projects/[id]/+server';
+import { createProject } from '../../src/lib/server/projects';
+import type { Actor } from '../../src/lib/server/access';
+
+useTempDb();
+
+type Who = 'anonymous' | 'viewer' | 'editor' | 'owner' | 'outsider';
+type Cast = ReturnType<typeof makeWorkshopWithCast>;
+interface Row {
+	route: string;
+	call: (actor: Actor | null, cast: Cast, projectId: string) => Promise<Response>;
+	expect: Record<Who, number>;
+}
+
+const table: Row[] = [
+	{
+		route: 'GET /workshops',
+		call: (a) => workshopsApi.GET(event({ actor: a })),
+		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 200 }
+	},
+	{
+		route: 'POST /workshops',
+		call: (a) =>
+			workshopsApi.POST(event({ actor: a, method: 'POST', body: { name: 'Night class' } })),
+		expect: { anonymous: 401, viewer: 201, editor: 201, owner: 201, outsider: 201 }
+	},
+	{
+		route: 'GET /workshops/{id}',
+		call: (a, c) => workshopApi.GET(event({ actor: a, params: { id: c.workshopId } })),
+		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 404 }
+	},
+	{
+		route: 'PATCH /workshops/{id}',
+		call: (a, c) =>
+			workshopApi.PATCH(
+				event({
+					actor: a,
+					method: 'PATCH',
+					params: { id: c.workshopId },
+					body: { name: 'Renamed shop' }
+				})
+			),
+		expect: { anonymous: 401, viewer: 403, editor: 403, owner: 200, outsider: 404 }
+	},
+	{
+		route: 'DELETE /workshops/{id}',
+		call: (a, c) =>
+			workshopApi.DELETE(event({ actor: a, method: 'DELETE', params: { id: c.workshopId } })),
+		expect: { anonymous: 401, viewer: 403, editor: 403, owner: 204, outsider: 404 }
+	},
+	{
+		route: 'GET /projects',
+		call: (a, c) => projectsApi.GET(event({ actor: a, url: `/?workshop=${c.workshopId}` })),
+		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 404 }
+	},
+	{
+		route: 'POST /projects',
+		call: (a, c) =>
+			projectsApi.POST(
+				event({ actor: a, method: 'POST', body: { workshopId: c.workshopId, name: 'Wall unit' } })
+			),
+		expect: { anonymous: 401, viewer: 403, editor: 201, owner: 201, outsider: 404 }
+	},
+	{
+		route: 'GET /projects/{id}',
+		call: (a, _c, id) => projectApi.GET(event({ actor: a, params: { id } })),
+		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 404 }
+	},
+	{
+		route: 'PATCH /projects/{id}',
+		call: (a, _c, id) =>
+			projectApi.PATCH(
+				event({ actor: a, method: 'PATCH', params: { id }, body: { client: 'New client' } })
+			),
+		expect: { anonymous: 401, viewer: 403, editor: 200, owner: 200, outsider: 404 }
+	},
+	{
+		route: 'DELETE /projects/{id}',
+		call: (a, _c, id) => projectApi.DELETE(event({ actor: a, method: 'DELETE', params: { id } })),
+		expect: { anonymous: 401, viewer: 403, editor: 204, owner: 204, outsider: 404 }
+	}
+];
+
+const whos: Who[] = ['anonymous', 'viewer', 'editor', 'owner', 'outsider'];
+
+describe('authorization of every stored-data API route', () => {
+	for (const row of table)
+		for (const who of whos)
+			it(`${row.route} as ${who} → ${row.expect[who]}`, async () => {
+				// a fresh workshop and project per case, so a delete in one case cannot colour another
+				const cast = makeWorkshopWithCast();
+				const project = createProject(cast.owner, cast.workshopId, {
+					name: 'Bookcase',
+					client: '',
+					siteNotes: ''
+				});
+				const actor = who === 'anonymous' ? null : cast[who];
+				const res = await row.call(actor, cast, project.id);
+				expect(res.status).toBe(row.expect[who]);
+				if (res.status >= 400) {
+					const body = await res.json();
+					expect(typeof body.error).toBe('string');
+					expect(Array.isArray(body.issues)).toBe(true);
+				}
+			});
+});
