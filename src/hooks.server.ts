@@ -1,0 +1,58 @@
+import type { Handle, HandleServerError } from '@sveltejs/kit';
+import { sequence } from '@sveltejs/kit/hooks';
+import { dev } from '$app/environment';
+import { actorForUserId, actorFromBearer } from '$lib/server/accounts';
+import { authHandle } from '$lib/server/auth';
+
+/** Who is acting: an API token on /api/ requests, else the Auth.js session cookie. */
+export const actorHandle: Handle = async ({ event, resolve }) => {
+	event.locals.actor = null;
+	const authorization = event.request.headers.get('authorization');
+	if (authorization && event.url.pathname.startsWith('/api/')) {
+		// a bad or revoked token is anonymous, never a fallback to the cookie
+		event.locals.actor = actorFromBearer(authorization);
+	} else {
+		const session = await event.locals.auth();
+		const userId = session?.user?.id;
+		if (userId) event.locals.actor = actorForUserId(userId, 'session');
+	}
+	return resolve(event);
+};
+
+const SECURITY_HEADERS: Record<string, string> = {
+	'X-Content-Type-Options': 'nosniff',
+	'Referrer-Policy': 'strict-origin-when-cross-origin',
+	'X-Frame-Options': 'DENY',
+	'Permissions-Policy':
+		'camera=(), microphone=(), geolocation=(), payment=(), usb=(), interest-cohort=()',
+	'Cross-Origin-Opener-Policy': 'same-origin'
+};
+
+/** The usual security headers; the CSP itself comes from svelte.config.js. */
+export const securityHeaders: Handle = async ({ event, resolve }) => {
+	let response = await resolve(event);
+	const headers: Record<string, string> = { ...SECURITY_HEADERS };
+	if (!dev) headers['Strict-Transport-Security'] = 'max-age=63072000; includeSubDomains';
+	try {
+		for (const [name, value] of Object.entries(headers)) response.headers.set(name, value);
+	} catch {
+		// some responses (e.g. Response.redirect) have immutable headers: copy them
+		response = new Response(response.body, response);
+		for (const [name, value] of Object.entries(headers)) response.headers.set(name, value);
+	}
+	return response;
+};
+
+// Headers outermost, so Auth.js's own responses (it answers /auth/* itself) get them too.
+export const handle = sequence(securityHeaders, authHandle, actorHandle);
+
+/** Log unexpected errors with an id; the client sees only a plain message and that id. */
+export const handleError: HandleServerError = ({ error, event, status, message }) => {
+	const id = crypto.randomUUID();
+	if (status !== 404) console.error(`[${id}] ${event.request.method} ${event.url.pathname}`, error);
+	return {
+		message:
+			status === 404 ? 'Not found.' : status >= 500 ? 'Something went wrong on our side.' : message,
+		id
+	};
+};

@@ -1,0 +1,170 @@
+import { DrizzleAdapter } from '@auth/drizzle-adapter';
+import { CredentialsSignin, SvelteKitAuth, type SvelteKitAuthConfig } from '@auth/sveltekit';
+import Credentials from '@auth/sveltekit/providers/credentials';
+import Nodemailer from '@auth/sveltekit/providers/nodemailer';
+import { isRedirect, type RequestEvent } from '@sveltejs/kit';
+import { dev } from '$app/environment';
+import { env } from '$env/dynamic/private';
+import { signInSchema } from '$lib/schemas/account';
+import { findUserByEmail, passwordSignIn, throttleMessage } from './accounts';
+import { getDb } from './db';
+import { accounts, sessions, users, verificationTokens } from './db/schema';
+import { linkOrigin, mailFrom, sendSignInLink, smtpUrl } from './mail';
+
+/** Thrown by the password check when the throttle refuses; carries the wait for the message. */
+export class SignInThrottled extends CredentialsSignin {
+	code = 'throttled';
+	constructor(readonly retryAfterMinutes: number) {
+		super(throttleMessage(retryAfterMinutes));
+	}
+}
+
+export const SIGN_IN_LINK_MAX_AGE_S = 60 * 60;
+
+const DEV_SECRET = 'spanwright-dev-only-secret-never-use-in-production';
+let warnedDevSecret = false;
+
+function authSecret(): string {
+	const secret = env.AUTH_SECRET || process.env.AUTH_SECRET;
+	if (secret) return secret;
+	if (!dev)
+		throw new Error(
+			'AUTH_SECRET is not set. Spanwright signs its session cookies with it: generate one with ' +
+				'`openssl rand -base64 33` and set AUTH_SECRET in the environment before starting the server.'
+		);
+	if (!warnedDevSecret) {
+		warnedDevSecret = true;
+		console.warn('AUTH_SECRET is not set; using a fixed development secret (dev only).');
+	}
+	return DEV_SECRET;
+}
+
+/** Auth.js puts the request's host into the link; mail it with our configured origin instead. */
+function rebase(url: string, event: RequestEvent) {
+	const u = new URL(url);
+	const origin = new URL(linkOrigin(event.url));
+	u.protocol = origin.protocol;
+	u.host = origin.host;
+	return u.toString();
+}
+
+// Built per request (SvelteKitAuth accepts a function of the event), so nothing opens the database at
+// build time, and the password check knows the client's address for throttling.
+async function authConfig(event: RequestEvent): Promise<SvelteKitAuthConfig> {
+	return {
+		secret: authSecret(),
+		trustHost: true,
+		session: { strategy: 'jwt', maxAge: 30 * 24 * 60 * 60 },
+		adapter: DrizzleAdapter(getDb(), {
+			usersTable: users,
+			accountsTable: accounts,
+			sessionsTable: sessions,
+			verificationTokensTable: verificationTokens
+		}),
+		pages: { signIn: '/signin', error: '/signin', verifyRequest: '/signin', signOut: '/signout' },
+		providers: [
+			Credentials({
+				id: 'credentials',
+				credentials: { email: {}, password: {} },
+				async authorize(credentials) {
+					const parsed = signInSchema.pick({ email: true, password: true }).safeParse(credentials);
+					if (!parsed.success) return null;
+					const result = await passwordSignIn(parsed.data, event.getClientAddress());
+					if (result.ok) return result.user;
+					if (result.reason === 'throttled') throw new SignInThrottled(result.retryAfterMinutes);
+					return null;
+				}
+			}),
+			Nodemailer({
+				server: smtpUrl(),
+				from: mailFrom(),
+				maxAge: SIGN_IN_LINK_MAX_AGE_S,
+				async sendVerificationRequest({ identifier, url }) {
+					await sendSignInLink(identifier, rebase(url, event));
+				}
+			})
+		],
+		callbacks: {
+			// Links go only to existing accounts; sign-up (with a name and a password) makes accounts.
+			signIn({ account, email, user }) {
+				if (account?.provider === 'nodemailer' && email?.verificationRequest)
+					return Boolean(user.email && findUserByEmail(user.email));
+				return true;
+			},
+			session({ session, token }) {
+				if (token.sub && session.user) session.user.id = token.sub;
+				return session;
+			}
+		}
+	};
+}
+
+export const { handle: authHandle, signIn, signOut } = SvelteKitAuth(authConfig);
+
+type AuthAction = typeof signIn;
+
+// Auth.js's form actions read the request body themselves; ours already read it (superforms), so
+// hand them a fresh request with just the fields they need, and catch the redirect they throw.
+async function runAuthAction(
+	action: AuthAction,
+	event: RequestEvent,
+	fields: Record<string, string>
+) {
+	const headers = new Headers(event.request.headers);
+	headers.delete('content-type');
+	headers.delete('content-length');
+	const request = new Request(event.request.url, {
+		method: 'POST',
+		headers,
+		body: new URLSearchParams(fields)
+	});
+	try {
+		await action({ ...event, request } as RequestEvent);
+	} catch (e) {
+		if (isRedirect(e)) return e.location;
+		throw e;
+	}
+	throw new Error('Auth.js finished without a redirect');
+}
+
+export type PasswordSignInOutcome =
+	{ ok: true; location: string } | { ok: false; status: 400 | 429; message: string };
+
+/** Sign in with e-mail and password through Auth.js (sets the session cookie on success). */
+export async function signInWithPassword(
+	event: RequestEvent,
+	input: { email: string; password: string; redirectTo: string }
+): Promise<PasswordSignInOutcome> {
+	try {
+		const location = await runAuthAction(signIn, event, { providerId: 'credentials', ...input });
+		return { ok: true, location };
+	} catch (e) {
+		if (e instanceof SignInThrottled) return { ok: false, status: 429, message: e.message };
+		if (e instanceof CredentialsSignin)
+			return {
+				ok: false,
+				status: 400,
+				message: 'That e-mail and password do not match an account.'
+			};
+		throw e;
+	}
+}
+
+/** Mail a sign-in link through Auth.js's e-mail provider. Quietly does nothing for unknown addresses. */
+export async function sendSignInLinkFor(
+	event: RequestEvent,
+	input: { email: string; redirectTo: string }
+) {
+	try {
+		await runAuthAction(signIn, event, { providerId: 'nodemailer', ...input });
+	} catch (e) {
+		// AccessDenied from the signIn callback: no account under that address
+		if (e instanceof Error && 'type' in e && e.type === 'AccessDenied') return;
+		throw e;
+	}
+}
+
+/** Clear the session cookie through Auth.js. */
+export async function signOutOf(event: RequestEvent) {
+	await runAuthAction(signOut, event, { redirectTo: '/' });
+}

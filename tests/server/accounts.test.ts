@@ -1,0 +1,170 @@
+import { eq } from 'drizzle-orm';
+import { describe, expect, it } from 'vitest';
+import {
+	AccountExistsError,
+	createUser,
+	passwordSignIn,
+	REFUSE_AFTER_FAILURES,
+	requestPasswordReset,
+	resetPassword,
+	resetTokenIsLive,
+	setLengthUnit,
+	signInGate,
+	PASSWORD_RESET_TTL_MS,
+	verifyPassword,
+	actorForUserId,
+	getProfile
+} from '../../src/lib/server/accounts';
+import { latestMailTo, waitForMailTo } from '../../src/lib/server/dev/caught-mail';
+import { schema } from '../../src/lib/server/db';
+import { listWorkshops } from '../../src/lib/server/workshops';
+import { useTempDb } from './support/db';
+import { useMailCatcher } from './support/mail';
+
+const db = useTempDb();
+const mail = useMailCatcher();
+
+describe('sign-up', () => {
+	it('creates the user and their personal workshop, owned by them', async () => {
+		const user = await createUser({
+			name: 'Ada Joiner',
+			email: ' Ada@Shop.example ',
+			password: 'long enough words'
+		});
+		expect(user.email).toBe('ada@shop.example');
+		const actor = actorForUserId(user.id)!;
+		const workshops = listWorkshops(actor);
+		expect(workshops).toHaveLength(1);
+		expect(workshops[0]).toMatchObject({
+			personal: true,
+			role: 'owner',
+			name: 'Ada Joiner’s workshop'
+		});
+		const row = db().db.select().from(schema.users).where(eq(schema.users.id, user.id)).get()!;
+		expect(row.currentWorkshopId).toBe(workshops[0].id);
+	});
+
+	it('stores an argon2id hash, not the password', async () => {
+		const user = await createUser({
+			name: 'Ben',
+			email: 'ben@shop.example',
+			password: 'plain words here'
+		});
+		const row = db().db.select().from(schema.users).where(eq(schema.users.id, user.id)).get()!;
+		expect(row.passwordHash).not.toContain('plain words here');
+		expect(row.passwordHash).toMatch(/^\$argon2id\$/);
+	});
+
+	it('refuses a second account under the same address', async () => {
+		await expect(
+			createUser({ name: 'Ada again', email: 'ADA@shop.example', password: 'another password' })
+		).rejects.toBeInstanceOf(AccountExistsError);
+	});
+});
+
+describe('password check', () => {
+	it('accepts the right password and refuses a wrong one or an unknown address', async () => {
+		expect(await verifyPassword('ada@shop.example', 'long enough words')).toMatchObject({
+			email: 'ada@shop.example'
+		});
+		expect(await verifyPassword('ada@shop.example', 'long enough word')).toBeNull();
+		expect(await verifyPassword('nobody@shop.example', 'long enough words')).toBeNull();
+	});
+});
+
+describe('failed sign-in throttle', () => {
+	it('slows after 3 failures and refuses after 5 within 15 minutes, even the right password', async () => {
+		await createUser({ name: 'Cy', email: 'cy@shop.example', password: 'correct horse staple' });
+		const wrong = { email: 'cy@shop.example', password: 'wrong guess' };
+		for (let i = 1; i <= REFUSE_AFTER_FAILURES; i++) {
+			const r = await passwordSignIn(wrong, '203.0.113.7');
+			expect(r).toEqual({ ok: false, reason: 'wrong' });
+			if (i === 3) expect(signInGate(wrong.email, '203.0.113.7').state).toBe('slow');
+		}
+		const refused = await passwordSignIn(
+			{ ...wrong, password: 'correct horse staple' },
+			'198.51.100.2'
+		);
+		expect(refused).toEqual({ ok: false, reason: 'throttled', retryAfterMinutes: 15 });
+		// 15 minutes after the first failure the oldest one has left the window
+		expect(
+			signInGate(wrong.email, '198.51.100.2', Date.now() + 15 * 60 * 1000 + 1000).state
+		).not.toBe('refused');
+	});
+
+	it('a success clears the count for that address', async () => {
+		await createUser({ name: 'Di', email: 'di@shop.example', password: 'correct horse staple' });
+		await passwordSignIn({ email: 'di@shop.example', password: 'nope nope' }, '192.0.2.1');
+		expect(
+			(
+				await passwordSignIn(
+					{ email: 'di@shop.example', password: 'correct horse staple' },
+					'192.0.2.1'
+				)
+			).ok
+		).toBe(true);
+		expect(signInGate('di@shop.example', '192.0.2.9').state).toBe('open');
+	});
+});
+
+describe('password reset', () => {
+	it('mails a one-time link that sets the new password once', async () => {
+		const sent = new Date();
+		await requestPasswordReset('ben@shop.example', 'http://localhost:5173');
+		const message = await waitForMailTo('ben@shop.example', { dir: mail.dir, after: sent });
+		expect(message.subject).toMatch(/new Spanwright password/);
+		const link = message.links.find((l) => l.startsWith('http://localhost:5173/reset/'))!;
+		expect(link).toBeTruthy();
+		const token = link.split('/reset/')[1];
+		expect(resetTokenIsLive(token)).toBe(true);
+		expect(await resetPassword(token, 'a fresh passphrase')).toBe(true);
+		expect(await verifyPassword('ben@shop.example', 'a fresh passphrase')).not.toBeNull();
+		expect(await verifyPassword('ben@shop.example', 'plain words here')).toBeNull();
+		// the same link a second time does nothing
+		expect(await resetPassword(token, 'yet another passphrase')).toBe(false);
+		expect(await verifyPassword('ben@shop.example', 'a fresh passphrase')).not.toBeNull();
+	});
+
+	it('stores only the sha-256 of the token', async () => {
+		const sent = new Date();
+		await requestPasswordReset('ada@shop.example', 'http://localhost:5173');
+		const token = (
+			await waitForMailTo('ada@shop.example', { dir: mail.dir, after: sent })
+		).links[0].split('/reset/')[1];
+		const rows = db().db.select().from(schema.passwordResets).all();
+		expect(rows.some((r) => r.tokenHash === token)).toBe(false);
+		expect(rows.every((r) => /^[0-9a-f]{64}$/.test(r.tokenHash))).toBe(true);
+	});
+
+	it('a link older than one hour no longer works', async () => {
+		const sent = new Date();
+		await requestPasswordReset('di@shop.example', 'http://localhost:5173');
+		const token = (
+			await waitForMailTo('di@shop.example', { dir: mail.dir, after: sent, subject: /password/ })
+		).links[0].split('/reset/')[1];
+		const later = Date.now() + PASSWORD_RESET_TTL_MS + 1000;
+		expect(resetTokenIsLive(token, later)).toBe(false);
+		expect(await resetPassword(token, 'too late passphrase', later)).toBe(false);
+		expect(await verifyPassword('di@shop.example', 'correct horse staple')).not.toBeNull();
+	});
+
+	it('sends nothing for an address without an account', async () => {
+		await requestPasswordReset('ghost@shop.example', 'http://localhost:5173');
+		await new Promise((r) => setTimeout(r, 200));
+		expect(latestMailTo('ghost@shop.example', mail.dir)).toBeNull();
+	});
+});
+
+describe('length unit preference', () => {
+	it('is frac16 at first and keeps what the user picks', async () => {
+		const user = await createUser({
+			name: 'Eve',
+			email: 'eve@shop.example',
+			password: 'metric person here'
+		});
+		const actor = actorForUserId(user.id)!;
+		expect(getProfile(actor).lengthUnit).toBe('frac16');
+		setLengthUnit(actor, 'mm');
+		expect(getProfile(actor).lengthUnit).toBe('mm');
+	});
+});
