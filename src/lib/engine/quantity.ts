@@ -1,0 +1,183 @@
+/**
+ * Forces, pressures, line loads, moduli, densities and moments as mathjs unit strings
+ * (`40 lbf/ft^2`, `1.9 kPa`, `1.8e6 psi`). Read once at the edge; the numeric core sees SI numbers.
+ */
+import { create, unitDependencies, type Unit } from 'mathjs';
+import { QuantityError, parseLength } from './length';
+
+// Only the unit machinery: a small slice of mathjs, created on first use.
+let math: { unit: (text: string) => Unit } | undefined;
+function mathUnit(text: string): Unit {
+	math ??= create({ unitDependencies }) as unknown as { unit: (text: string) => Unit };
+	return math.unit(text);
+}
+
+/** Standard acceleration of gravity, exact by definition (3rd CGPM, 1901): 9.80665 m/s². */
+export const STANDARD_GRAVITY = 9.80665;
+/** 1 lbf = 4.4482216152605 N (exact, from the pound and standard gravity). */
+export const NEWTONS_PER_LBF = 4.4482216152605;
+/** 1 psi = 1 lbf/in² = 6894.757293168 Pa. */
+export const PASCALS_PER_PSI = NEWTONS_PER_LBF / 0.0254 ** 2;
+export const PASCALS_PER_PSF = PASCALS_PER_PSI / 144;
+export const NEWTONS_PER_METRE_PER_PLF = NEWTONS_PER_LBF / 0.3048;
+export const KG_PER_M3_PER_PCF = 0.45359237 / 0.3048 ** 3;
+
+export type QuantityKind =
+	'length' | 'force' | 'pressure' | 'lineLoad' | 'modulus' | 'density' | 'moment';
+
+interface KindInfo {
+	si: string;
+	/** the mass-based unit whose weight is meant (`50 kg` of books is a force of 50·g) */
+	massBased?: string;
+	expected: string;
+}
+
+const KINDS: Record<Exclude<QuantityKind, 'length'>, KindInfo> = {
+	force: { si: 'N', massBased: 'kg', expected: 'a force such as 200 lbf, 450 N or 20 kg' },
+	pressure: {
+		si: 'Pa',
+		massBased: 'kg/m^2',
+		expected: 'an area load such as 40 lbf/ft^2, 40 psf or 1.9 kPa'
+	},
+	lineLoad: {
+		si: 'N/m',
+		massBased: 'kg/m',
+		expected: 'a load along the shelf such as 20 lbf/ft, 20 plf or 300 N/m'
+	},
+	modulus: { si: 'Pa', expected: 'a stiffness or strength such as 1.8e6 psi, 12 GPa or 12400 MPa' },
+	density: { si: 'kg/m^3', expected: 'a density such as 700 kg/m^3 or 40 lb/ft^3' },
+	moment: { si: 'N m', expected: 'a moment such as 500 lbf in or 60 N m' }
+};
+
+export function expectedFor(kind: QuantityKind): string {
+	return kind === 'length' ? 'a length such as 35 1/2", 900 mm or 0.9 m' : KINDS[kind].expected;
+}
+
+/** Trade shorthands mathjs does not know, and typographic marks. */
+function normalise(text: string): string {
+	return text
+		.trim()
+		.replace(/²/g, '^2')
+		.replace(/³/g, '^3')
+		.replace(/[·×*]/g, ' ')
+		.replace(/(\d),(\d{3})/g, '$1$2')
+		.replace(/\bpsf\b/g, 'lbf/ft^2')
+		.replace(/\bplf\b/g, 'lbf/ft')
+		.replace(/\bpcf\b/g, 'lb/ft^3')
+		.replace(/\bksi\b/g, 'kip/in^2')
+		.replace(/\blbs\b/g, 'lb')
+		.replace(/\bpounds?\b/g, 'lb');
+}
+
+function tryUnit(text: string): Unit | undefined {
+	try {
+		return mathUnit(text);
+	} catch {
+		return undefined;
+	}
+}
+
+/**
+ * Parse a quantity of the given kind to SI (N, Pa, N/m, Pa, kg/m³, N·m, m). A number is taken as
+ * already SI. `lb` and `kg` in a force-like quantity mean their weight under standard gravity.
+ * Throws QuantityError naming what was expected.
+ */
+export function parseQuantity(input: string | number, kind: QuantityKind): number {
+	if (kind === 'length') return parseLength(input);
+	const info = KINDS[kind];
+	if (typeof input === 'number') {
+		if (Number.isFinite(input)) return input;
+		throw new QuantityError(input, info.expected);
+	}
+	if (typeof input !== 'string' || input.trim() === '')
+		throw new QuantityError(input, info.expected);
+	const text = normalise(input);
+	if (/^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i.test(text)) return Number(text);
+	const u = tryUnit(text);
+	if (!u || u.value === null) throw new QuantityError(input, info.expected);
+	let value: number | undefined;
+	if (u.equalBase(mathUnit(info.si))) value = u.toNumber(info.si);
+	else if (info.massBased && u.equalBase(mathUnit(info.massBased)))
+		value = u.toNumber(info.massBased) * STANDARD_GRAVITY;
+	if (value === undefined || !Number.isFinite(value)) throw new QuantityError(input, info.expected);
+	return value;
+}
+
+/** parseQuantity without a throw. */
+export function tryParseQuantity(
+	input: string | number,
+	kind: QuantityKind
+): { ok: true; value: number } | { ok: false; expected: string } {
+	try {
+		return { ok: true, value: parseQuantity(input, kind) };
+	} catch {
+		return { ok: false, expected: expectedFor(kind) };
+	}
+}
+
+/** Round to significant digits and write without exponent: 1820000, 40, 1.9, 0.0123. */
+export function formatNumber(value: number, significant = 3): string {
+	if (!Number.isFinite(value)) return '—';
+	if (value === 0) return '0';
+	const rounded = Number(value.toPrecision(significant));
+	return rounded.toLocaleString('en-US', { maximumFractionDigits: 12, useGrouping: false });
+}
+
+const FORCE_UNITS = { lbf: NEWTONS_PER_LBF, N: 1, kN: 1000 } as const;
+const PRESSURE_UNITS = {
+	'lbf/ft²': PASCALS_PER_PSF,
+	psi: PASCALS_PER_PSI,
+	Pa: 1,
+	kPa: 1e3,
+	MPa: 1e6,
+	GPa: 1e9
+} as const;
+const LINE_LOAD_UNITS = { 'lbf/ft': NEWTONS_PER_METRE_PER_PLF, 'N/m': 1, 'kN/m': 1000 } as const;
+const MOMENT_UNITS = {
+	'lbf·in': NEWTONS_PER_LBF * 0.0254,
+	'lbf·ft': NEWTONS_PER_LBF * 0.3048,
+	'N·m': 1
+} as const;
+const DENSITY_UNITS = { 'kg/m³': 1, 'lb/ft³': KG_PER_M3_PER_PCF } as const;
+
+export type ForceUnit = keyof typeof FORCE_UNITS;
+export type PressureUnit = keyof typeof PRESSURE_UNITS;
+export type LineLoadUnit = keyof typeof LINE_LOAD_UNITS;
+export type MomentUnit = keyof typeof MOMENT_UNITS;
+export type DensityUnit = keyof typeof DENSITY_UNITS;
+
+interface Format<U> {
+	unit?: U;
+	/** significant digits (default 3) */
+	digits?: number;
+}
+
+function formatIn(si: number, factor: number, unit: string, digits = 3): string {
+	return `${formatNumber(si / factor, digits)} ${unit}`;
+}
+
+/** `200 lbf`, `890 N`, `0.89 kN` (from newtons). */
+export function formatForce(newtons: number, f: Format<ForceUnit> = {}): string {
+	const unit = f.unit ?? 'lbf';
+	return formatIn(newtons, FORCE_UNITS[unit], unit, f.digits);
+}
+/** `40 lbf/ft²`, `1.92 kPa`, `1820000 psi`, `12.5 GPa` (from pascals; also for moduli). */
+export function formatPressure(pascals: number, f: Format<PressureUnit> = {}): string {
+	const unit = f.unit ?? 'lbf/ft²';
+	return formatIn(pascals, PRESSURE_UNITS[unit], unit, f.digits);
+}
+/** `20 lbf/ft`, `292 N/m` (from N/m). */
+export function formatLineLoad(newtonsPerMetre: number, f: Format<LineLoadUnit> = {}): string {
+	const unit = f.unit ?? 'lbf/ft';
+	return formatIn(newtonsPerMetre, LINE_LOAD_UNITS[unit], unit, f.digits);
+}
+/** `550 lbf·in`, `62.1 N·m` (from N·m). */
+export function formatMoment(newtonMetres: number, f: Format<MomentUnit> = {}): string {
+	const unit = f.unit ?? 'lbf·in';
+	return formatIn(newtonMetres, MOMENT_UNITS[unit], unit, f.digits);
+}
+/** `700 kg/m³`, `43.7 lb/ft³` (from kg/m³). */
+export function formatDensity(kgPerM3: number, f: Format<DensityUnit> = {}): string {
+	const unit = f.unit ?? 'kg/m³';
+	return formatIn(kgPerM3, DENSITY_UNITS[unit], unit, f.digits);
+}

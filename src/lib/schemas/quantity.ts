@@ -1,0 +1,68 @@
+/**
+ * Zod fields for quantities: each accepts a quantity string (`35 1/2"`, `40 lbf/ft^2`) or a number
+ * in SI units and yields the SI number, with an issue that says what was expected.
+ */
+import { z } from 'zod';
+import { expectedFor, tryParseQuantity, type QuantityKind } from '../engine/units';
+
+export type Bound = 'positive' | 'nonnegative' | 'any';
+
+export interface QuantityFieldOptions {
+	bound?: Bound;
+	/** largest sensible value in SI units (guards against typos such as 900 m for 900 mm) */
+	max?: number;
+	description?: string;
+}
+
+const SI_NAME: Record<QuantityKind, string> = {
+	length: 'metres',
+	force: 'newtons',
+	pressure: 'pascals',
+	lineLoad: 'newtons per metre',
+	modulus: 'pascals',
+	density: 'kilograms per cubic metre',
+	moment: 'newton metres'
+};
+
+/** A quantity of the given kind: string or SI number in, SI number out. */
+export function quantityField(kind: QuantityKind, options: QuantityFieldOptions = {}) {
+	const expected = expectedFor(kind);
+	const bound = options.bound ?? 'positive';
+	return z
+		.union([z.string().max(60), z.number()], {
+			error: `Expected ${expected} (a number is ${SI_NAME[kind]}).`
+		})
+		.transform((input, ctx) => {
+			const read = tryParseQuantity(input, kind);
+			if (!read.ok) {
+				ctx.addIssue({ code: 'custom', input, message: `Expected ${read.expected}.` });
+				return z.NEVER;
+			}
+			const value = read.value;
+			if (bound === 'positive' && !(value > 0)) {
+				ctx.addIssue({ code: 'custom', input, message: 'Must be greater than zero.' });
+				return z.NEVER;
+			}
+			if (bound === 'nonnegative' && !(value >= 0)) {
+				ctx.addIssue({ code: 'custom', input, message: 'Must not be negative.' });
+				return z.NEVER;
+			}
+			if (options.max !== undefined && Math.abs(value) > options.max) {
+				ctx.addIssue({
+					code: 'custom',
+					input,
+					message: `Too large: at most ${options.max} ${SI_NAME[kind]}. Check the unit.`
+				});
+				return z.NEVER;
+			}
+			return value;
+		})
+		.meta({
+			description: options.description ?? `${expected}; a plain number is ${SI_NAME[kind]}`
+		});
+}
+
+/** A length: string such as `35 1/2"` or `900 mm`, or a number of metres. */
+export function lengthField(options: QuantityFieldOptions = {}) {
+	return quantityField('length', options);
+}

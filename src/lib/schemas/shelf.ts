@@ -1,0 +1,229 @@
+/**
+ * The shelf request, once: used by the engine (analyzeShelf and the solvers), the API routes and
+ * the forms. Quantities arrive as strings or SI numbers and leave as SI numbers.
+ */
+import { z } from 'zod';
+import { lengthField, quantityField } from './quantity';
+
+/** Guards against unit slips (e.g. 900 m meant as 900 mm); no shelf is this large. */
+const MAX_SPAN_M = 10;
+const MAX_DEPTH_M = 2;
+const MAX_THICKNESS_M = 0.3;
+
+const positiveLength = (max: number, description?: string) =>
+	lengthField({ bound: 'positive', max, description });
+const position = (description: string) =>
+	lengthField({ bound: 'nonnegative', max: MAX_SPAN_M * 12, description });
+
+export const customMaterialSchema = z.object({
+	name: z.string().trim().min(1).max(80),
+	/** modulus of elasticity with the grain (or of the panel's face grain) */
+	modulus: quantityField('modulus', { max: 1e11 }),
+	/** modulus across the grain; when absent the material is taken as the same both ways */
+	modulusAcross: quantityField('modulus', { max: 1e11 }).optional(),
+	/** modulus of rupture (bending strength) */
+	rupture: quantityField('modulus', { max: 1e10 }),
+	density: quantityField('density', { max: 3000 }),
+	shearModulus: quantityField('modulus', { max: 1e11 }).optional(),
+	/** long-term sag over instant sag under permanent load, e.g. 1.6 (at least 1) */
+	creepFactor: z.number().min(1).max(10).optional()
+});
+
+/** A library id (see GET /api/v1/materials) or a material given by its figures. */
+export const materialSchema = z.union([z.string().trim().min(1).max(60), customMaterialSchema]);
+
+export const supportSchema = z.union([
+	z.enum(['simple', 'fixed', 'cantilever']),
+	z.object({
+		/** lengths of the spans, left to right, between supports (a shelf over dividers) */
+		spans: z.array(positiveLength(MAX_SPAN_M)).min(2).max(12),
+		/** how the two outer ends are held (default: simply supported) */
+		ends: z.enum(['simple', 'fixed']).default('simple')
+	})
+]);
+
+export const areaLoadSchema = z.object({
+	kind: z.literal('area'),
+	/** over the whole top of the shelf, e.g. `40 lbf/ft^2` */
+	pressure: quantityField('pressure', { bound: 'nonnegative', max: 1e6 })
+});
+export const lineLoadSchema = z.object({
+	kind: z.literal('line'),
+	/** along the shelf, e.g. `20 lbf/ft` */
+	intensity: quantityField('lineLoad', { bound: 'nonnegative', max: 1e7 }),
+	from: position('start, measured from the left end (the wall for a cantilever)').optional(),
+	to: position('end, measured from the left end (the wall for a cantilever)').optional()
+});
+export const pointLoadSchema = z.object({
+	kind: z.literal('point'),
+	force: quantityField('force', { bound: 'nonnegative', max: 1e6 }),
+	at: position('position, measured from the left end (the wall for a cantilever)')
+});
+export const loadSchema = z.discriminatedUnion('kind', [
+	areaLoadSchema,
+	lineLoadSchema,
+	pointLoadSchema
+]);
+
+export const edgeSchema = z.object({
+	/** front or back: glued to that edge, top flush with the panel; below: a cleat under it */
+	side: z.enum(['front', 'back', 'below']),
+	material: materialSchema,
+	/** vertical size of the strip */
+	height: positiveLength(0.5),
+	/** horizontal size of the strip, across the shelf's depth */
+	thickness: positiveLength(0.3)
+});
+
+export const namedLimits = ['L/144', 'L/240', 'L/360', '1/16in-per-ft', '0.02in-per-ft'] as const;
+export const limitSchema = z.union([
+	z.enum(namedLimits),
+	z.object({ ratio: z.number().min(10).max(10000) }),
+	z.object({ length: positiveLength(1) })
+]);
+
+export const optionsSchema = z.object({
+	/** add shear deflection to bending (default true) */
+	shearDeflection: z.boolean().default(true),
+	/** divide the modulus of rupture by this to get the allowed bending stress (default 3) */
+	safetyFactor: z.number().min(1).max(20).default(3),
+	/** points on the deflected curve (default 101) */
+	curvePoints: z.number().int().min(101).max(2001).default(101)
+});
+
+const baseShape = {
+	span: positiveLength(MAX_SPAN_M, 'clear span between supports (or the reach of a cantilever)'),
+	depth: positiveLength(MAX_DEPTH_M, 'front-to-back depth of the panel'),
+	thickness: positiveLength(MAX_THICKNESS_M, 'actual thickness of the panel'),
+	material: materialSchema,
+	/** face grain (or wood grain) along the span or across it */
+	grain: z.enum(['along', 'across']).default('along'),
+	support: supportSchema.default('simple'),
+	loads: z.array(loadSchema).max(50).default([]),
+	selfWeight: z.boolean().default(true),
+	edges: z.array(edgeSchema).max(3).default([]),
+	/** long: the loads stay for months or years (books), so creep counts; short: brief loads */
+	duration: z.enum(['short', 'long']).default('long'),
+	/** dry: heated indoor room; humid: unheated or damp room; wet: exposed to weather */
+	service: z.enum(['dry', 'humid', 'wet']).default('dry'),
+	limit: limitSchema.default('L/144'),
+	options: optionsSchema.default({ shearDeflection: true, safetyFactor: 3, curvePoints: 101 })
+};
+
+const baseSchema = z.object({ ...baseShape, span: baseShape.span.optional() });
+interface GeometryView {
+	span?: number;
+	support: z.output<typeof supportSchema>;
+	loads: z.output<typeof loadSchema>[];
+	edges: { side: string }[];
+}
+
+/** Checks that need several fields at once; every issue names its field. */
+function checkGeometry(value: GeometryView, ctx: z.RefinementCtx, spanNeeded: boolean) {
+	const spans = typeof value.support === 'object' ? value.support.spans : undefined;
+	const total = spans ? spans.reduce((a, b) => a + b, 0) : value.span;
+	if (spans && value.span !== undefined && Math.abs(value.span - (total ?? 0)) > 0.001)
+		ctx.addIssue({
+			code: 'custom',
+			path: ['span'],
+			message: 'The span must equal the sum of the spans, or be left out.'
+		});
+	if (spanNeeded && total === undefined)
+		ctx.addIssue({ code: 'custom', path: ['span'], message: 'Expected the span of the shelf.' });
+	const sides = new Set<string>();
+	value.edges.forEach((edge, i) => {
+		if (sides.has(edge.side))
+			ctx.addIssue({
+				code: 'custom',
+				path: ['edges', i, 'side'],
+				message: `Only one ${edge.side} strip is allowed.`
+			});
+		sides.add(edge.side);
+	});
+	if (total === undefined) return;
+	value.loads.forEach((load, i) => {
+		const inside = (x: number | undefined, key: string) => {
+			if (x !== undefined && x > total + 1e-9)
+				ctx.addIssue({
+					code: 'custom',
+					path: ['loads', i, key],
+					message: 'Must lie on the shelf: at most the span from the left end.'
+				});
+		};
+		if (load.kind === 'point') inside(load.at, 'at');
+		if (load.kind === 'line') {
+			inside(load.from, 'from');
+			inside(load.to, 'to');
+			if (load.from !== undefined && load.to !== undefined && load.to <= load.from)
+				ctx.addIssue({
+					code: 'custom',
+					path: ['loads', i, 'to'],
+					message: 'The end of a line load must lie beyond its start.'
+				});
+		}
+	});
+}
+
+/** analyzeShelf and POST /api/v1/shelf */
+export const shelfRequestSchema = baseSchema.superRefine((v, ctx) => checkGeometry(v, ctx, true));
+
+/** maxSpan: the span is what is sought (for several spans, their proportions are kept) */
+export const maxSpanRequestSchema = z
+	.object({ ...baseShape, span: baseShape.span.optional() })
+	.superRefine((v, ctx) => checkGeometry({ ...v, span: undefined }, ctx, false));
+
+/** minThickness: the thickness is what is sought, from the stocked or the given thicknesses */
+export const minThicknessRequestSchema = z
+	.object({
+		...baseShape,
+		span: baseShape.span.optional(),
+		thickness: baseShape.thickness.optional(),
+		candidates: z.array(positiveLength(MAX_THICKNESS_M)).min(1).max(40).optional()
+	})
+	.superRefine((v, ctx) => checkGeometry(v, ctx, true));
+
+/** minEdge: the smallest height of a strip of given thickness and material that meets the limit */
+export const minEdgeRequestSchema = z
+	.object({
+		...baseShape,
+		span: baseShape.span.optional(),
+		strip: edgeSchema.omit({ height: true }).extend({
+			side: z.enum(['front', 'back', 'below']).default('front'),
+			/** tallest strip worth trying (default 6") */
+			maxHeight: positiveLength(0.5).optional()
+		})
+	})
+	.superRefine((v, ctx) => checkGeometry(v, ctx, true));
+
+/** maxLoad: the largest magnitude of one load of the given shape (other loads stay as given) */
+export const maxLoadRequestSchema = z
+	.object({
+		...baseShape,
+		span: baseShape.span.optional(),
+		load: z.discriminatedUnion('kind', [
+			z.object({ kind: z.literal('area') }),
+			z.object({ kind: z.literal('line'), from: areaFree('from'), to: areaFree('to') }),
+			z.object({
+				kind: z.literal('point'),
+				at: position('position of the load, from the left end')
+			})
+		])
+	})
+	.superRefine((v, ctx) => checkGeometry(v, ctx, true));
+
+function areaFree(end: 'from' | 'to') {
+	return position(`${end === 'from' ? 'start' : 'end'} of the load, from the left end`).optional();
+}
+
+export type ShelfRequest = z.input<typeof shelfRequestSchema>;
+export type ShelfInput = z.output<typeof shelfRequestSchema>;
+export type MaxSpanRequest = z.input<typeof maxSpanRequestSchema>;
+export type MinThicknessRequest = z.input<typeof minThicknessRequestSchema>;
+export type MinEdgeRequest = z.input<typeof minEdgeRequestSchema>;
+export type MaxLoadRequest = z.input<typeof maxLoadRequestSchema>;
+export type MaterialInput = z.input<typeof materialSchema>;
+export type CustomMaterial = z.output<typeof customMaterialSchema>;
+export type LoadInput = z.output<typeof loadSchema>;
+export type EdgeInput = z.output<typeof edgeSchema>;
+export type LimitInput = z.output<typeof limitSchema>;
+export type SupportInput = z.output<typeof supportSchema>;
