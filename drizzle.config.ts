@@ -4,5 +4,9 @@ export default defineConfig({
 	schema: './src/lib/server/db/schema.ts',
 	out: './drizzle',
 	dialect: 'sqlite',
-	dbCredentials: { url: process.env.SPANWRIGHT_DATA_DIR ? `${process.env.SPANWRIGHT_DATA_DIR}/spanwright.db` : 'data/spanwright.db' }
+	dbCredentials: {
+		url: process.env.SPANWRIGHT_DATA_DIR
+			? `${process.env.SPANWRIGHT_DATA_DIR}/spanwright.db`
+			: 'data/spanwright.db'
+	}
 });

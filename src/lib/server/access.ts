@@ -32,11 +32,16 @@ export function roleIn(actor: Actor, workshopId: string): Role | null {
  * 401 without an actor; 404 when the actor is not a member (the workshop's existence is not
  * revealed); 403 when the actor's role is below what is needed.
  */
-export function requireRole(actor: Actor | null, workshopId: string, needed: Role): { actor: Actor; role: Role } {
+export function requireRole(
+	actor: Actor | null,
+	workshopId: string,
+	needed: Role
+): { actor: Actor; role: Role } {
 	if (!actor) error(401, 'Sign in to continue.');
 	const role = roleIn(actor, workshopId);
 	if (!role) error(404, 'Not found.');
-	if (!roleAtLeast(role, needed)) error(403, `This needs the ${needed} role; you are a ${role} here.`);
+	if (!roleAtLeast(role, needed))
+		error(403, `This needs the ${needed} role; you are a ${role} here.`);
 	return { actor, role };
 }
 

@@ -12,7 +12,9 @@ export type Db = BetterSQLite3Database<typeof schema>;
 // never from the caller's working directory.
 const projectRoot = resolveProjectRoot();
 export const dataDir = resolve(process.env.SPANWRIGHT_DATA_DIR ?? join(projectRoot, 'data'));
-export const migrationsDir = resolve(process.env.SPANWRIGHT_MIGRATIONS_DIR ?? join(projectRoot, 'drizzle'));
+export const migrationsDir = resolve(
+	process.env.SPANWRIGHT_MIGRATIONS_DIR ?? join(projectRoot, 'drizzle')
+);
 
 function resolveProjectRoot(): string {
 	// src/lib/server/db/index.ts in dev and tests; build/server/chunks/… once built.

@@ -1,5 +1,11 @@
-
-import { index, integer, primaryKey, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
+import {
+	index,
+	integer,
+	primaryKey,
+	sqliteTable,
+	text,
+	uniqueIndex
+} from 'drizzle-orm/sqlite-core';
 
 const id = () =>
 	text('id')
@@ -86,7 +92,10 @@ export const memberships = sqliteTable(
 		role: text('role', { enum: ROLES }).notNull(),
 		createdAt: createdAt()
 	},
-	(t) => [primaryKey({ columns: [t.userId, t.workshopId] }), index('membership_workshop').on(t.workshopId)]
+	(t) => [
+		primaryKey({ columns: [t.userId, t.workshopId] }),
+		index('membership_workshop').on(t.workshopId)
+	]
 );
 
 export const invitations = sqliteTable(
@@ -207,4 +216,3 @@ export const analysisRevisions = sqliteTable(
 	},
 	(t) => [uniqueIndex('analysis_revision_version').on(t.analysisId, t.version)]
 );
-

@@ -27,7 +27,12 @@ export function openApiDocument(version: string) {
 			security: op.auth === 'none' ? [] : [{ session: [] }, { token: [] }],
 			...(op.query ? { parameters: queryParameters(op.query) } : {}),
 			...(op.body
-				? { requestBody: { required: true, content: { 'application/json': { schema: schemaOf(op.body) } } } }
+				? {
+						requestBody: {
+							required: true,
+							content: { 'application/json': { schema: schemaOf(op.body) } }
+						}
+					}
 				: {}),
 			responses: Object.fromEntries(
 				Object.entries(op.responses).map(([code, description]) => [
@@ -35,7 +40,11 @@ export function openApiDocument(version: string) {
 					{
 						description,
 						...(Number(code) >= 400
-							? { content: { 'application/json': { schema: { $ref: '#/components/schemas/Problem' } } } }
+							? {
+									content: {
+										'application/json': { schema: { $ref: '#/components/schemas/Problem' } }
+									}
+								}
 							: {})
 					}
 				])
@@ -50,7 +59,11 @@ export function openApiDocument(version: string) {
 		components: {
 			securitySchemes: {
 				session: { type: 'apiKey', in: 'cookie', name: 'authjs.session-token' },
-				token: { type: 'http', scheme: 'bearer', description: 'A personal API token from the account page' }
+				token: {
+					type: 'http',
+					scheme: 'bearer',
+					description: 'A personal API token from the account page'
+				}
 			},
 			schemas: {
 				Problem: {
