@@ -27,3 +27,20 @@ export type {
 	ShelfRequest,
 	SupportInput
 } from '../schemas/shelf';
+export { analyzeShelf, safeAnalyzeShelf, safely } from './analyze';
+export { ENGINE_VERSION } from './version';
+export { deflectionLimit, type DeflectionLimit } from './limits';
+export {
+	materials,
+	materialIds,
+	findMaterial,
+	type ShelfMaterial,
+	type StockThickness
+} from '../../../reference/materials';
+export {
+	shelfRequestSchema,
+	maxSpanRequestSchema,
+	minThicknessRequestSchema,
+	minEdgeRequestSchema,
+	maxLoadRequestSchema
+} from '../schemas/shelf';

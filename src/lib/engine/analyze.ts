@@ -1,0 +1,364 @@
+/**
+ * The analysis of one shelf: sags instant and long-term, the checks per span, moments, stress,
+ * reactions, the curve and the cautions.
+ */
+import { AWS_MAX_LOAD_PER_SHELF_LB } from '../../../reference/materials';
+import { shelfRequestSchema, type ShelfInput, type ShelfRequest } from '../schemas/shelf';
+import {
+	maxMoment,
+	reactions,
+	sagAt,
+	solveBeam,
+	totalLoad,
+	type BeamLoads,
+	type BeamSolution
+} from './beam';
+import { ShelfInputError } from './errors';
+import { buildModel, isStocked, type ShelfModel } from './model';
+import { NEWTONS_PER_LBF } from './quantity';
+import { partStresses } from './section';
+import type { SafeResult, ShelfIssue, ShelfResult, ShelfWarning, SpanCheck } from './types';
+import { ENGINE_VERSION } from './version';
+
+const GOLDEN = (Math.sqrt(5) - 1) / 2;
+
+function merge(a: BeamLoads, b: BeamLoads): BeamLoads {
+	return { points: [...a.points, ...b.points], udls: [...a.udls, ...b.udls] };
+}
+
+/** The solved beams a shelf needs: everything else is read from them. */
+export interface Solved {
+	model: ShelfModel;
+	all: BeamSolution;
+	/** sag that governs: instant sag plus creep under the permanent load */
+	longTerm: (x: number) => number;
+	creepApplies: boolean;
+}
+
+export function solveShelf(model: ShelfModel): Solved {
+	const { section, input } = model;
+	const shear = input.options.shearDeflection;
+	const beam = (ei: number, ga: number) => ({
+		length: model.length,
+		left: model.left,
+		right: model.right,
+		inner: model.inner,
+		ei,
+		ga: shear ? ga : Infinity
+	});
+	const instant = beam(section.ei, section.ga);
+	const creep = beam(section.eiLongTerm, section.gaLongTerm);
+	const loads = merge(model.applied, model.selfWeight);
+	const all = solveBeam(instant, loads);
+	// Creep acts on the permanent load: the shelf's own weight always, the contents when the
+	// duration is long (EN 1995-1-1 §2.3.2.2: final = instant × (1 + k_def) under permanent load).
+	if (input.duration === 'long') {
+		const long = solveBeam(creep, loads);
+		return { model, all, longTerm: (x) => sagAt(long, x), creepApplies: totalLoad(loads) > 0 };
+	}
+	const perm = model.selfWeight;
+	if (totalLoad(perm) === 0)
+		return { model, all, longTerm: (x) => sagAt(all, x), creepApplies: false };
+	const permInstant = solveBeam(instant, perm);
+	const permCreep = solveBeam(creep, perm);
+	return {
+		model,
+		all,
+		longTerm: (x) => sagAt(all, x) + sagAt(permCreep, x) - sagAt(permInstant, x),
+		creepApplies: true
+	};
+}
+
+/** Largest value of f on [a, b]: a grid, then golden-section search around the best point. */
+export function peak(
+	f: (x: number) => number,
+	a: number,
+	b: number,
+	n = 24
+): { x: number; y: number } {
+	let bestI = 0;
+	let best = -Infinity;
+	const h = (b - a) / n;
+	for (let i = 0; i <= n; i++) {
+		const y = f(a + i * h);
+		if (y > best) {
+			best = y;
+			bestI = i;
+		}
+	}
+	let lo = a + Math.max(0, bestI - 1) * h;
+	let hi = a + Math.min(n, bestI + 1) * h;
+	let x1 = hi - GOLDEN * (hi - lo);
+	let x2 = lo + GOLDEN * (hi - lo);
+	let f1 = f(x1);
+	let f2 = f(x2);
+	for (let k = 0; k < 40 && hi - lo > 1e-9 * (b - a); k++) {
+		if (f1 < f2) {
+			lo = x1;
+			x1 = x2;
+			f1 = f2;
+			x2 = lo + GOLDEN * (hi - lo);
+			f2 = f(x2);
+		} else {
+			hi = x2;
+			x2 = x1;
+			f2 = f1;
+			x1 = hi - GOLDEN * (hi - lo);
+			f1 = f(x1);
+		}
+	}
+	const x = f1 > f2 ? x1 : x2;
+	const y = Math.max(f1, f2);
+	return y >= best ? { x, y } : { x: a + bestI * h, y: best };
+}
+
+export interface Check {
+	spans: SpanCheck[];
+	governing: SpanCheck;
+	/** (allowed − sag) / allowed of the governing span */
+	margin: number;
+}
+
+/** Each span's largest long-term sag against the limit; the governing one has the least margin. */
+export function checkSpans(solved: Solved): Check {
+	const { model } = solved;
+	const spans: SpanCheck[] = [];
+	let x0 = 0;
+	let governing: SpanCheck | undefined;
+	let margin = Infinity;
+	for (const l of model.spans) {
+		const p = peak(solved.longTerm, x0, x0 + l);
+		const allowed = model.limit.allowed(l);
+		const sag = Math.max(0, p.y);
+		const check = { from: x0, to: x0 + l, sag, at: p.x, allowed, pass: sag <= allowed };
+		const m = (allowed - sag) / allowed;
+		if (m < margin) {
+			margin = m;
+			governing = check;
+		}
+		spans.push(check);
+		x0 += l;
+	}
+	return { spans, governing: governing!, margin };
+}
+
+function strengthOf(model: ShelfModel, moment: number) {
+	const sf = model.input.options.safetyFactor;
+	const stresses = partStresses(model.section, moment);
+	let gi = 0;
+	let use = -1;
+	stresses.forEach((s, i) => {
+		const u = s / (model.section.parts[i].rupturePa / sf);
+		if (u > use) {
+			use = u;
+			gi = i;
+		}
+	});
+	const part = model.section.parts[gi];
+	return {
+		panelStress: stresses[0],
+		strength: {
+			rupture: part.rupturePa,
+			safetyFactor: sf,
+			allowed: part.rupturePa / sf,
+			utilisation: use,
+			pass: use <= 1,
+			governing: part.name
+		}
+	};
+}
+
+function cautions(model: ShelfModel, utilisation: number, uplift: boolean): ShelfWarning[] {
+	const { input, panel } = model;
+	const out: ShelfWarning[] = [...model.warnings];
+	const applied = totalLoad(model.applied);
+	if (applied > AWS_MAX_LOAD_PER_SHELF_LB * NEWTONS_PER_LBF)
+		out.push({
+			code: 'over-200-lb',
+			message:
+				'The load is more than 200 lb on one shelf, beyond what the woodwork standard allows for any single shelf.',
+			source: 'Architectural Woodwork Standards (AWI/AWMAC/WI, 2009) §1.2.21.2'
+		});
+	if (
+		input.grain === 'across' &&
+		panel.kind === 'panel' &&
+		panel.modulusAcrossPa! < panel.modulusAlongPa
+	)
+		out.push({
+			code: 'across-grain',
+			message: `The face grain runs across the span: ${panel.name} is only about ${Math.round((100 * panel.modulusAcrossPa!) / panel.modulusAlongPa)}% as stiff that way. Turn the grain along the span if you can.`,
+			source: 'see the material’s stiffness source'
+		});
+	const fixed = model.left === 'fixed' && model.right === 'fixed';
+	if (fixed)
+		out.push({
+			code: 'fixed-ends',
+			message:
+				'Fixed ends assume joints that do not rotate at all. Real glued or screwed joints are only partly fixed, so the true sag lies between this and a simply supported shelf: check that case too.'
+		});
+	if (model.left === 'fixed' && model.right === 'free')
+		out.push({
+			code: 'cantilever',
+			message:
+				'A wall-hung shelf is only as good as its brackets and anchors: this checks the board, not the fixing. Fix into studs or solid blocking, never into drywall alone, and follow the bracket maker’s rating.'
+		});
+	if (utilisation > 1)
+		out.push({
+			code: 'overstressed',
+			message: `The bending stress is ${utilisation.toFixed(1)} times what is allowed with the stated safety factor: the shelf could crack or break. Do not load it so.`,
+			source: 'modulus of rupture of the material divided by the safety factor'
+		});
+	if (uplift)
+		out.push({
+			code: 'uplift',
+			message:
+				'Part of the shelf lifts off a support under this load. A loose shelf could tip or slide off its supports: fix it down or spread the load.'
+		});
+	if (!isStocked(model))
+		out.push({
+			code: 'thickness-not-stocked',
+			message: `This thickness is not one ${panel.name} is commonly sold in; the material’s general figures were used.`
+		});
+	out.push({
+		code: 'estimate',
+		message:
+			'These are estimates from average published material figures and beam theory. Real boards vary, and knots, joints and moisture change the result. For shelving that could hurt someone if it failed, follow local building codes and ask a licensed professional.'
+	});
+	return out;
+}
+
+/** The whole result from a validated request. */
+export function analyzeInput(input: ShelfInput): ShelfResult {
+	const model = buildModel(input);
+	const solved = solveShelf(model);
+	const check = checkSpans(solved);
+	const g = check.governing;
+	const { section } = model;
+	const all = solved.all;
+	const instantSag = sagAt(all, g.at);
+	const bendingOnly = solveBeam({ ...all.model, ga: Infinity }, all.loads);
+	const bendingSag = sagAt(bendingOnly, g.at);
+	const swSag =
+		totalLoad(model.selfWeight) > 0 ? sagAt(solveBeam(all.model, model.selfWeight), g.at) : 0;
+	const mm = maxMoment(all);
+	const { panelStress, strength } = strengthOf(model, mm.moment);
+
+	const n = input.options.curvePoints;
+	const curve: [number, number][] = [];
+	let lowest = 0;
+	for (let i = 0; i < n; i++) {
+		const x = (model.length * i) / (n - 1);
+		const y = solved.longTerm(x);
+		lowest = Math.min(lowest, y);
+		curve.push([x, y]);
+	}
+	const uplift = lowest < -Math.max(1e-4, 0.05 * g.sag);
+	const longTermSag = g.sag;
+	const selfWeightN = totalLoad(model.selfWeight);
+	const appliedN = totalLoad(model.applied);
+	const result: ShelfResult = {
+		engineVersion: ENGINE_VERSION,
+		span: model.length,
+		supports: [0, ...model.inner, model.length].filter((x, i, a) =>
+			model.right === 'free' ? i < a.length - 1 : true
+		),
+		sag: {
+			instant: Math.max(0, instantSag),
+			longTerm: longTermSag,
+			at: g.at,
+			bending: Math.max(0, bendingSag),
+			shear: Math.max(0, instantSag - bendingSag),
+			selfWeight: Math.max(0, swSag),
+			checked: solved.creepApplies ? 'longTerm' : 'instant',
+			creepFactor: instantSag > 0 ? longTermSag / instantSag : 1 + model.section.parts[0].kdef
+		},
+		limit: {
+			name: model.limit.name,
+			allowed: g.allowed,
+			pass: check.spans.every((s) => s.pass),
+			margin: check.margin,
+			source: model.limit.source,
+			spans: check.spans
+		},
+		ratio: longTermSag > 0 ? (g.to - g.from) / longTermSag : null,
+		stiffness: section.ei,
+		stiffnessLongTerm: section.eiLongTerm,
+		shearStiffness: section.ga,
+		moment: mm.moment,
+		momentAt: mm.at,
+		stress: panelStress,
+		strength,
+		reactions: reactions(all),
+		curve,
+		load: { total: appliedN + selfWeightN, selfWeight: selfWeightN, applied: appliedN },
+		section: {
+			neutralAxis: section.neutralAxis,
+			area: section.area,
+			panelModulus: section.parts[0].modulusPa
+		},
+		material: { id: model.panel.id, name: model.panel.name },
+		warnings: cautions(model, strength.utilisation, uplift)
+	};
+	assertFinite(result);
+	return result;
+}
+
+/** No NaN or Infinity leaves the engine; reaching this is a bug, not a bad request. */
+function assertFinite(value: unknown, path = 'result'): void {
+	if (typeof value === 'number') {
+		if (!Number.isFinite(value)) throw new Error(`Engine produced a non-finite number at ${path}.`);
+	} else if (Array.isArray(value)) value.forEach((v, i) => assertFinite(v, `${path}[${i}]`));
+	else if (value && typeof value === 'object')
+		for (const [k, v] of Object.entries(value)) assertFinite(v, `${path}.${k}`);
+}
+
+/** Validate a request with the shared schema; throws ShelfInputError naming each bad field. */
+export function parseRequest<T>(
+	schema: {
+		safeParse(
+			v: unknown
+		):
+			| { success: true; data: T }
+			| { success: false; error: { issues: { path: PropertyKey[]; message: string }[] } };
+	},
+	request: unknown
+): T {
+	const parsed = schema.safeParse(request);
+	if (!parsed.success)
+		throw new ShelfInputError(
+			parsed.error.issues.map((i) => ({
+				path: i.path.filter((p): p is string | number => typeof p !== 'symbol'),
+				message: i.message
+			}))
+		);
+	return parsed.data;
+}
+
+/**
+ * Analyse a shelf. Takes the JSON request (quantity strings or SI numbers); throws
+ * ShelfInputError with the fields that need attention.
+ */
+export function analyzeShelf(request: ShelfRequest): ShelfResult {
+	return analyzeInput(parseRequest(shelfRequestSchema, request));
+}
+
+/** Turn any function of a request into one that never throws: `{ ok, result } | { ok: false, issues }`. */
+export function safely<R, T>(fn: (request: R) => T): (request: R) => SafeResult<T> {
+	return (request) => {
+		try {
+			return { ok: true, result: fn(request) };
+		} catch (e) {
+			if (e instanceof ShelfInputError) return { ok: false, issues: e.issues };
+			const issues: ShelfIssue[] = [
+				{
+					path: [],
+					message: 'This shelf could not be computed. Check the figures, or report the request.'
+				}
+			];
+			return { ok: false, issues };
+		}
+	};
+}
+
+/** analyzeShelf for the keystroke: never throws. */
+export const safeAnalyzeShelf = safely(analyzeShelf);
