@@ -44,3 +44,19 @@ export {
 	minEdgeRequestSchema,
 	maxLoadRequestSchema
 } from '../schemas/shelf';
+export {
+	maxSpan,
+	minThickness,
+	minEdge,
+	maxLoad,
+	safeMaxSpan,
+	safeMinThickness,
+	safeMinEdge,
+	safeMaxLoad,
+	bracketedRoot,
+	type MaxSpanResult,
+	type MinThicknessResult,
+	type MinEdgeResult,
+	type MaxLoadResult,
+	type ThicknessTrial
+} from './solvers';

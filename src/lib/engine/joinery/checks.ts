@@ -9,8 +9,9 @@ export function capacityCheck(
 	ultimate: number | null,
 	basis: string
 ): CapacityCheck {
-	const d = Math.abs(demand);
-	const utilisation = d === 0 ? 0 : design > 0 ? d / design : Number.MAX_VALUE;
+	// a demand below a micro-unit is no demand (keeps ratios finite)
+	const d = Math.abs(demand) < 1e-6 ? 0 : Math.abs(demand);
+	const utilisation = d === 0 ? 0 : design > 0 ? bounded(d / design) : Number.MAX_VALUE;
 	return {
 		what,
 		unit,
@@ -18,8 +19,10 @@ export function capacityCheck(
 		design,
 		ultimate,
 		utilisation,
-		safetyFactor: d > 0 && ultimate !== null ? ultimate / d : null,
+		safetyFactor: d > 0 && ultimate !== null ? bounded(ultimate / d) : null,
 		pass: d === 0 || (design > 0 && d <= design),
 		basis
 	};
 }
+
+const bounded = (x: number) => (Number.isFinite(x) ? x : Number.MAX_VALUE);
