@@ -1,0 +1,204 @@
+/**
+ * The shelf check form as the user types it (texts, choices) and its translation to the engine's
+ * shelf request, and back from a stored input (SI numbers) to texts in the user's unit.
+ * Bare numbers are inches to an inch user and millimetres to a millimetre user (withUnitMark).
+ */
+import type { ShelfRequest } from '../schemas/shelf';
+import { formatLength, parseLength } from '../engine/length';
+import { formatForce, formatLineLoad, formatPressure } from '../engine/quantity';
+import { withUnitMark } from '../components/quantity-input/reading';
+import { loadUnitsFor, type UserLengthUnit } from './lengths';
+
+export type SupportChoice = 'simple' | 'fixed' | 'cantilever' | 'continuous';
+export type LoadKind = 'area' | 'line' | 'point';
+export const LIMIT_CHOICES = ['L/144', 'L/240', 'L/360', '1/16in-per-ft', '0.02in-per-ft'] as const;
+export type LimitChoice = (typeof LIMIT_CHOICES)[number] | 'ratio';
+
+export interface StripDraft {
+	on: boolean;
+	material: string;
+	height: string;
+	thickness: string;
+}
+
+export interface ShelfDraft {
+	span: string;
+	depth: string;
+	thickness: string;
+	material: string;
+	grain: 'along' | 'across';
+	support: SupportChoice;
+	/** equal spans of a continuous shelf (one divider makes two) */
+	bays: number;
+	loadKind: LoadKind;
+	/** the load as typed: `40 lbf/ft^2`, `20 lbf/ft`, `50 lbf` */
+	load: string;
+	/** where a point load stands, from the left end */
+	pointAt: string;
+	selfWeight: boolean;
+	front: StripDraft;
+	below: StripDraft;
+	duration: 'short' | 'long';
+	service: 'dry' | 'humid' | 'wet';
+	limit: LimitChoice;
+	/** the n of a custom L/n */
+	limitRatio: string;
+}
+
+/** A first shelf: a 3/4" shelf of veneer-core hardwood plywood on pins, 40 lbf/ft² (AWS §1.2.21). */
+export function defaultDraft(unit: UserLengthUnit): ShelfDraft {
+	const mm = unit === 'mm';
+	return {
+		span: mm ? '900 mm' : '36"',
+		depth: mm ? '300 mm' : '11 1/4"',
+		thickness: mm ? '18 mm' : '3/4"',
+		material: 'hardwood-plywood-veneer-core',
+		grain: 'along',
+		support: 'simple',
+		bays: 2,
+		loadKind: 'area',
+		load: mm ? '1.92 kPa' : '40 lbf/ft²',
+		pointAt: mm ? '450 mm' : '18"',
+		selfWeight: true,
+		front: {
+			on: false,
+			material: 'red-oak',
+			height: mm ? '38 mm' : '1 1/2"',
+			thickness: mm ? '19 mm' : '3/4"'
+		},
+		below: {
+			on: false,
+			material: 'red-oak',
+			height: mm ? '38 mm' : '1 1/2"',
+			thickness: mm ? '19 mm' : '3/4"'
+		},
+		duration: 'long',
+		service: 'dry',
+		limit: 'L/144',
+		limitRatio: '200'
+	};
+}
+
+const len = (text: string, unit: UserLengthUnit) => withUnitMark(text, unit);
+
+function tryLength(text: string, unit: UserLengthUnit): number | undefined {
+	try {
+		return parseLength(len(text, unit));
+	} catch {
+		return undefined;
+	}
+}
+
+/** The engine's request for a draft; unreadable texts pass through so the engine names them. */
+export function toRequest(d: ShelfDraft, unit: UserLengthUnit): ShelfRequest {
+	const span = len(d.span, unit);
+	const spanM = tryLength(d.span, unit);
+	let support: ShelfRequest['support'] = d.support === 'continuous' ? 'simple' : d.support;
+	if (d.support === 'continuous' && spanM !== undefined && d.bays >= 2)
+		support = { spans: Array.from({ length: d.bays }, () => spanM / d.bays), ends: 'simple' };
+	const load =
+		d.loadKind === 'area'
+			? ({ kind: 'area', pressure: d.load } as const)
+			: d.loadKind === 'line'
+				? ({ kind: 'line', intensity: d.load } as const)
+				: ({ kind: 'point', force: d.load, at: len(d.pointAt, unit) } as const);
+	const strip = (side: 'front' | 'below', s: StripDraft) => ({
+		side,
+		material: s.material,
+		height: len(s.height, unit),
+		thickness: len(s.thickness, unit)
+	});
+	const ratio = Number(d.limitRatio);
+	return {
+		span: typeof support === 'object' ? spanM : span,
+		depth: len(d.depth, unit),
+		thickness: len(d.thickness, unit),
+		material: d.material,
+		grain: d.grain,
+		support,
+		loads: d.load.trim() === '' ? [] : [load],
+		selfWeight: d.selfWeight,
+		edges: [
+			...(d.front.on ? [strip('front', d.front)] : []),
+			...(d.below.on ? [strip('below', d.below)] : [])
+		],
+		duration: d.duration,
+		service: d.service,
+		limit: d.limit === 'ratio' ? { ratio: Number.isFinite(ratio) ? ratio : 0 } : d.limit
+	};
+}
+
+type Stored = Partial<Record<string, unknown>>;
+
+/** A stored (validated, SI) shelf input back into the form's texts, in the reader's unit. */
+export function fromInput(input: unknown, unit: UserLengthUnit): ShelfDraft {
+	const d = defaultDraft(unit);
+	if (!input || typeof input !== 'object') return d;
+	const s = input as Stored;
+	const L = (v: unknown, fallback: string) =>
+		typeof v === 'number' ? formatLength(v, { unit }) : typeof v === 'string' ? v : fallback;
+	const units = loadUnitsFor(unit);
+	const support = s.support as ShelfRequest['support'];
+	if (typeof support === 'object' && support && 'spans' in support) {
+		const spans = support.spans.map((x) => (typeof x === 'number' ? x : parseLength(x)));
+		d.support = 'continuous';
+		d.bays = spans.length;
+		d.span = formatLength(
+			spans.reduce((a, b) => a + b, 0),
+			{ unit }
+		);
+	} else {
+		if (typeof support === 'string') d.support = support;
+		d.span = L(s.span, d.span);
+	}
+	d.depth = L(s.depth, d.depth);
+	d.thickness = L(s.thickness, d.thickness);
+	if (typeof s.material === 'string') d.material = s.material;
+	if (s.grain === 'along' || s.grain === 'across') d.grain = s.grain;
+	const load = (Array.isArray(s.loads) ? s.loads[0] : undefined) as Stored | undefined;
+	d.load = '';
+	if (load?.kind === 'area')
+		d.load = numberOr(load.pressure, (v) => formatPressure(v, { unit: units.pressure }));
+	if (load?.kind === 'line')
+		d.load = numberOr(load.intensity, (v) => formatLineLoad(v, { unit: units.lineLoad }));
+	if (load?.kind === 'point') {
+		d.load = numberOr(load.force, (v) => formatForce(v, { unit: units.force }));
+		d.pointAt = L(load.at, d.pointAt);
+	}
+	if (load?.kind === 'area' || load?.kind === 'line' || load?.kind === 'point')
+		d.loadKind = load.kind;
+	d.selfWeight = s.selfWeight !== false;
+	for (const e of (Array.isArray(s.edges) ? s.edges : []) as Stored[]) {
+		const side = e.side === 'front' || e.side === 'back' ? 'front' : 'below';
+		d[side] = {
+			on: true,
+			material: typeof e.material === 'string' ? e.material : d[side].material,
+			height: L(e.height, d[side].height),
+			thickness: L(e.thickness, d[side].thickness)
+		};
+	}
+	if (s.duration === 'short' || s.duration === 'long') d.duration = s.duration;
+	if (s.service === 'dry' || s.service === 'humid' || s.service === 'wet') d.service = s.service;
+	if (typeof s.limit === 'string' && (LIMIT_CHOICES as readonly string[]).includes(s.limit))
+		d.limit = s.limit as LimitChoice;
+	if (s.limit && typeof s.limit === 'object' && 'ratio' in s.limit) {
+		d.limit = 'ratio';
+		d.limitRatio = String((s.limit as { ratio: number }).ratio);
+	}
+	return d;
+}
+
+function numberOr(v: unknown, format: (n: number) => string): string {
+	return typeof v === 'number' ? format(v) : typeof v === 'string' ? v : '';
+}
+
+/** Which form field an engine issue belongs to (issues are paths into the request). */
+export function fieldOf(path: (string | number)[]): keyof ShelfDraft | 'form' {
+	const [head, , key] = path;
+	if (head === 'span' || head === 'support') return 'span';
+	if (head === 'depth' || head === 'thickness' || head === 'material') return head;
+	if (head === 'loads') return key === 'at' ? 'pointAt' : 'load';
+	if (head === 'edges') return 'front';
+	if (head === 'limit') return 'limitRatio';
+	return 'form';
+}
