@@ -1,3 +1,114 @@
+import {
+	analysisCreateSchema,
+	analysisDuplicateSchema,
+	analysisListQuerySchema,
+	analysisMoveSchema,
+	analysisPatchSchema,
+	analysisPutSchema,
+	analysisRestoreSchema
+} from '$lib/schemas/analysis';
 import type { ApiOperation } from './types';
 
-export const workbenchOperations: ApiOperation[] = [];
+const signedIn = { 401: 'Not signed in' };
+const member = { ...signedIn, 404: 'No such project or analysis, or not a member' };
+const editor = { ...member, 403: 'Editors only' };
+const versioned = {
+	409: 'Stale version: the analysis changed since it was read; nothing was written',
+	422: 'Invalid fields (the input is checked by the engine schema of its kind)',
+	428: 'No If-Match header and no version field'
+};
+
+// ---- saved analyses of a project: list, create, read, update, delete, revisions ----
+export const workbenchOperations: ApiOperation[] = [
+	{
+		method: 'get',
+		path: '/projects/{id}/analyses',
+		tag: 'analyses',
+		summary: "A page of a project's analyses, searched, filtered by kind and verdict, sorted",
+		query: analysisListQuerySchema,
+		responses: { 200: '{ items, total, page, perPage }', 422: 'Invalid query', ...member }
+	},
+	{
+		method: 'post',
+		path: '/projects/{id}/analyses',
+		tag: 'analyses',
+		summary: 'Save an analysis (editor); the server computes its result with the engine',
+		body: analysisCreateSchema,
+		responses: { 201: 'Created, with its ETag', 422: 'Invalid fields', ...editor }
+	},
+	{
+		method: 'get',
+		path: '/analyses/{id}',
+		tag: 'analyses',
+		summary: 'An analysis with its input, result, summary and version (ETag)',
+		responses: { 200: 'Analysis', ...member }
+	},
+	{
+		method: 'patch',
+		path: '/analyses/{id}',
+		tag: 'analyses',
+		summary: 'Rename and/or change the input (editor), with If-Match or version',
+		body: analysisPatchSchema,
+		responses: { 200: 'Changed, recomputed, new ETag', ...versioned, ...editor }
+	},
+	{
+		method: 'put',
+		path: '/analyses/{id}',
+		tag: 'analyses',
+		summary: 'Replace the name and input (editor), with If-Match or version',
+		body: analysisPutSchema,
+		responses: { 200: 'Replaced, recomputed, new ETag', ...versioned, ...editor }
+	},
+	{
+		method: 'delete',
+		path: '/analyses/{id}',
+		tag: 'analyses',
+		summary: 'Delete an analysis (editor); it can be brought back until undoUntil',
+		responses: { 200: '{ id, projectId, deletedAt, undoUntil }', ...editor }
+	},
+	{
+		method: 'post',
+		path: '/analyses/{id}/undelete',
+		tag: 'analyses',
+		summary: 'Undo a delete within its window (editor)',
+		responses: { 200: 'Restored analysis', 409: 'Deleted too long ago', ...editor }
+	},
+	{
+		method: 'get',
+		path: '/analyses/{id}/revisions',
+		tag: 'analyses',
+		summary: 'Every version of an analysis, newest first, with who saved it and its summary',
+		responses: { 200: '{ items }', ...member }
+	},
+	{
+		method: 'get',
+		path: '/analyses/{id}/revisions/{version}',
+		tag: 'analyses',
+		summary: 'One version: its name, input, result and summary',
+		responses: { 200: 'Revision', ...member }
+	},
+	{
+		method: 'post',
+		path: '/analyses/{id}/revisions/{version}',
+		tag: 'analyses',
+		summary: 'Restore a version as a new version, recomputed now (editor)',
+		body: analysisRestoreSchema,
+		responses: { 200: 'Restored, new ETag', 409: 'Stale version', 422: 'Invalid fields', ...editor }
+	},
+	{
+		method: 'post',
+		path: '/analyses/{id}/duplicate',
+		tag: 'analyses',
+		summary: 'Copy an analysis within its project (editor), recomputed now',
+		body: analysisDuplicateSchema,
+		responses: { 201: 'The copy', 422: 'Invalid fields', ...editor }
+	},
+	{
+		method: 'post',
+		path: '/analyses/{id}/move',
+		tag: 'analyses',
+		summary: 'Move an analysis to another project of the same workshop (editor)',
+		body: analysisMoveSchema,
+		responses: { 200: 'Moved', 422: 'Target is in another workshop', ...editor }
+	}
+];

@@ -1,0 +1,386 @@
+/**
+ * Saved analyses of a project, scoped to the actor through the project's workshop. Every write
+ * recomputes with the engine (analysis-kinds.ts), bumps the version and records a revision; a
+ * stale version is refused (409) and nothing is overwritten.
+ */
+import { error } from '@sveltejs/kit';
+import { and, asc, count, desc, eq, gt, isNull, or, sql, type SQL } from 'drizzle-orm';
+import { alias } from 'drizzle-orm/sqlite-core';
+import { requireRole, type Actor } from './access';
+import { computeAnalysis, describeAnalysis, describeInput } from './analysis-kinds';
+import { getDb } from './db';
+import { analyses, analysisRevisions, projects, users, type AnalysisKind } from './db/schema';
+import type { ProblemIssue } from './http';
+import { lengthUnitOf } from './preferences';
+import { getProject } from './projects';
+import type { AnalysisListQuery } from '$lib/schemas/analysis';
+
+/** How long after a delete the Undo notice can bring an analysis back. */
+export const UNDO_WINDOW_MS = 10 * 60 * 1000;
+
+/** A refusal that carries its status and the fields to fix (409, 422); routes answer it as JSON. */
+export class AnalysisProblem extends Error {
+	constructor(
+		readonly status: number,
+		message: string,
+		readonly issues: ProblemIssue[] = []
+	) {
+		super(message);
+		this.name = 'AnalysisProblem';
+	}
+}
+
+type Row = typeof analyses.$inferSelect;
+const creator = alias(users, 'creator');
+const updater = alias(users, 'updater');
+
+const sortColumn = {
+	updated: analyses.updatedAt,
+	name: sql`lower(${analyses.name})`,
+	kind: analyses.kind,
+	created: analyses.createdAt,
+	pass: analyses.pass
+} as const;
+
+function escapeLike(s: string) {
+	return s.replace(/[\\%_]/g, (c) => `\\${c}`);
+}
+
+const listColumns = {
+	id: analyses.id,
+	projectId: analyses.projectId,
+	kind: analyses.kind,
+	name: analyses.name,
+	summary: analyses.summary,
+	pass: analyses.pass,
+	version: analyses.version,
+	engineVersion: analyses.engineVersion,
+	input: analyses.input,
+	result: analyses.result,
+	createdAt: analyses.createdAt,
+	updatedAt: analyses.updatedAt,
+	createdByName: creator.name,
+	updatedByName: updater.name
+};
+
+/** The summary in the reader's unit (the stored one was written in the author's). */
+function present<
+	T extends { kind: AnalysisKind; input: unknown; result: unknown; summary: string }
+>(row: T, actor: Actor) {
+	const summary = describeAnalysis(row.kind, row.input, row.result, lengthUnitOf(actor));
+	return { ...row, summary: summary || row.summary };
+}
+
+/** A page of a project's analyses, searched by name and summary, filtered by kind and verdict. */
+export function listAnalyses(actor: Actor, projectId: string, query: AnalysisListQuery) {
+	getProject(actor, projectId);
+	const db = getDb();
+	const where: SQL[] = [eq(analyses.projectId, projectId), isNull(analyses.deletedAt)];
+	if (query.q) {
+		const pattern = `%${escapeLike(query.q)}%`;
+		where.push(
+			or(
+				sql`${analyses.name} like ${pattern} escape '\\'`,
+				sql`${analyses.summary} like ${pattern} escape '\\'`
+			)!
+		);
+	}
+	if (query.kind) where.push(eq(analyses.kind, query.kind));
+	if (query.pass) where.push(eq(analyses.pass, query.pass === 'pass'));
+	const filter = and(...where);
+	const column = sortColumn[query.sort];
+	const order = query.dir === 'asc' ? asc(column) : desc(column);
+	const rows = db
+		.select(listColumns)
+		.from(analyses)
+		.leftJoin(creator, eq(creator.id, analyses.createdBy))
+		.leftJoin(updater, eq(updater.id, analyses.updatedBy))
+		.where(filter)
+		.orderBy(order, desc(analyses.updatedAt), asc(analyses.id))
+		.limit(query.perPage)
+		.offset((query.page - 1) * query.perPage)
+		.all();
+	const total = db.select({ n: count() }).from(analyses).where(filter).get()?.n ?? 0;
+	const items = rows.map((r) => {
+		const { input: _input, result: _result, ...rest } = present(r, actor);
+		void _input;
+		void _result;
+		return rest;
+	});
+	return { items, total, page: query.page, perPage: query.perPage };
+}
+
+function findRow(id: string, includeDeleted = false) {
+	const row = getDb()
+		.select({ ...listColumns, deletedAt: analyses.deletedAt, workshopId: projects.workshopId })
+		.from(analyses)
+		.innerJoin(projects, eq(projects.id, analyses.projectId))
+		.leftJoin(creator, eq(creator.id, analyses.createdBy))
+		.leftJoin(updater, eq(updater.id, analyses.updatedBy))
+		.where(eq(analyses.id, id))
+		.get();
+	if (!row || (row.deletedAt && !includeDeleted)) error(404, 'Not found.');
+	return row;
+}
+
+/** One analysis with its project and the actor's role; 404 when unseen or deleted. */
+export function getAnalysis(actor: Actor, id: string) {
+	const row = findRow(id);
+	const { project, role } = getProject(actor, row.projectId);
+	const { workshopId: _w, deletedAt: _d, ...analysis } = present(row, actor);
+	void _w;
+	void _d;
+	return { analysis, project, role };
+}
+
+export type AnalysisView = ReturnType<typeof getAnalysis>['analysis'];
+
+function computed(kind: AnalysisKind, input: unknown) {
+	const run = computeAnalysis(kind, input);
+	if (!run.ok) throw new AnalysisProblem(422, 'Some fields need attention.', run.issues);
+	return run;
+}
+
+function summaryOf(actor: Actor, kind: AnalysisKind, run: { input: unknown; result: unknown }) {
+	return describeAnalysis(kind, run.input, run.result, lengthUnitOf(actor));
+}
+
+function touchProject(projectId: string, at: Date) {
+	getDb().update(projects).set({ updatedAt: at }).where(eq(projects.id, projectId)).run();
+}
+
+function recordRevision(row: Row, actor: Actor) {
+	getDb()
+		.insert(analysisRevisions)
+		.values({
+			analysisId: row.id,
+			version: row.version,
+			name: row.name,
+			input: row.input,
+			result: row.result,
+			engineVersion: row.engineVersion,
+			changedBy: actor.id,
+			createdAt: row.updatedAt
+		})
+		.run();
+}
+
+/** Save a new analysis in a project (editor); the engine computes its result. */
+export function createAnalysis(
+	actor: Actor,
+	projectId: string,
+	body: { kind: AnalysisKind; name: string; input: unknown }
+) {
+	const { project } = getProject(actor, projectId);
+	requireRole(actor, project.workshopId, 'editor');
+	const run = computed(body.kind, body.input);
+	const now = new Date();
+	const id = getDb().transaction(() => {
+		const row = getDb()
+			.insert(analyses)
+			.values({
+				projectId,
+				kind: body.kind,
+				name: body.name,
+				input: run.input,
+				result: run.result,
+				summary: summaryOf(actor, body.kind, run),
+				pass: run.pass,
+				engineVersion: run.engineVersion,
+				createdBy: actor.id,
+				updatedBy: actor.id,
+				createdAt: now,
+				updatedAt: now
+			})
+			.returning()
+			.get();
+		recordRevision(row, actor);
+		touchProject(projectId, now);
+		return row.id;
+	});
+	return getAnalysis(actor, id).analysis;
+}
+
+function editable(actor: Actor, id: string) {
+	const row = findRow(id);
+	requireRole(actor, row.workshopId, 'editor');
+	return row;
+}
+
+function stale(current: { version: number; updatedByName: string | null; updatedAt: Date }) {
+	return new AnalysisProblem(
+		409,
+		`This analysis was changed by ${current.updatedByName ?? 'someone'} since you opened it ` +
+			`(it is now version ${current.version}). Nothing was overwritten: reload to see their ` +
+			'change, then make yours again.',
+		[{ path: ['version'], message: `The current version is ${current.version}.` }]
+	);
+}
+
+/**
+ * Change the name and/or input, only if `version` is still the stored one (else 409, nothing
+ * written). A new input is recomputed; the result is never taken from the caller.
+ */
+export function updateAnalysis(
+	actor: Actor,
+	id: string,
+	patch: { name?: string; input?: unknown; version: number }
+) {
+	const current = editable(actor, id);
+	if (current.version !== patch.version) throw stale(current);
+	const run = patch.input !== undefined ? computed(current.kind, patch.input) : null;
+	const now = new Date();
+	getDb().transaction(() => {
+		const values = {
+			name: patch.name ?? current.name,
+			version: current.version + 1,
+			updatedBy: actor.id,
+			updatedAt: now,
+			...(run
+				? {
+						input: run.input,
+						result: run.result,
+						pass: run.pass,
+						engineVersion: run.engineVersion,
+						summary: summaryOf(actor, current.kind, run)
+					}
+				: {})
+		};
+		// the version in the WHERE makes the check and the write one step: a concurrent writer loses
+		const row = getDb()
+			.update(analyses)
+			.set(values)
+			.where(
+				and(eq(analyses.id, id), eq(analyses.version, patch.version), isNull(analyses.deletedAt))
+			)
+			.returning()
+			.get();
+		if (!row) throw stale(findRow(id));
+		recordRevision(row, actor);
+		touchProject(row.projectId, now);
+	});
+	return getAnalysis(actor, id).analysis;
+}
+
+/** Every version of an analysis, newest first, with who saved it. */
+export function listRevisions(actor: Actor, id: string) {
+	const { analysis } = getAnalysis(actor, id);
+	const rows = getDb()
+		.select({
+			version: analysisRevisions.version,
+			name: analysisRevisions.name,
+			input: analysisRevisions.input,
+			result: analysisRevisions.result,
+			engineVersion: analysisRevisions.engineVersion,
+			createdAt: analysisRevisions.createdAt,
+			changedByName: users.name
+		})
+		.from(analysisRevisions)
+		.leftJoin(users, eq(users.id, analysisRevisions.changedBy))
+		.where(eq(analysisRevisions.analysisId, id))
+		.orderBy(desc(analysisRevisions.version))
+		.all();
+	const unit = lengthUnitOf(actor);
+	return rows.map(({ input, result, ...r }) => ({
+		...r,
+		summary: describeAnalysis(analysis.kind, input, result, unit),
+		current: r.version === analysis.version
+	}));
+}
+
+/** One earlier version: its inputs (stored and as readable rows), result and summary. */
+export function getRevision(actor: Actor, id: string, version: number) {
+	const { analysis, project, role } = getAnalysis(actor, id);
+	const row = getDb()
+		.select({
+			version: analysisRevisions.version,
+			name: analysisRevisions.name,
+			input: analysisRevisions.input,
+			result: analysisRevisions.result,
+			engineVersion: analysisRevisions.engineVersion,
+			createdAt: analysisRevisions.createdAt,
+			changedByName: users.name
+		})
+		.from(analysisRevisions)
+		.leftJoin(users, eq(users.id, analysisRevisions.changedBy))
+		.where(and(eq(analysisRevisions.analysisId, id), eq(analysisRevisions.version, version)))
+		.get();
+	if (!row) error(404, 'Not found.');
+	const unit = lengthUnitOf(actor);
+	return {
+		analysis,
+		project,
+		role,
+		revision: {
+			...row,
+			summary: describeAnalysis(analysis.kind, row.input, row.result, unit),
+			inputRows: describeInput(analysis.kind, row.input, unit)
+		}
+	};
+}
+
+/** Bring back an earlier version's name and input as a new version, recomputed now. */
+export function restoreRevision(actor: Actor, id: string, version: number, expected?: number) {
+	const current = editable(actor, id);
+	if (expected !== undefined && expected !== current.version) throw stale(current);
+	const { revision } = getRevision(actor, id, version);
+	return updateAnalysis(actor, id, {
+		name: revision.name,
+		input: revision.input,
+		version: current.version
+	});
+}
+
+/** A copy in the same project, recomputed with the current engine, starting at version 1. */
+export function duplicateAnalysis(actor: Actor, id: string, body: { name?: string } = {}) {
+	const source = editable(actor, id);
+	const name = body.name ?? `${source.name} (copy)`.slice(0, 120);
+	return createAnalysis(actor, source.projectId, { kind: source.kind, name, input: source.input });
+}
+
+/** Move to another project of the same workshop (editor); other workshops are refused (422). */
+export function moveAnalysis(actor: Actor, id: string, projectId: string) {
+	const row = editable(actor, id);
+	const { project: target } = getProject(actor, projectId);
+	if (target.workshopId !== row.workshopId)
+		throw new AnalysisProblem(422, 'An analysis moves only between projects of its workshop.', [
+			{ path: ['projectId'], message: 'Pick a project of the same workshop.' }
+		]);
+	const now = new Date();
+	getDb()
+		.update(analyses)
+		.set({ projectId, updatedBy: actor.id, updatedAt: now })
+		.where(eq(analyses.id, id))
+		.run();
+	touchProject(row.projectId, now);
+	touchProject(projectId, now);
+	return getAnalysis(actor, id).analysis;
+}
+
+/** Soft delete (editor): hidden at once, and back with undoDelete within UNDO_WINDOW_MS. */
+export function deleteAnalysis(actor: Actor, id: string) {
+	const row = editable(actor, id);
+	const deletedAt = new Date();
+	getDb().update(analyses).set({ deletedAt }).where(eq(analyses.id, id)).run();
+	return {
+		id,
+		projectId: row.projectId,
+		deletedAt,
+		undoUntil: new Date(+deletedAt + UNDO_WINDOW_MS)
+	};
+}
+
+/** Undo a delete made within the window (editor); later deletes stay deleted (409). */
+export function undoDelete(actor: Actor, id: string, now = new Date()) {
+	const row = findRow(id, true);
+	requireRole(actor, row.workshopId, 'editor');
+	if (!row.deletedAt) return getAnalysis(actor, id).analysis;
+	if (+now - +row.deletedAt > UNDO_WINDOW_MS)
+		throw new AnalysisProblem(409, 'This analysis was deleted too long ago to undo.');
+	getDb()
+		.update(analyses)
+		.set({ deletedAt: null })
+		.where(and(eq(analyses.id, id), gt(analyses.deletedAt, new Date(+now - UNDO_WINDOW_MS))))
+		.run();
+	return getAnalysis(actor, id).analysis;
+}

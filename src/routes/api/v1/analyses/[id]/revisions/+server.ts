@@ -1,0 +1,9 @@
+import type { RequestHandler } from './$types';
+import { json } from '@sveltejs/kit';
+import { requireActor } from '$lib/server/access';
+import { listRevisions } from '$lib/server/analyses';
+import { analysisApi } from '$lib/server/analysis-http';
+
+export const GET: RequestHandler = analysisApi(({ locals, params }) => {
+	return json({ items: listRevisions(requireActor(locals.actor), params.id) });
+});
