@@ -93,7 +93,16 @@ describe('failed sign-in throttle', () => {
 	});
 
 	it('a success clears the count for that address', async () => {
-		await createUser({ name: 'Di', email: 'di@shop.example', password: 'correct horse staple' });
+		const di = await createUser({
+			name: 'Di',
+			email: 'di@shop.example',
+			password: 'correct horse staple'
+		});
+		db()
+			.db.update(schema.users)
+			.set({ emailVerified: new Date() })
+			.where(eq(schema.users.id, di.id))
+			.run();
 		await passwordSignIn({ email: 'di@shop.example', password: 'nope nope' }, '192.0.2.1');
 		expect(
 			(
@@ -104,6 +113,18 @@ describe('failed sign-in throttle', () => {
 			).ok
 		).toBe(true);
 		expect(signInGate('di@shop.example', '192.0.2.9').state).toBe('open');
+	});
+});
+
+describe('an unconfirmed address', () => {
+	it('does not let the right password alone sign in, and counts no failure', async () => {
+		await createUser({ name: 'Fen', email: 'fen@shop.example', password: 'correct horse staple' });
+		const r = await passwordSignIn(
+			{ email: 'fen@shop.example', password: 'correct horse staple' },
+			'192.0.2.5'
+		);
+		expect(r).toEqual({ ok: false, reason: 'unverified' });
+		expect(signInGate('fen@shop.example', '192.0.2.5').state).toBe('open');
 	});
 });
 

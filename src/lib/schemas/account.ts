@@ -38,13 +38,13 @@ export const signInSchema = z.object({
 	email: emailField,
 	password: passwordField,
 	// where to go after signing in; only paths on this site are honoured (see safeRedirectPath)
-	redirectTo: z.string().max(500).default('/')
+	redirectTo: z.string().max(500).default('')
 });
 export type SignInInput = z.infer<typeof signInSchema>;
 
 export const signInLinkSchema = z.object({
 	email: emailField,
-	redirectTo: z.string().max(500).default('/')
+	redirectTo: z.string().max(500).default('')
 });
 
 export const resetRequestSchema = z.object({ email: emailField });

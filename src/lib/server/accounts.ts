@@ -2,8 +2,8 @@ import { error } from '@sveltejs/kit';
 import { hash, verify } from '@node-rs/argon2';
 import { and, desc, eq, gt, isNull, lt } from 'drizzle-orm';
 import { createHash, randomBytes } from 'node:crypto';
-import type { LengthUnit } from '$lib/schemas/preferences';
-import { LENGTH_UNITS } from '$lib/schemas/preferences';
+import type { LengthUnit } from '../schemas/preferences';
+import { LENGTH_UNITS } from '../schemas/preferences';
 import type { Actor } from './access';
 import { getDb } from './db';
 import { apiTokens, passwordResets, signInFailures, users } from './db/schema';
@@ -180,6 +180,7 @@ export function clearSignInFailures(email: string) {
 export type PasswordSignInResult =
 	| { ok: true; user: AccountUser }
 	| { ok: false; reason: 'wrong' }
+	| { ok: false; reason: 'unverified' }
 	| { ok: false; reason: 'throttled'; retryAfterMinutes: number };
 
 /** The whole password check: throttle, slow down, verify, record the outcome. */
@@ -197,7 +198,34 @@ export async function passwordSignIn(
 		return { ok: false, reason: 'wrong' };
 	}
 	clearSignInFailures(input.email);
+	// An unconfirmed address could be someone else's; invitations are matched by address, so the
+	// address must be proven (by a mailed link) before the password alone lets anyone in.
+	if (!findUserByEmail(user.email)?.emailVerified) return { ok: false, reason: 'unverified' };
 	return { ok: true, user };
+}
+
+// ---- how much mail one address may be sent ----
+
+export const MAIL_REQUESTS_PER_WINDOW = 5;
+
+/**
+ * Count one request to mail this address (a sign-in link, a reset link) and say whether it may be
+ * sent: at most five within 15 minutes, so the forms cannot be used to flood someone's inbox.
+ */
+export function allowMailTo(
+	email: string,
+	now = Date.now()
+): { ok: true } | { ok: false; retryAfterMinutes: number } {
+	const key = `mail:${email.trim().toLowerCase()}`;
+	const times = recentFailures(key, now);
+	const until = refusedUntilOf(times, MAIL_REQUESTS_PER_WINDOW);
+	if (until > now)
+		return { ok: false, retryAfterMinutes: Math.max(1, Math.ceil((until - now) / 60000)) };
+	getDb()
+		.insert(signInFailures)
+		.values({ key, at: new Date(now) })
+		.run();
+	return { ok: true };
 }
 
 export function throttleMessage(retryAfterMinutes: number) {
@@ -212,9 +240,16 @@ export const PASSWORD_RESET_TTL_MS = 60 * 60 * 1000;
  * Mail a one-time link for choosing a new password. Says nothing about whether the address has an
  * account: the caller shows the same answer either way.
  */
-export async function requestPasswordReset(email: string, origin: string, now = Date.now()) {
+export async function requestPasswordReset(
+	email: string,
+	origin: string,
+	now = Date.now()
+): Promise<{ ok: true } | { ok: false; retryAfterMinutes: number }> {
+	// counted for every address, known or not, so the answer gives nothing away
+	const allowed = allowMailTo(email, now);
+	if (!allowed.ok) return allowed;
 	const user = findUserByEmail(email);
-	if (!user?.email) return;
+	if (!user?.email) return { ok: true };
 	const token = randomSecret();
 	getDb()
 		.insert(passwordResets)
@@ -225,6 +260,7 @@ export async function requestPasswordReset(email: string, origin: string, now = 
 		})
 		.run();
 	await sendPasswordReset(user.email, `${origin}/reset/${token}`);
+	return { ok: true };
 }
 
 function liveReset(token: string, now: number) {

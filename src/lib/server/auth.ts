@@ -6,10 +6,10 @@ import { isRedirect, type RequestEvent } from '@sveltejs/kit';
 import { dev } from '$app/environment';
 import { env } from '$env/dynamic/private';
 import { signInSchema } from '$lib/schemas/account';
-import { findUserByEmail, passwordSignIn, throttleMessage } from './accounts';
+import { allowMailTo, findUserByEmail, passwordSignIn, throttleMessage } from './accounts';
 import { getDb } from './db';
 import { accounts, sessions, users, verificationTokens } from './db/schema';
-import { linkOrigin, mailFrom, sendSignInLink, smtpUrl } from './mail';
+import { linkOrigin, mailFrom, sendNoAccountNotice, sendSignInLink, smtpUrl } from './mail';
 
 /** Thrown by the password check when the throttle refuses; carries the wait for the message. */
 export class SignInThrottled extends CredentialsSignin {
@@ -17,6 +17,11 @@ export class SignInThrottled extends CredentialsSignin {
 	constructor(readonly retryAfterMinutes: number) {
 		super(throttleMessage(retryAfterMinutes));
 	}
+}
+
+/** Thrown when the password is right but the address has not been confirmed by a mailed link. */
+export class EmailUnconfirmed extends CredentialsSignin {
+	code = 'unconfirmed';
 }
 
 export const SIGN_IN_LINK_MAX_AGE_S = 60 * 60;
@@ -61,6 +66,13 @@ async function authConfig(event: RequestEvent): Promise<SvelteKitAuthConfig> {
 			sessionsTable: sessions,
 			verificationTokensTable: verificationTokens
 		}),
+		logger: {
+			// a wrong password is an everyday answer, not a server error worth a stack in the log
+			error(e) {
+				if (e instanceof CredentialsSignin || e.name === 'CredentialsSignin') return;
+				console.error(`[auth] ${e.name}: ${e.message}`, e.cause ?? '');
+			}
+		},
 		pages: { signIn: '/signin', error: '/signin', verifyRequest: '/signin', signOut: '/signout' },
 		providers: [
 			Credentials({
@@ -72,6 +84,7 @@ async function authConfig(event: RequestEvent): Promise<SvelteKitAuthConfig> {
 					const result = await passwordSignIn(parsed.data, event.getClientAddress());
 					if (result.ok) return result.user;
 					if (result.reason === 'throttled') throw new SignInThrottled(result.retryAfterMinutes);
+					if (result.reason === 'unverified') throw new EmailUnconfirmed();
 					return null;
 				}
 			}),
@@ -113,6 +126,8 @@ async function runAuthAction(
 	const headers = new Headers(event.request.headers);
 	headers.delete('content-type');
 	headers.delete('content-length');
+	// Auth.js builds its URLs from the host header; a request made in-process may lack it
+	if (!headers.has('host')) headers.set('host', event.url.host);
 	const request = new Request(event.request.url, {
 		method: 'POST',
 		headers,
@@ -128,7 +143,8 @@ async function runAuthAction(
 }
 
 export type PasswordSignInOutcome =
-	{ ok: true; location: string } | { ok: false; status: 400 | 429; message: string };
+	| { ok: true; location: string }
+	| { ok: false; status: 400 | 429; message: string; unconfirmed?: true };
 
 /** Sign in with e-mail and password through Auth.js (sets the session cookie on success). */
 export async function signInWithPassword(
@@ -139,7 +155,16 @@ export async function signInWithPassword(
 		const location = await runAuthAction(signIn, event, { providerId: 'credentials', ...input });
 		return { ok: true, location };
 	} catch (e) {
-		if (e instanceof SignInThrottled) return { ok: false, status: 429, message: e.message };
+		if (e instanceof SignInThrottled)
+			return { ok: false, status: 429, message: throttleMessage(e.retryAfterMinutes) };
+		if (e instanceof EmailUnconfirmed)
+			return {
+				ok: false,
+				status: 400,
+				unconfirmed: true,
+				message:
+					'Confirm your e-mail address first: open the link we mailed you. We have just sent a fresh one.'
+			};
 		if (e instanceof CredentialsSignin)
 			return {
 				ok: false,
@@ -150,18 +175,22 @@ export async function signInWithPassword(
 	}
 }
 
-/** Mail a sign-in link through Auth.js's e-mail provider. Quietly does nothing for unknown addresses. */
-export async function sendSignInLinkFor(
+/**
+ * Mail a sign-in link through Auth.js's e-mail provider. An address without an account gets a short
+ * note pointing to sign-up instead, so the page's answer is the same either way.
+ */
+export async function mailSignInLink(
 	event: RequestEvent,
 	input: { email: string; redirectTo: string }
-) {
-	try {
-		await runAuthAction(signIn, event, { providerId: 'nodemailer', ...input });
-	} catch (e) {
-		// AccessDenied from the signIn callback: no account under that address
-		if (e instanceof Error && 'type' in e && e.type === 'AccessDenied') return;
-		throw e;
+): Promise<{ ok: true } | { ok: false; retryAfterMinutes: number }> {
+	const allowed = allowMailTo(input.email);
+	if (!allowed.ok) return allowed;
+	if (!findUserByEmail(input.email)) {
+		await sendNoAccountNotice(input.email, `${linkOrigin(event.url)}/signup`);
+		return { ok: true };
 	}
+	await runAuthAction(signIn, event, { providerId: 'nodemailer', ...input });
+	return { ok: true };
 }
 
 /** Clear the session cookie through Auth.js. */

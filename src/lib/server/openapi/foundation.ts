@@ -4,6 +4,7 @@ import {
 	projectPatchSchema
 } from '$lib/schemas/project';
 import { workshopNameSchema } from '$lib/schemas/workshop';
+import { apiTokenCreateSchema } from '$lib/schemas/account';
 import type { ApiOperation } from './types';
 
 const signedIn = { 401: 'Not signed in' };
@@ -102,7 +103,42 @@ const workshopAndProjectOperations: ApiOperation[] = [
 ];
 
 // ---- accounts (me, tokens): appended by the accounts work ----
-const accountOperations: ApiOperation[] = [];
+const accountOperations: ApiOperation[] = [
+	{
+		method: 'get',
+		path: '/me',
+		tag: 'accounts',
+		summary: 'The caller: id, e-mail, name, how they signed in, length unit and workshops',
+		responses: { 200: 'The caller', ...signedIn }
+	},
+	{
+		method: 'get',
+		path: '/tokens',
+		tag: 'accounts',
+		summary: "The caller's live API tokens (name, prefix, dates; never the secret)",
+		responses: { 200: 'Tokens', ...signedIn }
+	},
+	{
+		method: 'post',
+		path: '/tokens',
+		tag: 'accounts',
+		summary: 'Create an API token; the secret is in this answer only. Needs a session, not a token',
+		body: apiTokenCreateSchema,
+		responses: {
+			201: 'Created, with the secret',
+			403: 'Called with a token',
+			422: 'Invalid fields',
+			...signedIn
+		}
+	},
+	{
+		method: 'delete',
+		path: '/tokens/{id}',
+		tag: 'accounts',
+		summary: "Revoke one of the caller's tokens",
+		responses: { 204: 'Revoked', 404: 'No such live token of the caller', ...signedIn }
+	}
+];
 
 export const foundationOperations: ApiOperation[] = [
 	...workshopAndProjectOperations,

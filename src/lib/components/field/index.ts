@@ -1,0 +1,1 @@
+export { default as Field } from './Field.svelte';

@@ -1,0 +1,30 @@
+import { fail } from '@sveltejs/kit';
+import { message, superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { resetRequestSchema } from '$lib/schemas/account';
+import { requestPasswordReset } from '$lib/server/accounts';
+import { linkOrigin } from '$lib/server/mail';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = async () => ({
+	form: await superValidate(zod4(resetRequestSchema))
+});
+
+export const actions: Actions = {
+	default: async ({ request, url }) => {
+		const form = await superValidate(request, zod4(resetRequestSchema));
+		if (!form.valid) return fail(400, { form });
+		const result = await requestPasswordReset(form.data.email, linkOrigin(url));
+		if (!result.ok)
+			return message(
+				form,
+				`We have sent several links to that address already; try again in ${result.retryAfterMinutes} minutes.`,
+				{ status: 429 }
+			);
+		// the same answer whether or not the address has an account
+		return message(
+			form,
+			`If ${form.data.email} has an account, a link to choose a new password is on its way. It works once, within an hour.`
+		);
+	}
+};

@@ -1,0 +1,178 @@
+import { eq } from 'drizzle-orm';
+import { describe, expect, it } from 'vitest';
+import { createUser } from '../../src/lib/server/accounts';
+import { authHandle } from '../../src/lib/server/auth';
+import { schema } from '../../src/lib/server/db';
+import { waitForMailTo } from '../../src/lib/server/dev/caught-mail';
+import { actions as signInActions } from '../../src/routes/(public)/signin/+page.server';
+import { actions as signUpActions } from '../../src/routes/(public)/signup/+page.server';
+import { useTempDb } from './support/db';
+import { useMailCatcher } from './support/mail';
+import { cookieJar, formEvent, runAction } from './support/request';
+
+const db = useTempDb();
+const mail = useMailCatcher();
+
+const sessionCookie = (jar: ReturnType<typeof cookieJar>) =>
+	[...jar.values.keys()].find((k) => k.endsWith('authjs.session-token'));
+
+async function confirmedUser(email: string, password: string) {
+	const user = await createUser({ name: 'Flo', email, password });
+	db()
+		.db.update(schema.users)
+		.set({ emailVerified: new Date() })
+		.where(eq(schema.users.id, user.id))
+		.run();
+	return user;
+}
+
+describe('the sign-in page', () => {
+	it('signs in with the right password: a session cookie and a 303 to the projects', async () => {
+		await confirmedUser('flo@shop.example', 'right password here');
+		const cookies = cookieJar();
+		const event = formEvent({
+			url: '/signin?/password',
+			fields: {
+				email: 'flo@shop.example',
+				password: 'right password here',
+				redirectTo: '/projects'
+			},
+			cookies
+		});
+		const { thrown } = await runAction(signInActions.password, event);
+		expect(thrown).toMatchObject({ status: 303, location: '/projects' });
+		expect(sessionCookie(cookies)).toBeTruthy();
+	});
+
+	it('answers 400 with the message next to the password for a wrong one, and sets no cookie', async () => {
+		const cookies = cookieJar();
+		const event = formEvent({
+			url: '/signin?/password',
+			fields: { email: 'flo@shop.example', password: 'wrong', redirectTo: '/' },
+			cookies
+		});
+		const { returned } = (await runAction(signInActions.password, event)) as {
+			returned: {
+				status: number;
+				data: { form: { errors: Record<string, string[]>; data: Record<string, string> } };
+			};
+		};
+		expect(returned.status).toBe(400);
+		expect(returned.data.form.errors.password?.[0]).toMatch(/do not match/);
+		expect(returned.data.form.data.email).toBe('flo@shop.example');
+		expect(sessionCookie(cookies)).toBeUndefined();
+	});
+
+	it('answers 429 "Too many failed sign-ins" once five have failed within 15 minutes', async () => {
+		await confirmedUser('gus@shop.example', 'right password here');
+		const attempt = (password: string) =>
+			runAction(
+				signInActions.password,
+				formEvent({
+					url: '/signin?/password',
+					fields: { email: 'gus@shop.example', password },
+					clientAddress: '203.0.113.50'
+				})
+			) as Promise<{ returned: { status: number; data: { form: { message?: string } } } }>;
+		for (let i = 0; i < 5; i++) expect((await attempt('not it')).returned.status).toBe(400);
+		const refused = await attempt('right password here');
+		expect(refused.returned.status).toBe(429);
+		expect(refused.returned.data.form.message).toBe(
+			'Too many failed sign-ins; try again in 15 minutes.'
+		);
+	});
+
+	it('refuses a redirect to another site after sign-in', async () => {
+		const { thrown } = await runAction(
+			signInActions.password,
+			formEvent({
+				url: '/signin?/password',
+				fields: {
+					email: 'flo@shop.example',
+					password: 'right password here',
+					redirectTo: '//evil.example/x'
+				}
+			})
+		);
+		expect(thrown).toMatchObject({ status: 303, location: '/projects' });
+	});
+});
+
+describe('sign-up, then the mailed link', () => {
+	it('creates the account, mails a confirm-and-sign-in link, and the password waits for it', async () => {
+		const after = new Date();
+		const { thrown } = await runAction(
+			signUpActions.default,
+			formEvent({
+				url: '/signup',
+				fields: { name: 'Hana', email: 'Hana@Shop.example', password: 'a long passphrase' }
+			})
+		);
+		expect(thrown).toMatchObject({ status: 303 });
+		expect(thrown!.location).toMatch(/^\/signin\?sent=signup/);
+		const message = await waitForMailTo('hana@shop.example', { dir: mail.dir, after });
+		const link = message.links.find((l) => l.includes('/auth/callback/nodemailer'));
+		expect(link).toBeTruthy();
+		expect(new URL(link!).searchParams.get('email')).toBe('hana@shop.example');
+
+		// before the link is followed, the right password alone does not sign in
+		const early = (await runAction(
+			signInActions.password,
+			formEvent({
+				url: '/signin?/password',
+				fields: { email: 'hana@shop.example', password: 'a long passphrase' }
+			})
+		)) as { returned: { status: number; data: { form: { message?: string } } } };
+		expect(early.returned.status).toBe(400);
+		expect(early.returned.data.form.message).toMatch(/Confirm your e-mail address first/);
+
+		// following the link (Auth.js answers /auth/* itself) signs in and confirms the address
+		const url = new URL(link!);
+		const getLink = {
+			...formEvent({ url: url.pathname + url.search, fields: {} }),
+			request: new Request(url)
+		};
+		const response = await authHandle({
+			event: getLink,
+			resolve: () => new Response('not reached')
+		});
+		expect(response.status).toBe(302);
+		expect(response.headers.get('location')).toBe('http://localhost:5173/projects');
+		expect(response.headers.getSetCookie().some((c) => c.includes('authjs.session-token='))).toBe(
+			true
+		);
+		const row = db()
+			.db.select()
+			.from(schema.users)
+			.where(eq(schema.users.email, 'hana@shop.example'))
+			.get()!;
+		expect(row.emailVerified).toBeInstanceOf(Date);
+		// and the same link does not work twice
+		const again = await authHandle({
+			event: { ...getLink, request: new Request(url) },
+			resolve: () => new Response('')
+		});
+		expect(again.headers.get('location')).toMatch(/\/signin\?error=Verification/);
+
+		const later = await runAction(
+			signInActions.password,
+			formEvent({
+				url: '/signin?/password',
+				fields: { email: 'hana@shop.example', password: 'a long passphrase' }
+			})
+		);
+		expect(later.thrown).toMatchObject({ status: 303, location: '/projects' });
+	});
+
+	it('says so next to the e-mail when the address already has an account (409)', async () => {
+		const { returned } = (await runAction(
+			signUpActions.default,
+			formEvent({
+				url: '/signup',
+				fields: { name: 'Flo 2', email: 'flo@shop.example', password: 'another long one' }
+			})
+		)) as { returned: { status: number; data: { form: { errors: Record<string, string[]> } } } };
+		expect(returned.status).toBe(409);
+		expect(returned.data.form.errors.email?.[0]).toMatch(/already exists/);
+	});
+});
