@@ -11,7 +11,6 @@ import {
 } from '../../src/lib/engine';
 
 const IN = 0.0254;
-const PSI = 6894.757293168;
 
 /** A material of round figures for closed-form checks (no published source needed: the formulas
  * are checked, not the material). */
