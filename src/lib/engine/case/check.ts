@@ -1,0 +1,80 @@
+import { caseDesignSchema, type CaseDesign, type CaseDesignInput } from '../../schemas/case';
+import { JOINT_CAUTIONS } from '../joinery/cautions';
+import { planJointSI } from '../joinery/plan';
+import { parseOrThrow } from '../joinery/validate';
+import { checkStabilitySI } from '../stability/check';
+import { STABILITY_CAUTIONS } from '../stability/cautions';
+import { ENGINE_VERSION } from '../version';
+import { caseGeometry, partsList } from './geometry';
+import { assumedStocks, jointRequests } from './joints';
+import { caseMargins } from './margins';
+import { analyseShelves, ShelfAnalyses } from './shelves';
+import { anchoringSuggestion, jointSuggestions, shelfSuggestions } from './suggest';
+import type { CaseJoint, CaseResult, CaseSuggestion } from './types';
+import { stabilityRequestOf } from './weight';
+
+const SHELF_CAUTIONS = [
+	'Shelf sag and strength are estimates from published material data and beam theory; real boards vary.',
+	'Do not overload shelves: the Architectural Woodwork Standards cap one shelf at 200 lb.'
+];
+
+/**
+ * Check a whole case from the same JSON the API takes: every shelf's analysis, every joint's plan
+ * and capacity, tip-over and anchoring, the cut list, the margins worst first, and suggestions that
+ * fix each failure as changes to the design. An estimate for planning; the cautions always come
+ * with it. Throws JoineryInputError naming every bad field.
+ */
+export function checkCase(input: CaseDesignInput): CaseResult {
+	return checkCaseSI(parseOrThrow(caseDesignSchema, input));
+}
+
+/** checkCase on a design already parsed by caseDesignSchema (SI numbers). */
+export function checkCaseSI(d: CaseDesign): CaseResult {
+	const g = caseGeometry(d);
+	const runs = new ShelfAnalyses();
+	const shelves = analyseShelves(d, g, runs);
+	const requests = jointRequests(d, g, shelves);
+	const joints: CaseJoint[] = requests.map(({ req, ...rest }) => ({
+		...rest,
+		plan: planJointSI(req)
+	}));
+	const stability = checkStabilitySI(stabilityRequestOf(d, g, shelves));
+	const margins = caseMargins(shelves, joints, stability);
+	const failing = new Set(margins.filter((m) => !m.pass).map((m) => m.key));
+
+	const suggestions: CaseSuggestion[] = [];
+	for (const s of shelves) if (!s.pass) suggestions.push(...shelfSuggestions(d, g, runs, s));
+	joints.forEach((j, i) => {
+		if (!j.plan.pass) suggestions.push(...jointSuggestions(j, requests[i].req, d, g, runs));
+	});
+	const tipping = ['stability:anchoring', 'stability:front-edge'].filter((k) => failing.has(k));
+	if (tipping.length) suggestions.push(anchoringSuggestion(tipping));
+
+	const warnings = [
+		...shelves.flatMap((s) =>
+			s.analysis.warnings.filter((w) => w.code !== 'estimate').map((w) => `${s.name}: ${w.message}`)
+		),
+		...joints.flatMap((j) => j.plan.warnings.map((w) => `${j.where}: ${w}`)),
+		...stability.warnings
+	];
+	if (assumedStocks(d))
+		warnings.push(
+			'A material given by its figures is taken as softwood of its specific gravity for fastener holding.'
+		);
+
+	return {
+		estimate: true,
+		engineVersion: ENGINE_VERSION,
+		name: d.name ?? null,
+		pass: failing.size === 0,
+		summary: { failures: failing.size, worst: margins.slice(0, 5) },
+		shelves,
+		joints,
+		stability,
+		parts: partsList(d, g),
+		margins,
+		suggestions,
+		warnings: [...new Set(warnings)],
+		cautions: [...SHELF_CAUTIONS, ...JOINT_CAUTIONS, ...STABILITY_CAUTIONS]
+	};
+}

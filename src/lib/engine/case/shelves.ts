@@ -1,0 +1,124 @@
+import type { ShelfRequest } from '../../schemas/shelf';
+import { analyzeShelf } from '../analyze';
+import { ShelfInputError } from '../errors';
+import { JoineryInputError } from '../joinery/validate';
+import type { ShelfResult } from '../types';
+import type { CaseGeometry } from './geometry';
+import type { CaseDesign, CaseShelf, DesignPath } from './types';
+
+type DesignShelf = CaseDesign['shelves'][number];
+
+/** The shelf engine request for one shelf of the case (SI numbers, which the shelf schema accepts). */
+export function shelfRequest(
+	d: CaseDesign,
+	g: CaseGeometry,
+	s: DesignShelf,
+	spanM = g.innerWidthM
+): ShelfRequest {
+	return {
+		span: spanM,
+		depth: g.insideDepthM - (s.nosing?.thickness ?? 0),
+		thickness: s.thickness ?? d.sides.thickness,
+		material: s.material ?? d.sides.material,
+		grain: 'along',
+		support: s.kind === 'fixed' && s.ends === 'fixed' ? 'fixed' : 'simple',
+		loads: s.loads,
+		selfWeight: true,
+		edges: s.nosing ? [{ side: 'front', ...s.nosing }] : [],
+		duration: 'long',
+		service: d.service,
+		limit: d.limit
+	};
+}
+
+/** Identical shelves are analysed once per check: a case often repeats one shelf many times. */
+export class ShelfAnalyses {
+	private memo = new Map<string, ShelfResult>();
+
+	run(request: ShelfRequest, path: DesignPath): ShelfResult {
+		const key = JSON.stringify(request);
+		const hit = this.memo.get(key);
+		if (hit) return hit;
+		try {
+			const result = analyzeShelf(request);
+			this.memo.set(key, result);
+			return result;
+		} catch (e) {
+			if (e instanceof ShelfInputError) {
+				const issues = e.issues.map((i) => ({ path: [...path, ...i.path], message: i.message }));
+				throw new JoineryInputError(
+					issues[0]?.path.join('.') ?? path.join('.'),
+					issues[0]?.message ?? e.message,
+					issues
+				);
+			}
+			throw e;
+		}
+	}
+}
+
+/** Top and bottom count as shelves when they carry something. */
+export function asShelf(d: CaseDesign, key: 'top' | 'bottom'): DesignShelf {
+	const p = d[key];
+	return {
+		height: 0,
+		kind: 'fixed',
+		material: p.material,
+		thickness: p.thickness,
+		joint: p.joint,
+		jointCount: p.jointCount,
+		ends: 'simple',
+		loads: p.loads
+	};
+}
+
+export function analyseShelves(d: CaseDesign, g: CaseGeometry, runs: ShelfAnalyses): CaseShelf[] {
+	const out: CaseShelf[] = [];
+	d.shelves.forEach((s, i) => {
+		const path = ['shelves', i];
+		const analysis = runs.run(shelfRequest(d, g, s), path);
+		out.push(view(path, s.name ?? `shelf ${i + 1}`, s.kind, s.height, g, s, d, analysis));
+	});
+	for (const key of ['top', 'bottom'] as const) {
+		if (!d[key].loads.length) continue;
+		const s = asShelf(d, key);
+		const analysis = runs.run(shelfRequest(d, g, s), [key]);
+		const t = s.thickness ?? d.sides.thickness;
+		const height = key === 'top' ? d.height : g.baseHeightM + t;
+		out.push(view([key], key, key, height, g, s, d, analysis));
+	}
+	return out;
+}
+
+function view(
+	path: DesignPath,
+	name: string,
+	kind: CaseShelf['kind'],
+	heightM: number,
+	g: CaseGeometry,
+	s: DesignShelf,
+	d: CaseDesign,
+	analysis: ShelfResult
+): CaseShelf {
+	return {
+		path,
+		name,
+		kind,
+		heightM,
+		spanM: g.innerWidthM,
+		depthM: g.insideDepthM - (s.nosing?.thickness ?? 0),
+		thicknessM: s.thickness ?? d.sides.thickness,
+		analysis,
+		pass: analysis.limit.pass && analysis.strength.pass
+	};
+}
+
+/** The larger end reaction and end moment of a shelf, for its joints. */
+export function endDemand(a: ShelfResult): { shearN: number; momentNM: number } {
+	const first = a.reactions[0];
+	const last = a.reactions[a.reactions.length - 1];
+	return {
+		shearN: Math.max(first?.force ?? 0, last?.force ?? 0, 0),
+		momentNM: Math.max(Math.abs(first?.moment ?? 0), Math.abs(last?.moment ?? 0))
+	};
+}
