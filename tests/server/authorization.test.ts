@@ -8,6 +8,15 @@ import * as workshopApi from '../../src/routes/api/v1/workshops/[id]/+server';
 import * as projectsApi from '../../src/routes/api/v1/projects/+server';
 import * as projectApi from '../../src/routes/api/v1/projects/[id]/+server';
 import { createProject } from '../../src/lib/server/projects';
+import * as analysesApi from '../../src/routes/api/v1/projects/[id]/analyses/+server';
+import * as analysisApi from '../../src/routes/api/v1/analyses/[id]/+server';
+import * as undeleteApi from '../../src/routes/api/v1/analyses/[id]/undelete/+server';
+import * as revisionsApi from '../../src/routes/api/v1/analyses/[id]/revisions/+server';
+import * as revisionApi from '../../src/routes/api/v1/analyses/[id]/revisions/[version]/+server';
+import * as duplicateApi from '../../src/routes/api/v1/analyses/[id]/duplicate/+server';
+import * as moveApi from '../../src/routes/api/v1/analyses/[id]/move/+server';
+import { deleteAnalysis, updateAnalysis } from '../../src/lib/server/analyses';
+import { handShelf, saveShelf } from './support/analyses';
 import type { Actor } from '../../src/lib/server/access';
 
 useTempDb();
@@ -88,6 +97,127 @@ const table: Row[] = [
 		expect: { anonymous: 401, viewer: 403, editor: 204, owner: 204, outsider: 404 }
 	}
 ];
+
+// ---- saved analyses: each case saves one (as the owner) in the case's project ----
+const read = { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 404 };
+const write = { anonymous: 401, viewer: 403, editor: 200, owner: 200, outsider: 404 };
+const analysisOf = (c: Cast, projectId: string) => saveShelf(c.owner, projectId).id;
+
+table.push(
+	{
+		route: 'GET /projects/{id}/analyses',
+		call: (a, _c, id) => analysesApi.GET(event({ actor: a, params: { id } })),
+		expect: read
+	},
+	{
+		route: 'POST /projects/{id}/analyses',
+		call: (a, _c, id) =>
+			analysesApi.POST(
+				event({
+					actor: a,
+					method: 'POST',
+					params: { id },
+					body: { kind: 'shelf', name: 'Bay shelf', input: handShelf }
+				})
+			),
+		expect: { ...write, editor: 201, owner: 201 }
+	},
+	{
+		route: 'GET /analyses/{id}',
+		call: (a, c, p) => analysisApi.GET(event({ actor: a, params: { id: analysisOf(c, p) } })),
+		expect: read
+	},
+	{
+		route: 'PATCH /analyses/{id}',
+		call: (a, c, p) =>
+			analysisApi.PATCH(
+				event({
+					actor: a,
+					method: 'PATCH',
+					params: { id: analysisOf(c, p) },
+					body: { version: 1, name: 'Renamed' }
+				})
+			),
+		expect: write
+	},
+	{
+		route: 'PUT /analyses/{id}',
+		call: (a, c, p) =>
+			analysisApi.PUT(
+				event({
+					actor: a,
+					method: 'PUT',
+					params: { id: analysisOf(c, p) },
+					body: { version: 1, name: 'Replaced', input: handShelf }
+				})
+			),
+		expect: write
+	},
+	{
+		route: 'DELETE /analyses/{id}',
+		call: (a, c, p) =>
+			analysisApi.DELETE(event({ actor: a, method: 'DELETE', params: { id: analysisOf(c, p) } })),
+		expect: write
+	},
+	{
+		route: 'POST /analyses/{id}/undelete',
+		call: (a, c, p) => {
+			const id = analysisOf(c, p);
+			deleteAnalysis(c.owner, id);
+			return undeleteApi.POST(event({ actor: a, method: 'POST', params: { id } }));
+		},
+		expect: write
+	},
+	{
+		route: 'GET /analyses/{id}/revisions',
+		call: (a, c, p) => revisionsApi.GET(event({ actor: a, params: { id: analysisOf(c, p) } })),
+		expect: read
+	},
+	{
+		route: 'GET /analyses/{id}/revisions/{version}',
+		call: (a, c, p) =>
+			revisionApi.GET(event({ actor: a, params: { id: analysisOf(c, p), version: '1' } })),
+		expect: read
+	},
+	{
+		route: 'POST /analyses/{id}/revisions/{version}',
+		call: (a, c, p) => {
+			const id = analysisOf(c, p);
+			updateAnalysis(c.owner, id, { name: 'Second', version: 1 });
+			return revisionApi.POST(
+				event({ actor: a, method: 'POST', params: { id, version: '1' }, body: {} })
+			);
+		},
+		expect: write
+	},
+	{
+		route: 'POST /analyses/{id}/duplicate',
+		call: (a, c, p) =>
+			duplicateApi.POST(
+				event({ actor: a, method: 'POST', params: { id: analysisOf(c, p) }, body: {} })
+			),
+		expect: { ...write, editor: 201, owner: 201 }
+	},
+	{
+		route: 'POST /analyses/{id}/move',
+		call: (a, c, p) => {
+			const target = createProject(c.owner, c.workshopId, {
+				name: 'Hall',
+				client: '',
+				siteNotes: ''
+			});
+			return moveApi.POST(
+				event({
+					actor: a,
+					method: 'POST',
+					params: { id: analysisOf(c, p) },
+					body: { projectId: target.id }
+				})
+			);
+		},
+		expect: write
+	}
+);
 
 const whos: Who[] = ['anonymous', 'viewer', 'editor', 'owner', 'outsider'];
 
