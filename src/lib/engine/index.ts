@@ -27,7 +27,7 @@ export type {
 	ShelfRequest,
 	SupportInput
 } from '../schemas/shelf';
-export { analyzeShelf, safeAnalyzeShelf, safely } from './analyze';
+export { analyzeShelf, analyzeInput, safeAnalyzeShelf, safely } from './analyze';
 export { ENGINE_VERSION } from './version';
 export { deflectionLimit, type DeflectionLimit } from './limits';
 export {
@@ -49,6 +49,10 @@ export {
 	minThickness,
 	minEdge,
 	maxLoad,
+	maxSpanInput,
+	minThicknessInput,
+	minEdgeInput,
+	maxLoadInput,
 	safeMaxSpan,
 	safeMinThickness,
 	safeMinEdge,
@@ -60,3 +64,31 @@ export {
 	type MaxLoadResult,
 	type ThicknessTrial
 } from './solvers';
+
+// Joinery, stability and the whole-case check (issue 4)
+export { planJoint, planJointSI, JoineryInputError, type InputIssue } from './joinery';
+export type {
+	JointRequest,
+	JointPlan,
+	JointKind,
+	FastenerKind,
+	FastenerPosition,
+	CapacityCheck,
+	StockMaterial
+} from './joinery';
+export { checkStability, checkStabilitySI } from './stability';
+export type { StabilityRequest, StabilityResult, FrontEdgeLoad } from './stability';
+export { checkCase, checkCaseSI } from './case';
+export type {
+	CaseResult,
+	CaseShelf,
+	CaseJoint,
+	CasePart,
+	CaseMargin,
+	CaseSuggestion,
+	DesignChange,
+	DesignPath
+} from './case';
+export type { JointInput } from '../schemas/joinery';
+export type { StabilityInput } from '../schemas/stability';
+export type { CaseDesign, CaseDesignInput } from '../schemas/case';

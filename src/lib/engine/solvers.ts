@@ -3,6 +3,7 @@
  * and the largest load that meet the limit. Each runs the whole analysis (bending, shear, creep,
  * self-weight) inside a bracketed root find, so none is a closed-form shortcut.
  */
+import type { z } from 'zod';
 import {
 	maxLoadRequestSchema,
 	maxSpanRequestSchema,
@@ -97,7 +98,11 @@ export interface MaxSpanResult {
 
 /** The longest span that meets the limit (for several spans: their common scale). */
 export function maxSpan(request: MaxSpanRequest): MaxSpanResult {
-	const input = parseRequest(maxSpanRequestSchema, request);
+	return maxSpanInput(parseRequest(maxSpanRequestSchema, request));
+}
+
+/** maxSpan of a request already validated by maxSpanRequestSchema. */
+export function maxSpanInput(input: z.output<typeof maxSpanRequestSchema>): MaxSpanResult {
 	rejectPositioned(input, 'the longest-span search');
 	const base = typeof input.support === 'object' ? input.support.spans : [1];
 	const baseTotal = base.reduce((a, b) => a + b, 0);
@@ -159,7 +164,13 @@ export interface MinThicknessResult {
 
 /** The thinnest stocked (or given) thickness that meets the limit. */
 export function minThickness(request: MinThicknessRequest): MinThicknessResult {
-	const input = parseRequest(minThicknessRequestSchema, request);
+	return minThicknessInput(parseRequest(minThicknessRequestSchema, request));
+}
+
+/** minThickness of a request already validated by minThicknessRequestSchema. */
+export function minThicknessInput(
+	input: z.output<typeof minThicknessRequestSchema>
+): MinThicknessResult {
 	const lib = buildModel({ ...input, thickness: 0.019 }).panel;
 	const candidates = (
 		input.candidates?.map((t) => ({ thickness: t, label: `${(t * 1000).toFixed(1)} mm` })) ??
@@ -217,7 +228,11 @@ export interface MinEdgeResult {
 
 /** The smallest height of a strip (of given material and thickness) that makes the shelf meet it. */
 export function minEdge(request: MinEdgeRequest): MinEdgeResult {
-	const input = parseRequest(minEdgeRequestSchema, request);
+	return minEdgeInput(parseRequest(minEdgeRequestSchema, request));
+}
+
+/** minEdge of a request already validated by minEdgeRequestSchema. */
+export function minEdgeInput(input: z.output<typeof minEdgeRequestSchema>): MinEdgeResult {
 	const { strip } = input;
 	const others = input.edges.filter((e) => e.side !== strip.side);
 	const withStrip = (h: number): ShelfInput => ({
@@ -261,7 +276,11 @@ export interface MaxLoadResult {
 
 /** The largest magnitude of one load of a given shape that the shelf carries within the limit. */
 export function maxLoad(request: MaxLoadRequest): MaxLoadResult {
-	const input = parseRequest(maxLoadRequestSchema, request);
+	return maxLoadInput(parseRequest(maxLoadRequestSchema, request));
+}
+
+/** maxLoad of a request already validated by maxLoadRequestSchema. */
+export function maxLoadInput(input: z.output<typeof maxLoadRequestSchema>): MaxLoadResult {
 	const shape = input.load;
 	const loadOf = (x: number): ShelfInput['loads'][number] =>
 		shape.kind === 'area'

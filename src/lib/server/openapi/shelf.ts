@@ -1,3 +1,72 @@
+import {
+	maxLoadRequestSchema,
+	maxSpanRequestSchema,
+	minEdgeRequestSchema,
+	minThicknessRequestSchema,
+	shelfRequestSchema
+} from '$lib/schemas/shelf';
 import type { ApiOperation } from './types';
 
-export const shelfOperations: ApiOperation[] = [];
+const computed = {
+	200: 'Computed (SI units: m, N, Pa, N·m)',
+	400: 'The body is not JSON',
+	413: 'The body is too large',
+	422: 'A field needs attention; each issue names its path and what was expected'
+};
+
+export const shelfOperations: ApiOperation[] = [
+	{
+		method: 'post',
+		path: '/shelf',
+		summary: 'Analyse a shelf: instant and long-term sag, limit check, stress, reactions, curve',
+		tag: 'shelf',
+		body: shelfRequestSchema,
+		auth: 'none',
+		responses: computed
+	},
+	{
+		method: 'post',
+		path: '/shelf/max-span',
+		summary: 'The longest span that meets the limit (shear, creep and self-weight included)',
+		tag: 'shelf',
+		body: maxSpanRequestSchema,
+		auth: 'none',
+		responses: computed
+	},
+	{
+		method: 'post',
+		path: '/shelf/min-thickness',
+		summary: 'The thinnest stocked (or given) thickness that meets the limit',
+		tag: 'shelf',
+		body: minThicknessRequestSchema,
+		auth: 'none',
+		responses: computed
+	},
+	{
+		method: 'post',
+		path: '/shelf/min-edge',
+		summary: 'The smallest strip (front, back or below) that makes a shelf meet the limit',
+		tag: 'shelf',
+		body: minEdgeRequestSchema,
+		auth: 'none',
+		responses: computed
+	},
+	{
+		method: 'post',
+		path: '/shelf/max-load',
+		summary:
+			'The largest load of a given shape the shelf carries within the limit and its strength',
+		tag: 'shelf',
+		body: maxLoadRequestSchema,
+		auth: 'none',
+		responses: computed
+	},
+	{
+		method: 'get',
+		path: '/materials',
+		summary: 'The shelf material library with a source for every figure',
+		tag: 'shelf',
+		auth: 'none',
+		responses: { 200: 'The materials (SI units)' }
+	}
+];

@@ -1,0 +1,6 @@
+import { maxLoadInput } from '$lib/engine';
+import { maxLoadRequestSchema } from '$lib/schemas/shelf';
+import { computeRoute } from '../compute';
+
+/** POST /api/v1/shelf/max-load: the largest load of a given shape within the limit and strength. */
+export const POST = computeRoute(maxLoadRequestSchema, maxLoadInput);
