@@ -1,16 +1,15 @@
 // The server the browser journeys run against: the production build on a fresh data folder with
 // the demo scenario, and a mail catcher whose messages the specs read from the data folder.
 import { rmSync } from 'node:fs';
-import { E2E_DATA_DIR } from './env';
+import { E2E_DATA_DIR, E2E_PORT } from './env';
 
-const port = Number(process.env.E2E_PORT ?? 4173);
+const port = E2E_PORT;
 const mailPort = Number(process.env.E2E_MAIL_PORT ?? 2626);
 rmSync(E2E_DATA_DIR, { recursive: true, force: true });
 process.env.SPANWRIGHT_DATA_DIR = E2E_DATA_DIR;
 process.env.SMTP_URL = `smtp://127.0.0.1:${mailPort}`;
 process.env.PORT = String(port);
 process.env.ORIGIN = `http://localhost:${port}`;
-process.env.AUTH_URL = `http://localhost:${port}`;
 process.env.AUTH_SECRET ??= 'e2e-only-secret-not-for-production-0123456789';
 
 const { seedDemo } = await import('../../../src/lib/server/demo/seed');
