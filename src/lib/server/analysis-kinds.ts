@@ -21,6 +21,7 @@ import {
 } from '$lib/schemas/analysis';
 import type { AnalysisKind } from './db/schema';
 import type { ProblemIssue } from './http';
+import { caseKind, jointKind, stabilityKind, type KindOf } from './analysis-kinds-case';
 import {
 	comparisonSentence,
 	edgesWords,
@@ -153,9 +154,42 @@ const comparison: AnalysisKindSpec<typeof comparisonRequestSchema> = {
 	]
 };
 
+// ---- joint, stability, case: the joinery engine (analysis-kinds-case.ts) ----
+/** Top-level fields as rows; nested parts as compact JSON (SI numbers). */
+function plainRows(input: unknown): [string, string][] {
+	return Object.entries(input as Record<string, unknown>).map(([key, value]) => [
+		key,
+		typeof value === 'object' ? JSON.stringify(value) : String(value)
+	]);
+}
+
+function fromKind<S extends z.ZodType, R>(k: KindOf<S, R>): AnalysisKindSpec<S> {
+	return {
+		schema: k.stored,
+		compute(input) {
+			const run = k.run(input);
+			if (!run.ok) return run;
+			const result = run.value as R & { engineVersion?: string };
+			return {
+				ok: true,
+				computed: {
+					result,
+					pass: k.pass(result),
+					engineVersion: result.engineVersion ?? ENGINE_VERSION
+				}
+			};
+		},
+		describe: (_input, result: R, unit) => k.describe(result, unit),
+		inputRows: (input) => plainRows(input)
+	};
+}
+
 const registry: Partial<Record<AnalysisKind, AnalysisKindSpec>> = {
 	shelf: shelf as unknown as AnalysisKindSpec,
-	comparison: comparison as unknown as AnalysisKindSpec
+	comparison: comparison as unknown as AnalysisKindSpec,
+	joint: fromKind(jointKind) as unknown as AnalysisKindSpec,
+	stability: fromKind(stabilityKind) as unknown as AnalysisKindSpec,
+	case: fromKind(caseKind) as unknown as AnalysisKindSpec
 };
 
 /** Kinds that can be saved now. */
