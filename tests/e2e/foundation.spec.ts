@@ -34,8 +34,8 @@ test('sign up, confirm by mail, share a project with a viewer who cannot change 
 
 	await page.goto('/projects');
 	await expect(page.getByText('No projects yet.')).toBeVisible();
-	await page.getByLabel('Name').fill('Study bookcases');
-	await page.getByLabel('Client').fill('The Ferrands');
+	await page.getByLabel('Name', { exact: true }).fill('Study bookcases');
+	await page.getByLabel('Client', { exact: true }).fill('The Ferrands');
 	await page.getByRole('button', { name: 'Create project' }).click();
 	await expect(page.getByRole('heading', { level: 1, name: 'Study bookcases' })).toBeVisible();
 	const projectUrl = page.url();
@@ -84,7 +84,9 @@ test('sign up, confirm by mail, share a project with a viewer who cannot change 
 		form: { name: 'Taken over', client: '', siteNotes: '' },
 		headers: { origin: new URL(projectUrl).origin, 'x-sveltekit-action': 'true' }
 	});
-	expect((await formPost.json()).status).toBe(403);
+	const formResult = await formPost.json();
+	expect(formPost.status()).toBe(403);
+	expect(formResult).toMatchObject({ type: 'error', error: { message: /editor role/ } });
 	await viewer.reload();
 	await expect(viewer.getByRole('heading', { level: 1, name: 'Study bookcases' })).toBeVisible();
 
