@@ -76,7 +76,7 @@ export function shelfSuggestions(
 				};
 				out.push({
 					title: `Glue a ${len(nosing.height)} × 3/4" nosing to the front of ${shelf.name}`,
-					detail: `A solid ${findMaterial(String(nosingMaterial))?.name ?? 'wood'} strip, ${len(nosing.height)} tall, glued along the front edge (the shelf panel gets 3/4" shallower).`,
+					detail: `A solid-wood strip (${findMaterial(String(nosingMaterial))?.name ?? 'solid wood'}), ${len(nosing.height)} tall and 3/4" thick, glued along the front edge; the panel behind it gets 3/4" shallower.`,
 					fixes,
 					changes: [{ path: [...shelf.path, 'nosing'], value: nosing }],
 					verified: passes({ ...s, nosing })

@@ -5,7 +5,7 @@
  */
 
 /** A part of the case whose weight counts: by its mass, or by size and density. */
-export interface CasePart {
+export interface WeighedPart {
 	name?: string;
 	massKg?: number;
 	/** with densityKgPerM3: the panel's three dimensions */
@@ -18,7 +18,7 @@ export interface CasePart {
 }
 
 export type Construction =
-	{ massKg: number; centreHeightM?: number; centreFromFrontM?: number } | { parts: CasePart[] };
+	{ massKg: number; centreHeightM?: number; centreFromFrontM?: number } | { parts: WeighedPart[] };
 
 export interface ShelfContents {
 	massKg: number;
