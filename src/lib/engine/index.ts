@@ -27,7 +27,7 @@ export type {
 	ShelfRequest,
 	SupportInput
 } from '../schemas/shelf';
-export { analyzeShelf, safeAnalyzeShelf, safely } from './analyze';
+export { analyzeShelf, analyzeInput, safeAnalyzeShelf, safely } from './analyze';
 export { ENGINE_VERSION } from './version';
 export { deflectionLimit, type DeflectionLimit } from './limits';
 export {
@@ -49,6 +49,10 @@ export {
 	minThickness,
 	minEdge,
 	maxLoad,
+	maxSpanInput,
+	minThicknessInput,
+	minEdgeInput,
+	maxLoadInput,
 	safeMaxSpan,
 	safeMinThickness,
 	safeMinEdge,
