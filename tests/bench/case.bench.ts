@@ -32,6 +32,18 @@ const twelveDifferent: CaseDesignInput = {
 
 const parsed = caseDesignSchema.parse(twelveShelves);
 
+/** The bare closed form a hand check would use: 12 simply supported sags, 5wL⁴/384EI, inline.
+ * Printed beside checkCase so the ratio on the same machine in the same run is the figure. */
+let sink = 0;
+function bareFormulas() {
+	for (let i = 0; i < 12; i++) {
+		const w = 1915 * 0.29 + i; // N/m
+		const l = 0.8763;
+		const ei = 1.8e9 * ((0.29 * 0.019 ** 3) / 12);
+		sink += (5 * w * l ** 4) / (384 * ei);
+	}
+}
+
 describe('checkCase, a case of 12 shelves', () => {
 	bench('checkCase (JSON with quantity strings in)', () => {
 		checkCase(twelveShelves);
@@ -41,5 +53,9 @@ describe('checkCase, a case of 12 shelves', () => {
 	});
 	bench('checkCase, 12 different shelf loads (no repeated analysis)', () => {
 		checkCase(twelveDifferent);
+	});
+	bench('baseline: 12 bare sag formulas inline', () => {
+		bareFormulas();
+		if (sink < 0) throw new Error('unreachable');
 	});
 });

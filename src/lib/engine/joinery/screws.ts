@@ -99,6 +99,9 @@ export function planPocketScrews(ctx: PlanContext): FastenerPart {
 		ceg
 	);
 	notes.push(`Thread: ${thread}, for ${face.name}.`);
+	notes.push(
+		'No peer-reviewed strength study of pocket-screw joints was found: the capacity comes from the wood-screw withdrawal and yield-limit formulas and is an estimate.'
+	);
 	return {
 		description: `pocket screw #${gauge} × ${inchLabel(inches(lengthM))} ${thread} thread`,
 		count,
