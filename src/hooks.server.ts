@@ -1,8 +1,13 @@
-import type { Handle, HandleServerError } from '@sveltejs/kit';
+import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
-import { dev } from '$app/environment';
+import { building, dev } from '$app/environment';
 import { actorForUserId, actorFromBearer } from '$lib/server/accounts';
-import { authHandle } from '$lib/server/auth';
+import { authHandle, authSecret } from '$lib/server/auth';
+
+/** Refuse to start a production server without AUTH_SECRET, rather than fail every request. */
+export const init: ServerInit = () => {
+	if (!building) authSecret();
+};
 
 /** Who is acting: an API token on /api/ requests, else the Auth.js session cookie. */
 export const actorHandle: Handle = async ({ event, resolve }) => {

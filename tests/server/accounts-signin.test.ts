@@ -111,6 +111,7 @@ describe('sign-up, then the mailed link', () => {
 		expect(thrown).toMatchObject({ status: 303 });
 		expect(thrown!.location).toMatch(/^\/signin\?sent=signup/);
 		const message = await waitForMailTo('hana@shop.example', { dir: mail.dir, after });
+		expect(message.subject).toBe('Confirm your address for Spanwright');
 		const link = message.links.find((l) => l.includes('/auth/callback/nodemailer'));
 		expect(link).toBeTruthy();
 		expect(new URL(link!).searchParams.get('email')).toBe('hana@shop.example');

@@ -16,6 +16,7 @@ import {
 	getProfile
 } from '../../src/lib/server/accounts';
 import { latestMailTo, waitForMailTo } from '../../src/lib/server/dev/caught-mail';
+import { linksIn } from '../../src/lib/server/dev/mail-catcher';
 import { schema } from '../../src/lib/server/db';
 import { listWorkshops } from '../../src/lib/server/workshops';
 import { useTempDb } from './support/db';
@@ -173,6 +174,14 @@ describe('password reset', () => {
 		await requestPasswordReset('ghost@shop.example', 'http://localhost:5173');
 		await new Promise((r) => setTimeout(r, 200));
 		expect(latestMailTo('ghost@shop.example', mail.dir)).toBeNull();
+	});
+});
+
+describe('the mail catcher', () => {
+	it('keeps each link once, whether it came from the text or an escaped href', () => {
+		const url = 'http://localhost:5173/auth/callback/nodemailer?token=abc&email=a%40b.test';
+		const html = `<a href="${url.replace(/&/g, '&#38;')}">Sign in</a> <a href="${url.replace(/&/g, '&amp;')}">x</a>`;
+		expect(linksIn(`Open ${url}\n`, html)).toEqual([url]);
 	});
 });
 

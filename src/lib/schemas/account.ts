@@ -15,7 +15,7 @@ export const emailField = z
 // Long passphrases are welcome; the upper bound only keeps hashing cheap for the server.
 export const newPasswordField = z
 	.string()
-	.min(10, 'Use at least 10 characters; a few plain words make a good one.')
+	.min(10, 'That is shorter than 10 characters.')
 	.max(200, 'Keep the password under 200 characters.');
 
 const passwordField = z

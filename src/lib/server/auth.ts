@@ -9,7 +9,14 @@ import { signInSchema } from '$lib/schemas/account';
 import { allowMailTo, findUserByEmail, passwordSignIn, throttleMessage } from './accounts';
 import { getDb } from './db';
 import { accounts, sessions, users, verificationTokens } from './db/schema';
-import { linkOrigin, mailFrom, sendNoAccountNotice, sendSignInLink, smtpUrl } from './mail';
+import {
+	linkOrigin,
+	mailFrom,
+	sendAddressConfirmation,
+	sendNoAccountNotice,
+	sendSignInLink,
+	smtpUrl
+} from './mail';
 
 /** Thrown by the password check when the throttle refuses; carries the wait for the message. */
 export class SignInThrottled extends CredentialsSignin {
@@ -29,7 +36,7 @@ export const SIGN_IN_LINK_MAX_AGE_S = 60 * 60;
 const DEV_SECRET = 'spanwright-dev-only-secret-never-use-in-production';
 let warnedDevSecret = false;
 
-function authSecret(): string {
+export function authSecret(): string {
 	const secret = env.AUTH_SECRET || process.env.AUTH_SECRET;
 	if (secret) return secret;
 	if (!dev)
@@ -93,7 +100,9 @@ async function authConfig(event: RequestEvent): Promise<SvelteKitAuthConfig> {
 				from: mailFrom(),
 				maxAge: SIGN_IN_LINK_MAX_AGE_S,
 				async sendVerificationRequest({ identifier, url }) {
-					await sendSignInLink(identifier, rebase(url, event));
+					const link = rebase(url, event);
+					if (findUserByEmail(identifier)?.emailVerified) await sendSignInLink(identifier, link);
+					else await sendAddressConfirmation(identifier, link);
 				}
 			})
 		],

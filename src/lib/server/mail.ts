@@ -80,6 +80,22 @@ export async function sendSignInLink(to: string, url: string) {
 	});
 }
 
+/** The first link after sign-up: it confirms the address and signs in. */
+export async function sendAddressConfirmation(to: string, url: string) {
+	const lines = [
+		'Welcome to Spanwright.',
+		'Open the link below to confirm this is your address and sign in. It works once, for the next hour.'
+	];
+	const after =
+		'If you did not make a Spanwright account, ignore this message; without the link nobody can use the address.';
+	return sendMail({
+		to,
+		subject: 'Confirm your address for Spanwright',
+		text: `${lines.join('\n\n')}\n\n${url}\n\n${after}\n`,
+		html: letterHtml(lines, { href: url, label: 'Confirm and sign in' }, after)
+	});
+}
+
 /** Sent when someone asks for a sign-in link for an address that has no account yet. */
 export async function sendNoAccountNotice(to: string, signUpUrl: string) {
 	const lines = [

@@ -38,7 +38,9 @@ function addresses(field: AddressObject | AddressObject[] | undefined): string[]
 export function linksIn(text: string, html: string): string[] {
 	const found = [
 		...(text.match(/https?:\/\/[^\s<>"')]+/g) ?? []),
-		...[...html.matchAll(/href="(https?:\/\/[^"]+)"/g)].map((m) => m[1].replace(/&amp;/g, '&'))
+		...[...html.matchAll(/href="(https?:\/\/[^"]+)"/g)].map((m) =>
+			m[1].replace(/&(amp|#38|#x26);/gi, '&')
+		)
 	];
 	return [...new Set(found)];
 }

@@ -1,16 +1,16 @@
 import { error } from '@sveltejs/kit';
 import { dev } from '$app/environment';
-import { listCaughtMail } from '$lib/server/dev/caught-mail';
 import type { PageServerLoad } from './$types';
 
-// Development only: what the local mail catcher kept. A production build answers 404 here
-// (`dev` is false there at build time, so the folder is never read).
-export const load: PageServerLoad = () => {
+// Development only: what the local mail catcher kept. A production build answers 404 here, and
+// since `dev` is the constant false there, the branch that reads the mail folder is not bundled.
+export const load: PageServerLoad = async () => {
 	if (!dev) error(404, 'Not found.');
-	return {
-		messages: listCaughtMail()
-			.slice(0, 100)
-			.map(({ id, to, from, subject, text, links, receivedAt }) => ({
+	if (dev) {
+		const { listCaughtMail } = await import('$lib/server/dev/caught-mail');
+		const messages = listCaughtMail().slice(0, 100);
+		return {
+			messages: messages.map(({ id, to, from, subject, text, links, receivedAt }) => ({
 				id,
 				to,
 				from,
@@ -19,5 +19,7 @@ export const load: PageServerLoad = () => {
 				links,
 				receivedAt
 			}))
-	};
+		};
+	}
+	return { messages: [] };
 };
