@@ -192,6 +192,17 @@ describe('checkCase: requests', () => {
 		);
 	});
 
+	it('a material given by its figures is held as softwood of its specific gravity, and says so', () => {
+		// density 560 kg/m³ → G = 560 / 1120 = 0.50 (the inverse of the density rule of reference/materials.ts)
+		const custom = { name: 'shop panel', modulus: '1.2e6 psi', rupture: '5000 psi', density: 560 };
+		const r = checkCase(bookcase({ sides: { material: custom, thickness: '3/4"' } }));
+		expect(r.warnings.join(' ')).toMatch(/taken as softwood/);
+		const side = r.joints[0].plan;
+		expect(side.fastener).toBe('shelf-pin');
+		// shelf-pin bearing uses the side: Fe = 16,600 · 0.5^1.84 = 4636.7 psi
+		expect(side.sources[0]).toMatch(/shop panel/);
+	});
+
 	it('names every bad field', () => {
 		try {
 			checkCase({ ...bookcase(), width: '1"', shelves: [{ height: '90"' }] });

@@ -210,6 +210,36 @@ describe('screws through the side, shelf pins and a dado', () => {
 	});
 });
 
+describe('other joints', () => {
+	it('a divider on a shelf and a face-frame rail take the same planners', () => {
+		const divider = planJointSI(
+			shelfJoint({
+				kind: 'divider-to-shelf',
+				fastener: 'screw',
+				endPiece: { material: 'mdf', thicknessM: 0.75 * IN }
+			})
+		);
+		// MDF edge: first screw 70 mm from each corner (mdf-info.eu), then at most 6" apart
+		expect(divider.positions[0].alongM).toBeCloseTo(0.07, 12);
+		expect(divider.notes.join(' ')).toMatch(/pilot holes/i);
+		// a 1-1/2" rail is too narrow for a #0 biscuit (47 mm + 6 mm slot overrun)
+		const rail = planJointSI(
+			shelfJoint({
+				kind: 'rail-to-stile',
+				lengthM: 1.5 * IN,
+				endPiece: { material: 'red-oak', thicknessM: 0.75 * IN }
+			})
+		);
+		expect(rail.count).toBe(0);
+		expect(rail.pass).toBe(false);
+		expect(
+			planJointSI(
+				shelfJoint({ kind: 'rail-to-stile', fastener: 'pocket-screw', lengthM: 1.5 * IN })
+			).count
+		).toBe(1);
+	});
+});
+
 describe('requests and errors', () => {
 	it('takes quantity strings like the shelf engine', () => {
 		const p = planJoint({

@@ -72,6 +72,25 @@ describe('tip-over of an 80" × 17" bookcase, worked by hand', () => {
 		expect(r.warnings.join(' ')).toMatch(/60 lb/);
 	});
 
+	it('EN 14749 forces on the open drawer (clauses unverified), worked by hand', () => {
+		// M_r (empty, open) = 767.5 lb·in = 86.72 N·m. 350 N down at 14" (0.3556 m) in front of the tipping
+		// line plus 50 N outward at 30" (0.762 m): 124.46 + 38.10 = 162.56 N·m → margin 0.5335.
+		// 100 N down, open and unloaded: 35.56 N·m → margin 2.439.
+		const r = checkStabilitySI(
+			bookcase({
+				drawers: [{ heightM: 30 * IN, massKg: 15 * LB, contentsKg: 20 * LB, extensionM: 14 * IN }]
+			})
+		);
+		const mr = 767.5 * LBF * IN;
+		const [f2057, tall, light] = r.standards;
+		expect(tall.margin).toBeCloseTo(mr / (350 * 14 * IN + 50 * 30 * IN), 9);
+		expect(tall.margin).toBeCloseTo(0.5335, 3);
+		expect(tall.pass).toBe(false);
+		expect(light.margin).toBeCloseTo(mr / (100 * 14 * IN), 9);
+		expect(light.pass).toBe(true);
+		expect(f2057.margin).toBeCloseTo(767.5 / (60 * 14), 9);
+	});
+
 	it('the restraint recommendation is at least the ASTM F3096 test pull (50 lbf 2014, 60 lbf 2023)', () => {
 		const r = checkStabilitySI(bookcase());
 		expect(r.restraint.f3096TestN.edition2014 / LBF).toBeCloseTo(50, 9);
