@@ -1,6 +1,8 @@
 // The server the browser journeys run against: the production build on a fresh data folder with
 // the demo scenario, and a mail catcher whose messages the specs read from the data folder.
 import { rmSync } from 'node:fs';
+import { join } from 'node:path';
+import { pathToFileURL } from 'node:url';
 import { E2E_DATA_DIR, E2E_PORT } from './env';
 
 const port = E2E_PORT;
@@ -16,5 +18,5 @@ const { seedDemo } = await import('../../../src/lib/server/demo/seed');
 const { startMailCatcher } = await import('../../../src/lib/server/dev/mail-catcher');
 await seedDemo();
 await startMailCatcher({ port: mailPort });
-// @ts-expect-error the build has no types
-await import('../../../build/index.js');
+// The built server, imported by a computed path so type checking does not follow it into build/.
+await import(pathToFileURL(join(process.cwd(), 'build', 'index.js')).href);
