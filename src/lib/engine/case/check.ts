@@ -8,9 +8,10 @@ import { ENGINE_VERSION } from '../version';
 import { caseGeometry, partsList } from './geometry';
 import { assumedStocks, jointRequests } from './joints';
 import { caseMargins } from './margins';
-import { analyseShelves, ShelfAnalyses } from './shelves';
+import { analyseShelves, asShelf, shelfRequest, ShelfAnalyses } from './shelves';
+import type { CaseGeometry } from './geometry';
 import { anchoringSuggestion, jointSuggestions, shelfSuggestions } from './suggest';
-import type { CaseJoint, CaseResult, CaseSuggestion } from './types';
+import type { CaseJoint, CaseResult, CaseShelf, CaseSuggestion, DesignPath } from './types';
 import { stabilityRequestOf } from './weight';
 
 const SHELF_CAUTIONS = [
@@ -29,6 +30,35 @@ export function checkCase(input: CaseDesignInput): CaseResult {
 }
 
 /** checkCase on a design already parsed by caseDesignSchema (SI numbers). */
+/** Failing shelves that are the same shelf (same request to the shelf engine), grouped so each
+ * suggestion is worked out once and applies to all of them. */
+function sameShelves(failing: CaseShelf[], d: CaseDesign, g: CaseGeometry): CaseShelf[][] {
+	const groups = new Map<string, CaseShelf[]>();
+	for (const s of failing) {
+		const design =
+			s.path[0] === 'shelves'
+				? d.shelves[s.path[1] as number]
+				: asShelf(d, s.path[0] as 'top' | 'bottom');
+		const key = JSON.stringify(shelfRequest(d, g, design));
+		groups.set(key, [...(groups.get(key) ?? []), s]);
+	}
+	return [...groups.values()];
+}
+
+/** A suggestion worked out for the first shelf of a group, written for every shelf of it. */
+function forAll(x: CaseSuggestion, first: CaseShelf, group: CaseShelf[]): CaseSuggestion {
+	const prefix = first.path.join('.');
+	const rebase = (path: DesignPath, to: DesignPath) => [...to, ...path.slice(first.path.length)];
+	const own = (path: DesignPath) => path.slice(0, first.path.length).join('.') === prefix;
+	return {
+		...x,
+		fixes: group.flatMap((s) => x.fixes.map((k) => s.path.join('.') + k.slice(prefix.length))),
+		changes: x.changes.flatMap((c) =>
+			own(c.path) ? group.map((s) => ({ path: rebase(c.path, s.path), value: c.value })) : [c]
+		)
+	};
+}
+
 export function checkCaseSI(d: CaseDesign): CaseResult {
 	const g = caseGeometry(d);
 	const runs = new ShelfAnalyses();
@@ -43,7 +73,17 @@ export function checkCaseSI(d: CaseDesign): CaseResult {
 	const failing = new Set(margins.filter((m) => !m.pass).map((m) => m.key));
 
 	const suggestions: CaseSuggestion[] = [];
-	for (const s of shelves) if (!s.pass) suggestions.push(...shelfSuggestions(d, g, runs, s));
+	for (const group of sameShelves(
+		shelves.filter((s) => !s.pass),
+		d,
+		g
+	)) {
+		const [first] = group;
+		const label = group.length > 1 ? group.map((s) => s.name).join(', ') : first.name;
+		suggestions.push(
+			...shelfSuggestions(d, g, runs, first, label).map((x) => forAll(x, first, group))
+		);
+	}
 	joints.forEach((j, i) => {
 		if (!j.plan.pass) suggestions.push(...jointSuggestions(j, requests[i].req, d, g, runs));
 	});

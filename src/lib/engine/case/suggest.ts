@@ -1,4 +1,5 @@
 import { findMaterial } from '../../../../reference/materials';
+import { ShelfInputError } from '../errors';
 import { formatLength } from '../length';
 import { planJointSI } from '../joinery/plan';
 import type { JointRequest } from '../joinery/types';
@@ -28,7 +29,8 @@ export function shelfSuggestions(
 	d: CaseDesign,
 	g: CaseGeometry,
 	runs: ShelfAnalyses,
-	shelf: CaseShelf
+	shelf: CaseShelf,
+	label = shelf.name
 ): CaseSuggestion[] {
 	const out: CaseSuggestion[] = [];
 	const s = designShelf(d, shelf.path);
@@ -49,7 +51,7 @@ export function shelfSuggestions(
 		.find((t) => passes({ ...s, thickness: t.actualM }));
 	if (thicker)
 		out.push({
-			title: `Make ${shelf.name} ${thicker.label} thick`,
+			title: `Make ${label} ${thicker.label} thick`,
 			detail: `${lib!.name} is stocked at ${thicker.label} (${len(thicker.actualM)} actual); at that thickness the shelf meets the limit and the allowed stress.`,
 			fixes,
 			changes: [{ path: [...shelf.path, 'thickness'], value: thicker.actualM }],
@@ -75,15 +77,16 @@ export function shelfSuggestions(
 					thickness: NOSING_THICKNESS_M
 				};
 				out.push({
-					title: `Glue a ${len(nosing.height)} × 3/4" nosing to the front of ${shelf.name}`,
+					title: `Glue a ${len(nosing.height)} × 3/4" nosing to the front of ${label}`,
 					detail: `A solid-wood strip (${findMaterial(String(nosingMaterial))?.name ?? 'solid wood'}), ${len(nosing.height)} tall and 3/4" thick, glued along the front edge; the panel behind it gets 3/4" shallower.`,
 					fixes,
 					changes: [{ path: [...shelf.path, 'nosing'], value: nosing }],
 					verified: passes({ ...s, nosing })
 				});
 			}
-		} catch {
+		} catch (e) {
 			// no nosing of a sensible height does it: say nothing rather than guess
+			if (!(e instanceof ShelfInputError)) throw e;
 		}
 	}
 
@@ -99,8 +102,9 @@ export function shelfSuggestions(
 				changes: [{ path: ['width'], value: width }],
 				verified: passes(s, width - 2 * d.sides.thickness)
 			});
-	} catch {
+	} catch (e) {
 		// the span solver found no span: the thickness suggestion above is the one to follow
+		if (!(e instanceof ShelfInputError)) throw e;
 	}
 	return out;
 }
