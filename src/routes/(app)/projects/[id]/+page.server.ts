@@ -2,13 +2,33 @@ import { fail, redirect } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireActor } from '$lib/server/access';
-import { deleteProject, getProject, updateProject } from '$lib/server/projects';
+import { deleteProject, getProject, listProjects, updateProject } from '$lib/server/projects';
 import { projectSchema } from '$lib/schemas/project';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
-	const { project, role } = getProject(requireActor(locals.actor), params.id);
-	return { project, role, editForm: await superValidate(project, zod4(projectSchema)) };
+	const actor = requireActor(locals.actor);
+	const { project, role } = getProject(actor, params.id);
+	// where an editor may move an analysis: the other projects of this workshop
+	const otherProjects =
+		role === 'viewer'
+			? []
+			: listProjects(actor, {
+					workshop: project.workshopId,
+					q: '',
+					sort: 'name',
+					dir: 'asc',
+					page: 1,
+					perPage: 100
+				})
+					.items.filter((p) => p.id !== project.id)
+					.map((p) => ({ id: p.id, name: p.name }));
+	return {
+		project,
+		role,
+		otherProjects,
+		editForm: await superValidate(project, zod4(projectSchema))
+	};
 };
 
 export const actions: Actions = {

@@ -1,0 +1,65 @@
+import { error, fail, redirect } from '@sveltejs/kit';
+import { z } from 'zod';
+import { requireActor } from '$lib/server/access';
+import {
+	AnalysisProblem,
+	getAnalysis,
+	getRevision,
+	listRevisions,
+	restoreRevision
+} from '$lib/server/analyses';
+import type { Actions, PageServerLoad } from './$types';
+
+const versionSchema = z.coerce.number().int().min(1);
+
+export const load: PageServerLoad = ({ locals, params, url }) => {
+	const actor = requireActor(locals.actor);
+	const { analysis, project, role } = getAnalysis(actor, params.analysisId);
+	if (analysis.projectId !== params.id) error(404, 'Not found.');
+	const revisions = listRevisions(actor, analysis.id);
+	const asked = versionSchema.safeParse(url.searchParams.get('v') ?? analysis.version);
+	const shown = asked.success ? getRevision(actor, analysis.id, asked.data).revision : null;
+	return {
+		analysis: {
+			id: analysis.id,
+			name: analysis.name,
+			kind: analysis.kind,
+			version: analysis.version
+		},
+		project: { id: project.id, name: project.name },
+		role,
+		revisions: revisions.map(({ version, name, summary, createdAt, changedByName, current }) => ({
+			version,
+			name,
+			summary,
+			createdAt,
+			changedByName,
+			current
+		})),
+		shown: shown && {
+			version: shown.version,
+			name: shown.name,
+			summary: shown.summary,
+			inputRows: shown.inputRows,
+			engineVersion: shown.engineVersion
+		}
+	};
+};
+
+export const actions: Actions = {
+	restore: async ({ locals, params, request }) => {
+		const actor = requireActor(locals.actor);
+		const form = await request.formData();
+		const version = versionSchema.safeParse(form.get('version'));
+		const base = versionSchema.safeParse(form.get('current'));
+		if (!version.success || !base.success)
+			return fail(400, { problem: 'Pick a version to restore.' });
+		try {
+			restoreRevision(actor, params.analysisId, version.data, base.data);
+		} catch (e) {
+			if (e instanceof AnalysisProblem) return fail(e.status, { problem: e.message });
+			throw e;
+		}
+		redirect(303, `/projects/${params.id}/analyses/${params.analysisId}/history`);
+	}
+};
