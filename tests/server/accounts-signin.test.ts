@@ -6,6 +6,8 @@ import { schema } from '../../src/lib/server/db';
 import { waitForMailTo } from '../../src/lib/server/dev/caught-mail';
 import { actions as signInActions } from '../../src/routes/(public)/signin/+page.server';
 import { actions as signUpActions } from '../../src/routes/(public)/signup/+page.server';
+import { actions as resetActions } from '../../src/routes/(public)/reset/+page.server';
+import { handleError } from '../../src/hooks.server';
 import { useTempDb } from './support/db';
 import { useMailCatcher } from './support/mail';
 import { cookieJar, formEvent, runAction } from './support/request';
@@ -105,7 +107,12 @@ describe('sign-up, then the mailed link', () => {
 			signUpActions.default,
 			formEvent({
 				url: '/signup',
-				fields: { name: 'Hana', email: 'Hana@Shop.example', password: 'a long passphrase' }
+				fields: {
+					name: 'Hana',
+					email: 'Hana@Shop.example',
+					password: 'a long passphrase',
+					redirectTo: '/invite/abc'
+				}
 			})
 		);
 		expect(thrown).toMatchObject({ status: 303 });
@@ -114,6 +121,7 @@ describe('sign-up, then the mailed link', () => {
 		expect(message.subject).toBe('Confirm your address for Spanwright');
 		const link = message.links.find((l) => l.includes('/auth/callback/nodemailer'));
 		expect(link).toBeTruthy();
+		expect(new URL(link!).searchParams.get('callbackUrl')).toBe('http://localhost:5173/invite/abc');
 		expect(new URL(link!).searchParams.get('email')).toBe('hana@shop.example');
 
 		// before the link is followed, the right password alone does not sign in
@@ -138,7 +146,7 @@ describe('sign-up, then the mailed link', () => {
 			resolve: () => new Response('not reached')
 		});
 		expect(response.status).toBe(302);
-		expect(response.headers.get('location')).toBe('http://localhost:5173/projects');
+		expect(response.headers.get('location')).toBe('http://localhost:5173/invite/abc');
 		expect(response.headers.getSetCookie().some((c) => c.includes('authjs.session-token='))).toBe(
 			true
 		);
@@ -175,5 +183,50 @@ describe('sign-up, then the mailed link', () => {
 		)) as { returned: { status: number; data: { form: { errors: Record<string, string[]> } } } };
 		expect(returned.status).toBe(409);
 		expect(returned.data.form.errors.email?.[0]).toMatch(/already exists/);
+	});
+});
+
+describe('when mail cannot be sent', () => {
+	it('the reset page answers 503 with a plain message and keeps the address typed', async () => {
+		const before = process.env.SMTP_URL;
+		process.env.SMTP_URL = 'smtp://127.0.0.1:9'; // the discard port: nothing listens there
+		try {
+			const { returned } = (await runAction(
+				resetActions.default,
+				formEvent({ url: '/reset', fields: { email: 'flo@shop.example' } })
+			)) as {
+				returned: { status: number; data: { form: { message: string; data: { email: string } } } };
+			};
+			expect(returned.status).toBe(503);
+			expect(returned.data.form.message).toMatch(/could not send mail just now/);
+			expect(returned.data.form.data.email).toBe('flo@shop.example');
+		} finally {
+			process.env.SMTP_URL = before;
+		}
+	});
+});
+
+describe('handleError', () => {
+	it('gives the client a message and an id, never the stack', async () => {
+		const logged: unknown[] = [];
+		const original = console.error;
+		console.error = (...args: unknown[]) => logged.push(args);
+		try {
+			const body = await handleError({
+				error: new Error('secret table name in a stack'),
+				event: {
+					request: new Request('http://localhost/x'),
+					url: new URL('http://localhost/x')
+				} as unknown as Parameters<typeof handleError>[0]['event'],
+				status: 500,
+				message: 'Internal Error'
+			});
+			expect(Object.keys(body!).sort()).toEqual(['id', 'message']);
+			expect(body!.message).toBe('Something went wrong on our side.');
+			expect(JSON.stringify(body)).not.toContain('secret table');
+			expect(String((logged[0] as unknown[])[0])).toContain(body!.id!);
+		} finally {
+			console.error = original;
+		}
 	});
 });

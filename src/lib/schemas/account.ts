@@ -30,7 +30,9 @@ export const signUpSchema = z.object({
 		.min(1, 'Tell us what to call you.')
 		.max(80, 'Keep the name under 80 characters.'),
 	email: emailField,
-	password: newPasswordField
+	password: newPasswordField,
+	// where the confirmation link lands (e.g. back at an invitation); only paths on this site
+	redirectTo: z.string().max(500).default('')
 });
 export type SignUpInput = z.infer<typeof signUpSchema>;
 

@@ -1,5 +1,10 @@
 import { DrizzleAdapter } from '@auth/drizzle-adapter';
-import { CredentialsSignin, SvelteKitAuth, type SvelteKitAuthConfig } from '@auth/sveltekit';
+import {
+	AuthError,
+	CredentialsSignin,
+	SvelteKitAuth,
+	type SvelteKitAuthConfig
+} from '@auth/sveltekit';
 import Credentials from '@auth/sveltekit/providers/credentials';
 import Nodemailer from '@auth/sveltekit/providers/nodemailer';
 import { isRedirect, type RequestEvent } from '@sveltejs/kit';
@@ -11,6 +16,7 @@ import { getDb } from './db';
 import { accounts, sessions, users, verificationTokens } from './db/schema';
 import {
 	linkOrigin,
+	MailUnavailable,
 	mailFrom,
 	sendAddressConfirmation,
 	sendNoAccountNotice,
@@ -198,7 +204,13 @@ export async function mailSignInLink(
 		await sendNoAccountNotice(input.email, `${linkOrigin(event.url)}/signup`);
 		return { ok: true };
 	}
-	await runAuthAction(signIn, event, { providerId: 'nodemailer', ...input });
+	try {
+		await runAuthAction(signIn, event, { providerId: 'nodemailer', ...input });
+	} catch (e) {
+		// Auth.js wraps a failure of sendVerificationRequest as EmailSignInError
+		if (e instanceof AuthError && e.type === 'EmailSignInError') throw new MailUnavailable(e);
+		throw e;
+	}
 	return { ok: true };
 }
 

@@ -38,11 +38,37 @@ export interface OutgoingMail {
 	html?: string;
 }
 
-/** Send one message. Throws when the server refuses it, so callers can say so. */
+/** The mail server could not be reached or refused the message; pages say "try again shortly". */
+export class MailUnavailable extends Error {
+	constructor(cause: unknown) {
+		super(`Mail could not be sent: ${cause instanceof Error ? cause.message : String(cause)}`, {
+			cause
+		});
+	}
+}
+
+export const MAIL_UNAVAILABLE_MESSAGE =
+	'We could not send mail just now. Nothing is lost; try again in a minute.';
+
+/** For `.catch(mailDown)`: turns MailUnavailable into null (the page says so) and rethrows the rest. */
+export function mailDown(e: unknown): null {
+	if (e instanceof MailUnavailable) {
+		console.warn(e.message);
+		return null;
+	}
+	throw e;
+}
+
+/** Send one message. Throws MailUnavailable when the server is away or refuses it. */
 export async function sendMail({ to, subject, text, html }: OutgoingMail) {
-	const info = await transporter().sendMail({ from: mailFrom(), to, subject, text, html });
+	let info;
+	try {
+		info = await transporter().sendMail({ from: mailFrom(), to, subject, text, html });
+	} catch (e) {
+		throw new MailUnavailable(e);
+	}
 	const failed = [...(info.rejected ?? []), ...(info.pending ?? [])].filter(Boolean);
-	if (failed.length) throw new Error(`The mail server refused the message to ${failed.join(', ')}`);
+	if (failed.length) throw new MailUnavailable(`refused for ${failed.join(', ')}`);
 	return info.messageId as string;
 }
 

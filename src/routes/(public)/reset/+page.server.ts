@@ -3,7 +3,7 @@ import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { resetRequestSchema } from '$lib/schemas/account';
 import { requestPasswordReset } from '$lib/server/accounts';
-import { linkOrigin } from '$lib/server/mail';
+import { linkOrigin, MAIL_UNAVAILABLE_MESSAGE, mailDown } from '$lib/server/mail';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async () => ({
@@ -14,7 +14,8 @@ export const actions: Actions = {
 	default: async ({ request, url }) => {
 		const form = await superValidate(request, zod4(resetRequestSchema));
 		if (!form.valid) return fail(400, { form });
-		const result = await requestPasswordReset(form.data.email, linkOrigin(url));
+		const result = await requestPasswordReset(form.data.email, linkOrigin(url)).catch(mailDown);
+		if (!result) return message(form, MAIL_UNAVAILABLE_MESSAGE, { status: 503 });
 		if (!result.ok)
 			return message(
 				form,

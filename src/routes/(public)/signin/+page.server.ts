@@ -6,6 +6,7 @@ import { safeRedirectPath, signInLinkSchema, signInSchema } from '$lib/schemas/a
 import { throttleMessage } from '$lib/server/accounts';
 import { mailSignInLink, signInWithPassword } from '$lib/server/auth';
 import { DEMO_ACCOUNTS } from '$lib/server/demo/accounts';
+import { MAIL_UNAVAILABLE_MESSAGE, mailDown } from '$lib/server/mail';
 import type { Actions, PageServerLoad } from './$types';
 
 const AFTER_SIGN_IN = '/projects';
@@ -57,7 +58,10 @@ export const actions: Actions = {
 		form.data.password = '';
 		if (result.status === 429) return message(form, result.message, { status: 429 });
 		if (result.unconfirmed) {
-			const mailed = await mailSignInLink(event, { email: form.data.email, redirectTo });
+			const mailed = await mailSignInLink(event, { email: form.data.email, redirectTo }).catch(
+				mailDown
+			);
+			if (!mailed) return message(form, MAIL_UNAVAILABLE_MESSAGE, { status: 503 });
 			if (!mailed.ok)
 				return message(form, throttleMessage(mailed.retryAfterMinutes), { status: 429 });
 			return message(form, result.message, { status: 400 });
@@ -69,7 +73,10 @@ export const actions: Actions = {
 		const form = await superValidate(event.request, zod4(signInLinkSchema), { id: 'link' });
 		if (!form.valid) return fail(400, { form });
 		const redirectTo = safeRedirectPath(form.data.redirectTo, AFTER_SIGN_IN);
-		const mailed = await mailSignInLink(event, { email: form.data.email, redirectTo });
+		const mailed = await mailSignInLink(event, { email: form.data.email, redirectTo }).catch(
+			mailDown
+		);
+		if (!mailed) return message(form, MAIL_UNAVAILABLE_MESSAGE, { status: 503 });
 		if (!mailed.ok)
 			return message(
 				form,

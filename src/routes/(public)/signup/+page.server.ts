@@ -1,14 +1,19 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { signUpSchema } from '$lib/schemas/account';
+import { safeRedirectPath, signUpSchema } from '$lib/schemas/account';
 import { AccountExistsError, createUser } from '$lib/server/accounts';
 import { mailSignInLink } from '$lib/server/auth';
+import { mailDown } from '$lib/server/mail';
 import type { Actions, PageServerLoad } from './$types';
 
-export const load: PageServerLoad = async ({ locals }) => {
-	if (locals.actor) redirect(303, '/projects');
-	return { form: await superValidate(zod4(signUpSchema)) };
+export const load: PageServerLoad = async ({ locals, url }) => {
+	const next = safeRedirectPath(url.searchParams.get('next'), '/projects');
+	if (locals.actor) redirect(303, next);
+	const email = url.searchParams.get('email') ?? '';
+	return {
+		form: await superValidate({ email, redirectTo: next }, zod4(signUpSchema), { errors: false })
+	};
 };
 
 export const actions: Actions = {
@@ -16,7 +21,11 @@ export const actions: Actions = {
 		const form = await superValidate(event.request, zod4(signUpSchema));
 		if (!form.valid) return fail(400, { form });
 		try {
-			await createUser(form.data);
+			await createUser({
+				name: form.data.name,
+				email: form.data.email,
+				password: form.data.password
+			});
 		} catch (e) {
 			if (e instanceof AccountExistsError)
 				return setError(
@@ -28,8 +37,11 @@ export const actions: Actions = {
 			throw e;
 		}
 		// The mailed link confirms the address and signs them in; until then the password waits.
-		const mailed = await mailSignInLink(event, { email: form.data.email, redirectTo: '/projects' });
-		const sent = mailed.ok ? 'signup' : 'link';
+		const mailed = await mailSignInLink(event, {
+			email: form.data.email,
+			redirectTo: safeRedirectPath(form.data.redirectTo, '/projects')
+		}).catch(mailDown);
+		const sent = !mailed ? 'mail-failed' : mailed.ok ? 'signup' : 'link';
 		redirect(303, `/signin?sent=${sent}&email=${encodeURIComponent(form.data.email)}`);
 	}
 };
