@@ -1,0 +1,102 @@
+import type { Actor } from '../access';
+import { createAnalysis, updateAnalysis } from '../analyses';
+
+// Saved analyses of the demo scenario (invented inputs; every result is computed by the engine
+// when seeded). Tomas, the shop lead, saved them; Ines revised the library shelf once.
+
+const books = [{ kind: 'area', pressure: '40 lbf/ft^2' }];
+const oakNosing = { side: 'front', material: 'red-oak', height: '1 1/2"', thickness: '3/4"' };
+
+const libraryShelf = {
+	span: '35 1/2"',
+	depth: '11 1/4"',
+	thickness: '23/32"',
+	material: 'hardwood-plywood-veneer-core',
+	loads: books,
+	edges: [oakNosing]
+};
+
+const libraryComparison = {
+	shelf: { span: '35 1/2"', depth: '11 1/4"', loads: books },
+	candidates: [
+		{ material: 'softwood-plywood', thickness: '23/32"', label: '3/4" softwood plywood' },
+		{ material: 'mdf', thickness: '3/4"', label: '3/4" MDF' },
+		{
+			material: 'hardwood-plywood-veneer-core',
+			thickness: '23/32"',
+			edges: [oakNosing],
+			label: '3/4" oak plywood + 1 1/2" oak nosing'
+		}
+	]
+};
+
+const pantryShelf = {
+	span: '30"',
+	depth: '16"',
+	thickness: '3/4"',
+	material: 'melamine-particleboard',
+	loads: [{ kind: 'area', pressure: '50 lbf/ft^2' }]
+};
+
+const teacherCabinet = {
+	name: 'Teacher cabinet',
+	width: '36"',
+	height: '84"',
+	depth: '16"',
+	sides: { material: 'hardwood-plywood-veneer-core', thickness: '3/4"' },
+	back: { material: 'hardwood-plywood-veneer-core', thickness: '1/4"' },
+	shelves: [
+		{ height: '16"', kind: 'fixed', joint: 'pocket-screw', loads: books },
+		{ height: '36"', kind: 'adjustable', loads: books },
+		{ height: '56"', kind: 'adjustable', loads: books }
+	],
+	anchoring: { kind: 'bracket', intoStuds: true }
+};
+
+const fixedShelfJoint = {
+	kind: 'shelf-to-side',
+	fastener: 'pocket-screw',
+	length: '11 1/4"',
+	endPiece: { material: 'hardwood-plywood-veneer-core', thickness: '23/32"' },
+	facePiece: { material: 'hardwood-plywood-veneer-core', thickness: '23/32"' },
+	demand: { shear: '60 lbf' }
+};
+
+interface DemoUser {
+	id: string;
+	email: string;
+	name: string;
+	role: 'owner' | 'editor' | 'viewer';
+}
+
+/** Save the demo analyses in the seeded projects (by name); returns the ids of what was saved. */
+export function seedDemoAnalyses(projectIds: Record<string, string>, users: DemoUser[]) {
+	const actor = (role: DemoUser['role']): Actor => {
+		const u = users.find((x) => x.role === role)!;
+		return { id: u.id, email: u.email, name: u.name, via: 'session' };
+	};
+	const tomas = actor('editor');
+	const library = projectIds['Whitlock library wall'];
+	const school = projectIds['Harbour Street school reading nook'];
+	const pantry = projectIds['Kiln Lane pantry'];
+	const save = (
+		projectId: string,
+		kind: 'shelf' | 'comparison' | 'joint' | 'case',
+		name: string,
+		input: unknown
+	) => createAnalysis(tomas, projectId, { kind, name, input }).id;
+
+	const shelf = save(library, 'shelf', 'Left bookcase, middle shelf', {
+		...libraryShelf,
+		edges: []
+	});
+	// Ines added the oak nosing after the first check: version 2 of the same shelf
+	updateAnalysis(actor('owner'), shelf, { input: libraryShelf, version: 1 });
+	return [
+		shelf,
+		save(library, 'comparison', 'Shelf stock for the library wall', libraryComparison),
+		save(library, 'joint', 'Fixed shelf to case side', fixedShelfJoint),
+		save(pantry, 'shelf', 'Deep pantry shelf, appliance bay', pantryShelf),
+		save(school, 'case', 'Teacher cabinet', teacherCabinet)
+	];
+}
