@@ -91,6 +91,16 @@ describe('tip-over of an 80" × 17" bookcase, worked by hand', () => {
 		expect(f2057.margin).toBeCloseTo(767.5 / (60 * 14), 9);
 	});
 
+	it('no drawers and no set-back: the EN 14749 50 N outward force acts at the top', () => {
+		// M_r = 100 lbf · 8.5" = 96.04 N·m against 50 N · 80" (2.032 m) = 101.6 N·m → margin 0.9453:
+		// a light 80" bookcase fails it unanchored. A vertical load on a front edge has no lever here.
+		const r = checkStabilitySI(bookcase());
+		const tall = r.standards[1];
+		expect(tall.margin).toBeCloseTo((100 * LBF * 8.5 * IN) / (50 * 80 * IN), 9);
+		expect(tall.pass).toBe(false);
+		expect(r.standards[0].margin).toBeNull();
+	});
+
 	it('the restraint recommendation is at least the ASTM F3096 test pull (50 lbf 2014, 60 lbf 2023)', () => {
 		const r = checkStabilitySI(bookcase());
 		expect(r.restraint.f3096TestN.edition2014 / LBF).toBeCloseTo(50, 9);

@@ -184,8 +184,10 @@ function frontEdge(
 	};
 }
 
-function worstPlace(places: EdgePlace[], f: Frame): EdgePlace | null {
-	let best: EdgePlace | null = null;
+/** The front edge where a vertical load has the longest lever; the top when none has a lever (the
+ * test forces' horizontal part still acts there). */
+function worstPlace(places: EdgePlace[], f: Frame): EdgePlace {
+	let best: EdgePlace = places[places.length - 1];
 	let bestLever = 1e-9;
 	for (const p of places) {
 		const lever = verticalLever(p.xM, p.zM, f);
@@ -206,7 +208,7 @@ function compare(
 	const mr = Math.max(0, restoringMoment(openEmpty, f));
 	const vLever = worst ? Math.max(0, verticalLever(worst.xM, worst.zM, f)) : 0;
 	const hLever = worst ? Math.max(0, horizontalLever(worst.zM, f)) : 0;
-	const margin = (m: number) => (m > 0 ? mr / m : null);
+	const margin = (m: number) => (m > 1e-9 ? mr / m : null);
 	const at = worst ? `on ${worst.where}` : 'at the front edge';
 	const tall = margin(EN14749_VERTICAL_N * vLever + EN14749_HORIZONTAL_N * hLever);
 	const light = margin(EN14749_OPEN_UNLOADED_VERTICAL_N * vLever);
