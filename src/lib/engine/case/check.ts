@@ -87,7 +87,7 @@ export function checkCaseSI(d: CaseDesign): CaseResult {
 	joints.forEach((j, i) => {
 		if (!j.plan.pass) suggestions.push(...jointSuggestions(j, requests[i].req, d, g, runs));
 	});
-	const tipping = ['stability:anchoring', 'stability:front-edge'].filter((k) => failing.has(k));
+	const tipping = [...failing].filter((k) => k.startsWith('stability:'));
 	if (tipping.length) suggestions.push(anchoringSuggestion(tipping));
 
 	const warnings = [

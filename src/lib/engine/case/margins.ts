@@ -47,6 +47,16 @@ export function caseMargins(
 			pass: worst.passF2057 || held
 		});
 	}
+	stability.standards.forEach((st, i) => {
+		if (!st.name.startsWith('EN') || !st.applies || st.margin === null) return; // F2057: the front-edge entry above
+		out.push({
+			key: `stability:en14749-${i}`,
+			what: `tipping: ${st.name}${!st.pass && stability.restraint.adequate ? ', held by the wall restraint' : ''}`,
+			path: ['anchoring'],
+			margin: st.margin - 1,
+			pass: st.pass || stability.restraint.adequate
+		});
+	});
 	if (stability.anchoring.required && !stability.restraint.adequate)
 		out.push({
 			key: 'stability:anchoring',
