@@ -6,7 +6,9 @@ import {
 	passwordSignIn,
 	REFUSE_AFTER_FAILURES,
 	requestPasswordReset,
+	findUserByEmail,
 	resetPassword,
+	sessionIsCurrent,
 	resetTokenIsLive,
 	setLengthUnit,
 	signInGate,
@@ -139,7 +141,13 @@ describe('password reset', () => {
 		expect(link).toBeTruthy();
 		const token = link.split('/reset/')[1];
 		expect(resetTokenIsLive(token)).toBe(true);
+		const ben = findUserByEmail('ben@shop.example')!;
+		const issuedBefore = Math.floor(Date.now() / 1000) - 60; // a session from a minute ago
+		expect(sessionIsCurrent(ben.id, issuedBefore)).toBe(true);
 		expect(await resetPassword(token, 'a fresh passphrase')).toBe(true);
+		// the reset ends every earlier session, a copied cookie included; new ones are honoured
+		expect(sessionIsCurrent(ben.id, issuedBefore)).toBe(false);
+		expect(sessionIsCurrent(ben.id, Math.floor(Date.now() / 1000) + 1)).toBe(true);
 		expect(await verifyPassword('ben@shop.example', 'a fresh passphrase')).not.toBeNull();
 		expect(await verifyPassword('ben@shop.example', 'plain words here')).toBeNull();
 		// the same link a second time does nothing

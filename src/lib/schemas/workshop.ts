@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { emailField } from './account';
 
 export const roleSchema = z.enum(['viewer', 'editor', 'owner']);
 
@@ -7,7 +8,7 @@ export const workshopNameSchema = z.object({
 });
 
 export const invitationSchema = z.object({
-	email: z.email('Enter an e-mail address such as name@example.com.').trim().toLowerCase(),
+	email: emailField,
 	role: roleSchema.default('viewer')
 });
 

@@ -304,7 +304,7 @@ export async function resetPassword(token: string, newPassword: string, now = Da
 		if (!claimed) return false;
 		const user = tx
 			.update(users)
-			.set({ passwordHash })
+			.set({ passwordHash, sessionsValidFrom: new Date(now) })
 			.where(eq(users.id, claimed.userId))
 			.returning({ email: users.email, emailVerified: users.emailVerified })
 			.get();
@@ -443,4 +443,20 @@ export function setLengthUnit(actor: Actor, unit: LengthUnit) {
 export function updateProfile(actor: Actor, input: { name: string; lengthUnit: LengthUnit }) {
 	setLengthUnit(actor, input.lengthUnit);
 	getDb().update(users).set({ name: input.name.trim() }).where(eq(users.id, actor.id)).run();
+}
+
+/**
+ * Whether a session token issued at `issuedAtSeconds` (JWT `iat`) is still honoured: a password
+ * reset ends every session issued before it (a copied cookie stops working too).
+ */
+export function sessionIsCurrent(userId: string, issuedAtSeconds: number | undefined) {
+	const row = getDb()
+		.select({ validFrom: users.sessionsValidFrom })
+		.from(users)
+		.where(eq(users.id, userId))
+		.get();
+	if (!row) return false;
+	if (!row.validFrom) return true;
+	// iat has whole seconds: a token of the same second as the reset is let through
+	return ((issuedAtSeconds ?? 0) + 1) * 1000 > row.validFrom.getTime();
 }

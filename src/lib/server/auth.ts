@@ -11,7 +11,13 @@ import { isRedirect, type RequestEvent } from '@sveltejs/kit';
 import { dev } from '$app/environment';
 import { env } from '$env/dynamic/private';
 import { signInSchema } from '$lib/schemas/account';
-import { allowMailTo, findUserByEmail, passwordSignIn, throttleMessage } from './accounts';
+import {
+	allowMailTo,
+	findUserByEmail,
+	passwordSignIn,
+	sessionIsCurrent,
+	throttleMessage
+} from './accounts';
 import { getDb } from './db';
 import { accounts, sessions, users, verificationTokens } from './db/schema';
 import {
@@ -120,7 +126,8 @@ async function authConfig(event: RequestEvent): Promise<SvelteKitAuthConfig> {
 				return true;
 			},
 			session({ session, token }) {
-				if (token.sub && session.user) session.user.id = token.sub;
+				if (token.sub && session.user && sessionIsCurrent(token.sub, token.iat))
+					session.user.id = token.sub;
 				return session;
 			}
 		}

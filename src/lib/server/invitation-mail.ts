@@ -1,7 +1,10 @@
 import type { Actor } from './access';
-import { sendMail } from './mail';
+import { mailDown, sendMail } from './mail';
 
-/** The invitation e-mail: who invites, to which workshop, with which role, and the one-time link. */
+/**
+ * The invitation e-mail: who invites, to which workshop, with which role, and the one-time link.
+ * Resolves to false when the mail server cannot be reached (the page says so).
+ */
 export async function sendInvitation(args: {
 	to: string;
 	from: Actor;
@@ -17,12 +20,13 @@ export async function sendInvitation(args: {
 				? 'create and change its projects and analyses'
 				: 'manage it, its members and its projects';
 	const text = `${who} invites you to the workshop "${args.workshopName}" on Spanwright as ${args.role}: you will be able to ${can}.\n\nAccept the invitation:\n${args.link}\n\nThe link works once and expires in 7 days. If you did not expect this, ignore this message.`;
-	await sendMail({
+	const sent = await sendMail({
 		to: args.to,
 		subject: `${who} invites you to ${args.workshopName} on Spanwright`,
 		text,
 		html: `<p>${escapeHtml(who)} invites you to the workshop <strong>${escapeHtml(args.workshopName)}</strong> on Spanwright as <strong>${args.role}</strong>: you will be able to ${can}.</p><p><a href="${args.link}">Accept the invitation</a></p><p>The link works once and expires in 7 days.</p>`
-	});
+	}).then(() => true, mailDown);
+	return sent === true;
 }
 
 function escapeHtml(s: string) {

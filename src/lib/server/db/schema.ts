@@ -27,6 +27,8 @@ export const users = sqliteTable('user', {
 	// 'frac32' | 'frac16' | 'frac64' | 'decimal-in' | 'mm'
 	lengthUnit: text('length_unit').notNull().default('frac16'),
 	currentWorkshopId: text('current_workshop_id'),
+	// sessions issued before this instant are no longer honoured (set by a password reset)
+	sessionsValidFrom: integer('sessions_valid_from', { mode: 'timestamp_ms' }),
 	createdAt: createdAt()
 });
 

@@ -3,6 +3,7 @@ import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireActor } from '$lib/server/access';
 import { sendInvitation } from '$lib/server/invitation-mail';
+import { linkOrigin, MAIL_UNAVAILABLE_MESSAGE } from '$lib/server/mail';
 import * as workshops from '$lib/server/workshops';
 import {
 	invitationSchema,
@@ -56,14 +57,23 @@ export const actions: Actions = {
 		const { actor, ws } = current(locals);
 		const form = await superValidate(request, zod4(invitationSchema), { id: 'invite' });
 		if (!form.valid) return fail(400, { inviteForm: form });
-		const { token } = workshops.createInvitation(actor, ws.id, form.data.email, form.data.role);
-		await sendInvitation({
+		const { invitation, token } = workshops.createInvitation(
+			actor,
+			ws.id,
+			form.data.email,
+			form.data.role
+		);
+		const sent = await sendInvitation({
 			to: form.data.email,
 			from: actor,
 			workshopName: ws.name,
 			role: form.data.role,
-			link: `${url.origin}/invite/${token}`
+			link: `${linkOrigin(url)}/invite/${token}`
 		});
+		if (!sent) {
+			workshops.revokeInvitation(actor, ws.id, invitation.id);
+			return message(form, MAIL_UNAVAILABLE_MESSAGE, { status: 503 });
+		}
 		return message(form, `Invitation sent to ${form.data.email}.`);
 	},
 	role: async ({ locals, request }) => {
