@@ -1,6 +1,7 @@
 import { caseDesignSchema, type CaseDesign, type CaseDesignInput } from '../../schemas/case';
 import { JOINT_CAUTIONS } from '../joinery/cautions';
 import { planJointSI } from '../joinery/plan';
+import type { JointPlan, JointRequest } from '../joinery/types';
 import { parseOrThrow } from '../joinery/validate';
 import { checkStabilitySI } from '../stability/check';
 import { STABILITY_CAUTIONS } from '../stability/cautions';
@@ -64,9 +65,17 @@ export function checkCaseSI(d: CaseDesign): CaseResult {
 	const runs = new ShelfAnalyses();
 	const shelves = analyseShelves(d, g, runs);
 	const requests = jointRequests(d, g, shelves);
+	// identical joints (a column of adjustable shelves) are planned once
+	const plans = new Map<string, JointPlan>();
+	const planOnce = (req: JointRequest) => {
+		const key = JSON.stringify(req);
+		let plan = plans.get(key);
+		if (!plan) plans.set(key, (plan = planJointSI(req)));
+		return plan;
+	};
 	const joints: CaseJoint[] = requests.map(({ req, ...rest }) => ({
 		...rest,
-		plan: planJointSI(req)
+		plan: planOnce(req)
 	}));
 	const stability = checkStabilitySI(stabilityRequestOf(d, g, shelves));
 	const margins = caseMargins(shelves, joints, stability);
