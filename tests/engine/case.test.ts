@@ -192,6 +192,20 @@ describe('checkCase: requests', () => {
 		);
 	});
 
+	it('drawers and doors of the design reach the tip-over check', () => {
+		const r = checkCase(
+			bookcase({
+				drawers: [{ height: '6"', weight: '15 lb', contentsWeight: '20 lb', extension: '10"' }],
+				doors: [{ weight: '12 lb', width: '17"', centreHeight: '30"' }]
+			})
+		);
+		const drawer = r.stability.frontEdgeLoads[0];
+		expect(drawer.where).toBe('drawer 1 pulled out');
+		// no set-back or tilt: the lever of a load on the drawer front is its 10" of extension
+		expect(drawer.leverM / IN).toBeCloseTo(10, 9);
+		expect(r.margins.some((m) => m.key === 'stability:front-edge')).toBe(true);
+	});
+
 	it('a material given by its figures is held as softwood of its specific gravity, and says so', () => {
 		// density 560 kg/m³ → G = 560 / 1120 = 0.50 (the inverse of the density rule of reference/materials.ts)
 		const custom = { name: 'shop panel', modulus: '1.2e6 psi', rupture: '5000 psi', density: 560 };
