@@ -18,6 +18,10 @@ import * as moveApi from '../../src/routes/api/v1/analyses/[id]/move/+server';
 import { deleteAnalysis, updateAnalysis } from '../../src/lib/server/analyses';
 import { handShelf, saveShelf } from './support/analyses';
 import type { Actor } from '../../src/lib/server/access';
+import * as meApi from '../../src/routes/api/v1/me/+server';
+import * as tokensApi from '../../src/routes/api/v1/tokens/+server';
+import * as tokenApi from '../../src/routes/api/v1/tokens/[id]/+server';
+import { createApiToken } from '../../src/lib/server/accounts';
 
 useTempDb();
 
@@ -25,7 +29,7 @@ type Who = 'anonymous' | 'viewer' | 'editor' | 'owner' | 'outsider';
 type Cast = ReturnType<typeof makeWorkshopWithCast>;
 interface Row {
 	route: string;
-	call: (actor: Actor | null, cast: Cast, projectId: string) => Promise<Response>;
+	call: (actor: Actor | null, cast: Cast, projectId: string) => Promise<Response> | Response;
 	expect: Record<Who, number>;
 }
 
@@ -216,6 +220,34 @@ table.push(
 			);
 		},
 		expect: write
+	}
+);
+
+// ---- the actor's own account: tokens belong to a person, not to a workshop ----
+table.push(
+	{
+		route: 'GET /me',
+		call: (a) => meApi.GET(event({ actor: a })),
+		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 200 }
+	},
+	{
+		route: 'GET /tokens',
+		call: (a) => tokensApi.GET(event({ actor: a })),
+		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 200 }
+	},
+	{
+		route: 'POST /tokens',
+		call: (a) =>
+			tokensApi.POST(event({ actor: a, method: 'POST', body: { name: 'Cut-list script' } })),
+		expect: { anonymous: 401, viewer: 201, editor: 201, owner: 201, outsider: 201 }
+	},
+	{
+		route: "DELETE /tokens/{id} (the owner's token)",
+		call: (a, c) => {
+			const { id } = createApiToken(c.owner, { name: 'Shop laptop' });
+			return tokenApi.DELETE(event({ actor: a, method: 'DELETE', params: { id } }));
+		},
+		expect: { anonymous: 401, viewer: 404, editor: 404, owner: 204, outsider: 404 }
 	}
 );
 

@@ -3,6 +3,7 @@ import { createUser } from '../accounts';
 import { getDb } from '../db';
 import { memberships, projects, users, workshops } from '../db/schema';
 import { DEMO_ACCOUNTS } from './accounts';
+import { seedDemoAnalyses } from './analyses';
 
 // The demo scenario (invented): Quillfeather Casework, a two-person built-in shop, and Dana
 // Whitlock, a client who follows her library wall as a viewer.
@@ -78,7 +79,8 @@ export async function seedDemo() {
 			.get();
 		projectIds[p.name] = row.id;
 	});
-	return { workshopId: shop.id, users: created, projectIds };
+	const analysisIds = seedDemoAnalyses(projectIds, created);
+	return { workshopId: shop.id, users: created, projectIds, analysisIds };
 }
 
 /** True when the demo scenario is already in the database. */
