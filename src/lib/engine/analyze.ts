@@ -5,13 +5,21 @@
 import { AWS_MAX_LOAD_PER_SHELF_LB } from '../../../reference/materials';
 import { shelfRequestSchema, type ShelfInput, type ShelfRequest } from '../schemas/shelf';
 import {
+	addSagPieces,
+	breakPoints,
 	maxMoment,
+	pieceAt,
+	piecesAt,
 	reactions,
 	sagAt,
+	segmentOf,
+	segmentPeak,
 	solveBeam,
 	totalLoad,
 	type BeamLoads,
-	type BeamSolution
+	type BeamModel,
+	type BeamSolution,
+	type SagPieces
 } from './beam';
 import { ShelfInputError } from './errors';
 import { buildModel, isStocked, type ShelfModel } from './model';
@@ -19,8 +27,6 @@ import { NEWTONS_PER_LBF } from './quantity';
 import { partStresses } from './section';
 import type { SafeResult, ShelfIssue, ShelfResult, ShelfWarning, SpanCheck } from './types';
 import { ENGINE_VERSION } from './version';
-
-const GOLDEN = (Math.sqrt(5) - 1) / 2;
 
 function merge(a: BeamLoads, b: BeamLoads): BeamLoads {
 	return { points: [...a.points, ...b.points], udls: [...a.udls, ...b.udls] };
@@ -30,6 +36,10 @@ function merge(a: BeamLoads, b: BeamLoads): BeamLoads {
 export interface Solved {
 	model: ShelfModel;
 	all: BeamSolution;
+	/** the shelf's own weight alone on the instant beam, when solved (short duration) */
+	selfWeightInstant: BeamSolution | null;
+	/** the governing sag as one quartic per segment (see SagPieces) */
+	pieces: SagPieces;
 	/** sag that governs: instant sag plus creep under the permanent load */
 	longTerm: (x: number) => number;
 	creepApplies: boolean;
@@ -38,7 +48,7 @@ export interface Solved {
 export function solveShelf(model: ShelfModel): Solved {
 	const { section, input } = model;
 	const shear = input.options.shearDeflection;
-	const beam = (ei: number, ga: number) => ({
+	const beam = (ei: number, ga: number): BeamModel => ({
 		length: model.length,
 		left: model.left,
 		right: model.right,
@@ -50,66 +60,25 @@ export function solveShelf(model: ShelfModel): Solved {
 	const creep = beam(section.eiLongTerm, section.gaLongTerm);
 	const loads = merge(model.applied, model.selfWeight);
 	const all = solveBeam(instant, loads);
+	const xs = breakPoints(instant, loads);
+	const c = new Float64Array(5 * Math.max(0, xs.length - 1));
+	const pieces = { xs, c };
+	const longTerm = (x: number) => piecesAt(pieces, x);
 	// Creep acts on the permanent load: the shelf's own weight always, the contents when the
 	// duration is long (EN 1995-1-1 §2.3.2.2: final = instant × (1 + k_def) under permanent load).
 	if (input.duration === 'long') {
-		const long = solveBeam(creep, loads);
-		return { model, all, longTerm: (x) => sagAt(long, x), creepApplies: totalLoad(loads) > 0 };
+		addSagPieces(solveBeam(creep, loads), xs, c);
+		const creepApplies = totalLoad(loads) > 0;
+		return { model, all, selfWeightInstant: null, pieces, longTerm, creepApplies };
 	}
+	addSagPieces(all, xs, c);
 	const perm = model.selfWeight;
 	if (totalLoad(perm) === 0)
-		return { model, all, longTerm: (x) => sagAt(all, x), creepApplies: false };
+		return { model, all, selfWeightInstant: null, pieces, longTerm, creepApplies: false };
 	const permInstant = solveBeam(instant, perm);
-	const permCreep = solveBeam(creep, perm);
-	return {
-		model,
-		all,
-		longTerm: (x) => sagAt(all, x) + sagAt(permCreep, x) - sagAt(permInstant, x),
-		creepApplies: true
-	};
-}
-
-/** Largest value of f on [a, b]: a grid, then golden-section search around the best point. */
-export function peak(
-	f: (x: number) => number,
-	a: number,
-	b: number,
-	n = 24
-): { x: number; y: number } {
-	let bestI = 0;
-	let best = -Infinity;
-	const h = (b - a) / n;
-	for (let i = 0; i <= n; i++) {
-		const y = f(a + i * h);
-		if (y > best) {
-			best = y;
-			bestI = i;
-		}
-	}
-	let lo = a + Math.max(0, bestI - 1) * h;
-	let hi = a + Math.min(n, bestI + 1) * h;
-	let x1 = hi - GOLDEN * (hi - lo);
-	let x2 = lo + GOLDEN * (hi - lo);
-	let f1 = f(x1);
-	let f2 = f(x2);
-	for (let k = 0; k < 40 && hi - lo > 1e-9 * (b - a); k++) {
-		if (f1 < f2) {
-			lo = x1;
-			x1 = x2;
-			f1 = f2;
-			x2 = lo + GOLDEN * (hi - lo);
-			f2 = f(x2);
-		} else {
-			hi = x2;
-			x2 = x1;
-			f2 = f1;
-			x1 = hi - GOLDEN * (hi - lo);
-			f1 = f(x1);
-		}
-	}
-	const x = f1 > f2 ? x1 : x2;
-	const y = Math.max(f1, f2);
-	return y >= best ? { x, y } : { x: a + bestI * h, y: best };
+	addSagPieces(solveBeam(creep, perm), xs, c);
+	addSagPieces(permInstant, xs, c, -1);
+	return { model, all, selfWeightInstant: permInstant, pieces, longTerm, creepApplies: true };
 }
 
 export interface Check {
@@ -119,15 +88,49 @@ export interface Check {
 	margin: number;
 }
 
+/**
+ * Largest sag of the pieces between x0 and x1 (both break points) and where. Segments are read
+ * left to right; the first of equal peaks is kept.
+ */
+function spanPeak(pieces: SagPieces, x0: number, x1: number): { x: number; y: number } {
+	const { xs, c } = pieces;
+	let i = segmentOf(xs, x0);
+	let bestX = x0;
+	let best = -Infinity;
+	for (; i < xs.length - 1 && xs[i] < x1; i++) {
+		const p = segmentPeak(c, i, xs[i + 1] - xs[i]);
+		if (p.y > best) {
+			best = p.y;
+			bestX = xs[i] + p.t;
+		}
+	}
+	return { x: bestX, y: best };
+}
+
+/** Margin of the governing span only: what the solvers iterate on. */
+export function marginOfSolved(solved: Solved): number {
+	const { model, pieces } = solved;
+	let x0 = 0;
+	let margin = Infinity;
+	for (const l of model.spans) {
+		const sag = Math.max(0, spanPeak(pieces, x0, x0 + l).y);
+		const allowed = model.limit.allowed(l);
+		const m = (allowed - sag) / allowed;
+		if (m < margin) margin = m;
+		x0 += l;
+	}
+	return margin;
+}
+
 /** Each span's largest long-term sag against the limit; the governing one has the least margin. */
 export function checkSpans(solved: Solved): Check {
-	const { model } = solved;
+	const { model, pieces } = solved;
 	const spans: SpanCheck[] = [];
 	let x0 = 0;
 	let governing: SpanCheck | undefined;
 	let margin = Infinity;
 	for (const l of model.spans) {
-		const p = peak(solved.longTerm, x0, x0 + l);
+		const p = spanPeak(pieces, x0, x0 + l);
 		const allowed = model.limit.allowed(l);
 		const sag = Math.max(0, p.y);
 		const check = { from: x0, to: x0 + l, sag, at: p.x, allowed, pass: sag <= allowed };
@@ -239,18 +242,23 @@ export function analyzeInput(input: ShelfInput): ShelfResult {
 	const bendingOnly = solveBeam({ ...all.model, ga: Infinity }, all.loads);
 	const bendingSag = sagAt(bendingOnly, g.at);
 	const swSag =
-		totalLoad(model.selfWeight) > 0 ? sagAt(solveBeam(all.model, model.selfWeight), g.at) : 0;
+		totalLoad(model.selfWeight) > 0
+			? sagAt(solved.selfWeightInstant ?? solveBeam(all.model, model.selfWeight), g.at)
+			: 0;
 	const mm = maxMoment(all);
 	const { panelStress, strength } = strengthOf(model, mm.moment);
 
 	const n = input.options.curvePoints;
-	const curve: [number, number][] = [];
+	const curve: [number, number][] = new Array(n);
+	const { xs, c } = solved.pieces;
 	let lowest = 0;
-	for (let i = 0; i < n; i++) {
+	// the points run left to right, so the segment only ever moves forward
+	for (let i = 0, seg = 0; i < n; i++) {
 		const x = (model.length * i) / (n - 1);
-		const y = solved.longTerm(x);
-		lowest = Math.min(lowest, y);
-		curve.push([x, y]);
+		while (seg < xs.length - 2 && xs[seg + 1] <= x) seg++;
+		const y = pieceAt(c, seg, x - xs[seg]);
+		if (y < lowest) lowest = y;
+		curve[i] = [x, y];
 	}
 	const uplift = lowest < -Math.max(1e-4, 0.05 * g.sag);
 	const longTermSag = g.sag;
@@ -304,12 +312,28 @@ export function analyzeInput(input: ShelfInput): ShelfResult {
 }
 
 /** No NaN or Infinity leaves the engine; reaching this is a bug, not a bad request. */
-function assertFinite(value: unknown, path = 'result'): void {
+function assertFinite(value: unknown): void {
+	// walk without building paths; only a failure pays for naming where it was
+	if (!allFinite(value)) findNonFinite(value, 'result');
+}
+
+function allFinite(value: unknown): boolean {
+	if (typeof value === 'number') return Number.isFinite(value);
+	if (Array.isArray(value)) {
+		for (let i = 0; i < value.length; i++) if (!allFinite(value[i])) return false;
+		return true;
+	}
+	if (value && typeof value === 'object')
+		for (const k in value) if (!allFinite((value as Record<string, unknown>)[k])) return false;
+	return true;
+}
+
+function findNonFinite(value: unknown, path: string): void {
 	if (typeof value === 'number') {
 		if (!Number.isFinite(value)) throw new Error(`Engine produced a non-finite number at ${path}.`);
-	} else if (Array.isArray(value)) value.forEach((v, i) => assertFinite(v, `${path}[${i}]`));
+	} else if (Array.isArray(value)) value.forEach((v, i) => findNonFinite(v, `${path}[${i}]`));
 	else if (value && typeof value === 'object')
-		for (const [k, v] of Object.entries(value)) assertFinite(v, `${path}.${k}`);
+		for (const [k, v] of Object.entries(value)) findNonFinite(v, `${path}.${k}`);
 }
 
 /** Validate a request with the shared schema; throws ShelfInputError naming each bad field. */

@@ -251,3 +251,199 @@ export function maxMoment(s: BeamSolution): { moment: number; at: number } {
 	}
 	return best;
 }
+
+/**
+ * The sag of a solved beam as one polynomial per segment. Between break points (ends, inner
+ * supports, point loads, the ends of part-length loads) every singularity term is either off or
+ * a plain power of x, so v(x) is a quartic there. Coefficients are stored in the local coordinate
+ * t = x − xs[i] (five per segment: t⁰ … t⁴), which keeps the powers small and the sums well
+ * conditioned. Evaluating one is a short Horner loop; the largest sag of a segment comes from
+ * the roots of a cubic instead of a search.
+ */
+export interface SagPieces {
+	/** break points from 0 to the length, ascending, no repeats */
+	xs: Float64Array;
+	/** five coefficients per segment, lowest power first, in t = x − xs[i] */
+	c: Float64Array;
+}
+
+/** Break points of a beam under its loads: where any singularity term switches on. */
+export function breakPoints(model: BeamModel, loads: BeamLoads): Float64Array {
+	const { length } = model;
+	const all: number[] = [0, length];
+	for (const s of model.inner) all.push(s);
+	for (const p of loads.points) all.push(p.at);
+	for (const u of loads.udls) all.push(u.from, u.to);
+	all.sort((a, b) => a - b);
+	const xs: number[] = [];
+	for (const x of all)
+		if (x >= 0 && x <= length && (xs.length === 0 || x > xs[xs.length - 1])) xs.push(x);
+	return Float64Array.from(xs);
+}
+
+/** Add k·(x − p)ᵏ for the segment starting at a ≥ p, in t = x − a, to c[o … o + 4]. */
+function addPower(c: Float64Array, o: number, k: number, power: number, e: number): void {
+	if (power === 1) {
+		c[o] += k * e;
+		c[o + 1] += k;
+	} else if (power === 2) {
+		c[o] += k * e * e;
+		c[o + 1] += 2 * k * e;
+		c[o + 2] += k;
+	} else if (power === 3) {
+		c[o] += k * e * e * e;
+		c[o + 1] += 3 * k * e * e;
+		c[o + 2] += 3 * k * e;
+		c[o + 3] += k;
+	} else {
+		const e2 = e * e;
+		c[o] += k * e2 * e2;
+		c[o + 1] += 4 * k * e2 * e;
+		c[o + 2] += 6 * k * e2;
+		c[o + 3] += 4 * k * e;
+		c[o + 4] += k;
+	}
+}
+
+/**
+ * Add scale × the sag of a solution, segment by segment over the break points xs (which must
+ * include the solution's own break points), into c. Same terms as sagAt, expanded.
+ */
+export function addSagPieces(s: BeamSolution, xs: Float64Array, c: Float64Array, scale = 1): void {
+	const { ei, ga, inner } = s.model;
+	const sf = Number.isFinite(ga) ? scale / ga : 0;
+	const fe = scale / ei;
+	const { points, udls } = s.loads;
+	for (let i = 0; i < xs.length - 1; i++) {
+		const a = xs[i];
+		const o = 5 * i;
+		// unknowns at the left end: F −= M0·x²/2 + V0·x³/6, M += M0 + V0·x, and C1·x + C2
+		addPower(c, o, (-s.m0 / 2) * fe, 2, a);
+		addPower(c, o, (-s.v0 / 6) * fe, 3, a);
+		c[o] += s.m0 * sf + s.c2 * scale;
+		addPower(c, o, s.v0 * sf + s.c1 * scale, 1, a);
+		for (let j = 0; j < inner.length; j++) {
+			const e = a - inner[j];
+			if (e < 0) continue;
+			addPower(c, o, (-s.inner[j] / 6) * fe, 3, e);
+			addPower(c, o, s.inner[j] * sf, 1, e);
+		}
+		for (const p of points) {
+			const e = a - p.at;
+			if (e < 0) continue;
+			addPower(c, o, (p.force / 6) * fe, 3, e);
+			addPower(c, o, -p.force * sf, 1, e);
+		}
+		for (const u of udls) {
+			const e1 = a - u.from;
+			if (e1 < 0) continue;
+			addPower(c, o, (u.w / 24) * fe, 4, e1);
+			addPower(c, o, (-u.w / 2) * sf, 2, e1);
+			const e2 = a - u.to;
+			if (e2 < 0) continue;
+			addPower(c, o, (-u.w / 24) * fe, 4, e2);
+			addPower(c, o, (u.w / 2) * sf, 2, e2);
+		}
+	}
+}
+
+/** The sag of one solution as pieces on its own break points. */
+export function sagPieces(s: BeamSolution): SagPieces {
+	const xs = breakPoints(s.model, s.loads);
+	const c = new Float64Array(5 * Math.max(0, xs.length - 1));
+	addSagPieces(s, xs, c);
+	return { xs, c };
+}
+
+/** Value of segment i at t (from the segment's start). */
+export function pieceAt(c: Float64Array, i: number, t: number): number {
+	const o = 5 * i;
+	return c[o] + t * (c[o + 1] + t * (c[o + 2] + t * (c[o + 3] + t * c[o + 4])));
+}
+
+/** Segment holding x: the last i with xs[i] ≤ x (clamped to the first and last segment). */
+export function segmentOf(xs: Float64Array, x: number): number {
+	let lo = 0;
+	let hi = xs.length - 2;
+	while (lo < hi) {
+		const mid = (lo + hi + 1) >> 1;
+		if (xs[mid] <= x) lo = mid;
+		else hi = mid - 1;
+	}
+	return lo;
+}
+
+/** Sag at x from the pieces. */
+export function piecesAt(p: SagPieces, x: number): number {
+	const i = segmentOf(p.xs, x);
+	return pieceAt(p.c, i, x - p.xs[i]);
+}
+
+/** Roots of q0 + q1·t + q2·t² strictly inside (0, h), ascending (none, one or two). */
+function quadraticRootsIn(q0: number, q1: number, q2: number, h: number, out: number[]): void {
+	if (q2 === 0) {
+		if (q1 !== 0) {
+			const t = -q0 / q1;
+			if (t > 0 && t < h) out.push(t);
+		}
+		return;
+	}
+	const disc = q1 * q1 - 4 * q2 * q0;
+	if (disc < 0) return;
+	// the stable form: no difference of nearly equal numbers
+	const q = -0.5 * (q1 + (q1 >= 0 ? Math.sqrt(disc) : -Math.sqrt(disc)));
+	const r1 = q / q2;
+	const r2 = q !== 0 ? q0 / q : r1;
+	const lo = Math.min(r1, r2);
+	const hi = Math.max(r1, r2);
+	if (lo > 0 && lo < h) out.push(lo);
+	if (hi > 0 && hi < h && hi !== lo) out.push(hi);
+}
+
+const scratch: number[] = [];
+
+/**
+ * Largest value of segment i over [0, h] and where (t from the segment's start): the ends, the
+ * turning points of the slope, and each zero where the slope goes from rising to falling
+ * (bisected to the last bit the interval allows).
+ */
+export function segmentPeak(c: Float64Array, i: number, h: number): { t: number; y: number } {
+	const o = 5 * i;
+	// slope v' = d0 + d1 t + d2 t² + d3 t³
+	const d0 = c[o + 1];
+	const d1 = 2 * c[o + 2];
+	const d2 = 3 * c[o + 3];
+	const d3 = 4 * c[o + 4];
+	const slope = (t: number) => d0 + t * (d1 + t * (d2 + t * d3));
+	let bestT = 0;
+	let best = c[o];
+	const consider = (t: number) => {
+		const y = pieceAt(c, i, t);
+		if (y > best) {
+			best = y;
+			bestT = t;
+		}
+	};
+	scratch.length = 0;
+	scratch.push(0);
+	quadraticRootsIn(d1, 2 * d2, 3 * d3, h, scratch);
+	scratch.push(h);
+	for (let k = 0; k + 1 < scratch.length; k++) {
+		let lo = scratch[k];
+		let hi = scratch[k + 1];
+		if (k > 0) consider(lo);
+		const slo = slope(lo);
+		const shi = slope(hi);
+		// the slope is monotone between these points: a maximum of v only where it falls through 0
+		if (!(slo > 0 && shi < 0)) continue;
+		for (let n = 0; n < 80; n++) {
+			const mid = 0.5 * (lo + hi);
+			if (mid <= lo || mid >= hi) break;
+			if (slope(mid) > 0) lo = mid;
+			else hi = mid;
+		}
+		consider(0.5 * (lo + hi));
+	}
+	consider(h);
+	return { t: bestT, y: best };
+}

@@ -186,6 +186,17 @@ export function buildModel(input: ShelfInput): ShelfModel {
 				: ends.simple
 			: ends[support];
 
+	const limit = deflectionLimit(input.limit);
+	// a span so short that its allowed sag rounds to nothing cannot be checked (a margin of 0/0)
+	spans.forEach((l, i) => {
+		if (!(limit.allowed(l) > 0))
+			issues.push({
+				path: typeof support === 'object' ? ['support', 'spans', i] : ['span'],
+				message: 'Too short to check against the limit: expected a span of at least a millimetre.'
+			});
+	});
+	if (issues.length) throw new ShelfInputError(issues);
+
 	const applied: BeamLoads = { points: [], udls: [] };
 	for (const load of input.loads) {
 		if (load.kind === 'area')
@@ -211,7 +222,7 @@ export function buildModel(input: ShelfInput): ShelfModel {
 		panel,
 		applied,
 		selfWeight,
-		limit: deflectionLimit(input.limit),
+		limit,
 		warnings
 	};
 }

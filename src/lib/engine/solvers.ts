@@ -16,7 +16,14 @@ import {
 	type ShelfInput
 } from '../schemas/shelf';
 import { maxMoment } from './beam';
-import { analyzeInput, checkSpans, parseRequest, safely, solveShelf } from './analyze';
+import {
+	analyzeInput,
+	checkSpans,
+	marginOfSolved,
+	parseRequest,
+	safely,
+	solveShelf
+} from './analyze';
 import { ShelfInputError } from './errors';
 import { buildModel } from './model';
 import { partStresses } from './section';
@@ -69,7 +76,7 @@ export function bracketedRoot(
 
 /** Governing margin of a validated input: positive passes. */
 export function marginOf(input: ShelfInput): number {
-	return checkSpans(solveShelf(buildModel(input))).margin;
+	return marginOfSolved(solveShelf(buildModel(input)));
 }
 
 function rejectPositioned(input: { loads: ShelfInput['loads'] }, what: string) {
