@@ -44,7 +44,7 @@ export const LAYOUT = {
 	side: 16,
 	shelfTop: 84,
 	/** the drawn sag (or limit, whichever is larger) aims at this many pixels */
-	targetSagPx: 40,
+	targetSagPx: 56,
 	minPanelPx: 5
 } as const;
 

@@ -1,0 +1,65 @@
+/**
+ * What the drawing needs from the form and the engine's result: metres, support kind, loads
+ * with their labels as typed, strips, the deflected curve and the limit of the governing span.
+ */
+import type { DrawingLoad, ShelfDrawingInput } from '../components/shelf-drawing/geometry';
+import { withUnitMark } from '../components/quantity-input/reading';
+import { tryParseLength } from '../engine/length';
+import type { ShelfResult } from '../engine/types';
+import type { UserLengthUnit } from './lengths';
+import type { ShelfDraft } from './shelf-draft';
+
+function metres(text: string, unit: UserLengthUnit, fallback: number): number {
+	const read = tryParseLength(withUnitMark(text, unit));
+	return read.ok && read.value > 0 ? read.value : fallback;
+}
+
+export function drawingFor(d: ShelfDraft, r: ShelfResult, unit: UserLengthUnit): ShelfDrawingInput {
+	const span = r.span;
+	const loads: DrawingLoad[] = [];
+	const label = d.load.trim();
+	if (label && d.loadKind === 'point')
+		loads.push({ kind: 'point', atM: Math.min(span, metres(d.pointAt, unit, span / 2)), label });
+	else if (label)
+		loads.push({ kind: d.loadKind === 'line' ? 'line' : 'area', fromM: 0, toM: span, label });
+	const strips = [
+		...(d.front.on ? [{ side: 'front' as const, heightM: metres(d.front.height, unit, 0) }] : []),
+		...(d.below.on ? [{ side: 'below' as const, heightM: metres(d.below.height, unit, 0) }] : [])
+	];
+	return {
+		spanM: span,
+		thicknessM: metres(d.thickness, unit, 0.019),
+		support: d.support,
+		supportsM: r.supports,
+		loads,
+		strips,
+		curve: r.curve,
+		sagAtM: r.sag.at,
+		sagM: r.sag[r.sag.checked],
+		allowedM: r.limit.allowed
+	};
+}
+
+/** One or two sentences for screen readers: what the drawing shows. */
+export function drawingDescription(
+	d: ShelfDraft,
+	r: ShelfResult,
+	unit: UserLengthUnit,
+	format: (m: number) => string
+) {
+	const held = {
+		simple: 'resting on pins between two case sides',
+		fixed: 'with both ends fixed into the case sides',
+		cantilever: 'cantilevered from a wall',
+		continuous: `running over ${d.bays - 1} divider${d.bays > 2 ? 's' : ''} in ${d.bays} equal spans`
+	}[d.support];
+	const strips = [d.front.on && 'a solid nosing on the front edge', d.below.on && 'a cleat below']
+		.filter(Boolean)
+		.join(' and ');
+	return (
+		`Front elevation of a ${format(r.span)} shelf, ${format(metres(d.thickness, unit, 0))} thick, ${held}` +
+		`${strips ? `, with ${strips}` : ''}. ` +
+		`It carries ${d.load || 'only its own weight'} and is drawn sagging ${format(r.sag[r.sag.checked])} ` +
+		`at ${format(r.sag.at)} from the left end, against a limit of ${format(r.limit.allowed)}.`
+	);
+}

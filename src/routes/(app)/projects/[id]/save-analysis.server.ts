@@ -1,0 +1,61 @@
+// The save action shared by the analysis screens: validate the form and the input with the shared
+// schemas, then create (303 to the saved analysis) or update (409 when someone saved in between).
+import { fail, redirect, type RequestEvent } from '@sveltejs/kit';
+import type { z } from 'zod';
+import { requireActor } from '$lib/server/access';
+import { AnalysisProblem, createAnalysis, updateAnalysis } from '$lib/server/analyses';
+import type { AnalysisKind } from '$lib/server/db/schema';
+import { analysisFormSchema } from '$lib/schemas/analysis-form';
+
+type Issue = { path: (string | number)[]; message: string };
+
+const clean = (path: PropertyKey[]) =>
+	path.filter((p): p is string | number => typeof p !== 'symbol');
+
+export async function saveAnalysis(
+	event: RequestEvent,
+	kind: AnalysisKind,
+	inputSchema: z.ZodType,
+	screen: string,
+	analysisId?: string
+) {
+	const actor = requireActor(event.locals.actor);
+	const projectId = event.params.id!;
+	const form = analysisFormSchema.safeParse(Object.fromEntries(await event.request.formData()));
+	if (!form.success) {
+		const issues: Issue[] = form.error.issues.map((i) => ({
+			path: clean(i.path),
+			message: i.message
+		}));
+		return fail(400, { message: issues[0]?.message ?? 'Check the form.', issues });
+	}
+	const input = inputSchema.safeParse(form.data.input);
+	if (!input.success) {
+		const issues = input.error.issues.map((i) => ({
+			path: ['input', ...clean(i.path)],
+			message: i.message
+		}));
+		return fail(400, { message: 'Some fields need attention before saving.', issues });
+	}
+	let id: string;
+	try {
+		if (analysisId) {
+			const saved = updateAnalysis(actor, analysisId, {
+				name: form.data.name,
+				input: form.data.input,
+				version: form.data.version ?? 1
+			});
+			return { saved: true, version: saved.version };
+		}
+		id = createAnalysis(actor, projectId, {
+			kind,
+			name: form.data.name,
+			input: form.data.input
+		}).id;
+	} catch (e) {
+		if (e instanceof AnalysisProblem)
+			return fail(e.status, { message: e.message, issues: e.issues as Issue[] });
+		throw e;
+	}
+	redirect(303, `/projects/${projectId}/${screen}/${id}`);
+}
