@@ -245,7 +245,7 @@ export function analyzeInput(input: ShelfInput): ShelfResult {
 		totalLoad(model.selfWeight) > 0
 			? sagAt(solved.selfWeightInstant ?? solveBeam(all.model, model.selfWeight), g.at)
 			: 0;
-	const mm = maxMoment(all);
+	const mm = maxMoment(all, solved.pieces.xs);
 	const { panelStress, strength } = strengthOf(model, mm.moment);
 
 	const n = input.options.curvePoints;
@@ -312,9 +312,16 @@ export function analyzeInput(input: ShelfInput): ShelfResult {
 }
 
 /** No NaN or Infinity leaves the engine; reaching this is a bug, not a bad request. */
-function assertFinite(value: unknown): void {
-	// walk without building paths; only a failure pays for naming where it was
-	if (!allFinite(value)) findNonFinite(value, 'result');
+function assertFinite(result: ShelfResult): void {
+	// walk without building paths; only a failure pays for naming where it was. The curve, the
+	// bulk of the numbers, is read in a plain loop; everything else by the general walk.
+	let ok = true;
+	const { curve } = result;
+	for (let i = 0; i < curve.length && ok; i++)
+		ok = Number.isFinite(curve[i][0]) && Number.isFinite(curve[i][1]);
+	for (const k in result)
+		if (ok && k !== 'curve') ok = allFinite((result as unknown as Record<string, unknown>)[k]);
+	if (!ok) findNonFinite(result, 'result');
 }
 
 function allFinite(value: unknown): boolean {

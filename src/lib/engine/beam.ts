@@ -45,68 +45,102 @@ export interface BeamSolution {
 
 const pos = (x: number) => (x > 0 ? x : 0);
 
-/** F(x), F'(x), M(x) and V(x) of the loads alone (all unknowns zero). */
-function loadTerms(loads: BeamLoads, x: number) {
+/** F(x) of the loads alone (all unknowns zero): the bending part of the sag times EI. */
+function loadF(loads: BeamLoads, x: number): number {
 	let f = 0;
-	let fp = 0;
-	let m = 0;
-	let v = 0;
 	for (const p of loads.points) {
 		const d = pos(x - p.at);
 		f += (p.force * d * d * d) / 6;
-		fp += (p.force * d * d) / 2;
-		m -= p.force * d;
-		if (x >= p.at) v -= p.force;
 	}
 	for (const u of loads.udls) {
 		const a = pos(x - u.from);
 		const b = pos(x - u.to);
 		f += (u.w * (a ** 4 - b ** 4)) / 24;
-		fp += (u.w * (a ** 3 - b ** 3)) / 6;
-		m -= (u.w * (a * a - b * b)) / 2;
-		v -= u.w * (a - b);
 	}
-	return { f, fp, m, v };
+	return f;
+}
+
+/** F'(x) of the loads alone. */
+function loadFp(loads: BeamLoads, x: number): number {
+	let fp = 0;
+	for (const p of loads.points) {
+		const d = pos(x - p.at);
+		fp += (p.force * d * d) / 2;
+	}
+	for (const u of loads.udls) {
+		const a = pos(x - u.from);
+		const b = pos(x - u.to);
+		fp += (u.w * (a ** 3 - b ** 3)) / 6;
+	}
+	return fp;
+}
+
+/** M(x) of the loads alone. */
+function loadM(loads: BeamLoads, x: number): number {
+	let m = 0;
+	for (const p of loads.points) m -= p.force * pos(x - p.at);
+	for (const u of loads.udls) {
+		const a = pos(x - u.from);
+		const b = pos(x - u.to);
+		m -= (u.w * (a * a - b * b)) / 2;
+	}
+	return m;
+}
+
+/** V(x) of the loads alone (just right of x). */
+function loadV(loads: BeamLoads, x: number): number {
+	let v = 0;
+	for (const p of loads.points) if (x >= p.at) v -= p.force;
+	for (const u of loads.udls) v -= u.w * (pos(x - u.from) - pos(x - u.to));
+	return v;
 }
 
 type Quantity = 'v' | 'psi' | 'm' | 'shear';
 
-/** Row of coefficients of the unknowns [M0, V0, C1, C2, R…] and the load constant of a quantity. */
-function row(model: BeamModel, loads: BeamLoads, q: Quantity, x: number): [number[], number] {
+/**
+ * Write the row of coefficients of the unknowns [M0, V0, C1, C2, R…] of a quantity at x into
+ * a[o … o + n − 1] (already zero), and return its load constant.
+ */
+function writeRow(
+	model: BeamModel,
+	loads: BeamLoads,
+	q: Quantity,
+	x: number,
+	a: Float64Array,
+	o: number
+): number {
 	const { ei, ga, inner } = model;
 	const shearFlex = Number.isFinite(ga) ? 1 / ga : 0;
-	const coef = new Array<number>(4 + inner.length).fill(0);
-	const l = loadTerms(loads, x);
 	if (q === 'v') {
-		coef[0] = (-x * x) / 2 / ei + shearFlex;
-		coef[1] = (-x * x * x) / 6 / ei + x * shearFlex;
-		coef[2] = x;
-		coef[3] = 1;
-		inner.forEach((s, j) => {
-			const d = pos(x - s);
-			coef[4 + j] = (-d * d * d) / 6 / ei + d * shearFlex;
-		});
-		return [coef, l.f / ei + l.m * shearFlex];
+		a[o] = (-x * x) / 2 / ei + shearFlex;
+		a[o + 1] = (-x * x * x) / 6 / ei + x * shearFlex;
+		a[o + 2] = x;
+		a[o + 3] = 1;
+		for (let j = 0; j < inner.length; j++) {
+			const d = pos(x - inner[j]);
+			a[o + 4 + j] = (-d * d * d) / 6 / ei + d * shearFlex;
+		}
+		return loadF(loads, x) / ei + loadM(loads, x) * shearFlex;
 	}
 	if (q === 'psi') {
-		coef[0] = -x / ei;
-		coef[1] = (-x * x) / 2 / ei;
-		coef[2] = 1;
-		inner.forEach((s, j) => {
-			const d = pos(x - s);
-			coef[4 + j] = (-d * d) / 2 / ei;
-		});
-		return [coef, l.fp / ei];
+		a[o] = -x / ei;
+		a[o + 1] = (-x * x) / 2 / ei;
+		a[o + 2] = 1;
+		for (let j = 0; j < inner.length; j++) {
+			const d = pos(x - inner[j]);
+			a[o + 4 + j] = (-d * d) / 2 / ei;
+		}
+		return loadFp(loads, x) / ei;
 	}
 	if (q === 'm') {
-		coef[0] = 1;
-		coef[1] = x;
-		inner.forEach((s, j) => (coef[4 + j] = pos(x - s)));
-		return [coef, l.m];
+		a[o] = 1;
+		a[o + 1] = x;
+		for (let j = 0; j < inner.length; j++) a[o + 4 + j] = pos(x - inner[j]);
+		return loadM(loads, x);
 	}
-	coef[1] = 1;
-	inner.forEach((s, j) => (coef[4 + j] = x >= s ? 1 : 0));
-	return [coef, l.v];
+	a[o + 1] = 1;
+	for (let j = 0; j < inner.length; j++) a[o + 4 + j] = x >= inner[j] ? 1 : 0;
+	return loadV(loads, x);
 }
 
 const END_EQUATIONS: Record<EndCondition, [Quantity, Quantity]> = {
@@ -118,59 +152,76 @@ const END_EQUATIONS: Record<EndCondition, [Quantity, Quantity]> = {
 /** Gaussian elimination with partial pivoting; rows are scaled first (the units differ). */
 export function solveLinear(a: number[][], b: number[]): number[] {
 	const n = b.length;
+	const flat = new Float64Array(n * n);
+	for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) flat[i * n + j] = a[i][j];
+	return Array.from(solveFlat(flat, Float64Array.from(b), n));
+}
+
+/** solveLinear on an n × n matrix stored row by row; overwrites a and b. */
+function solveFlat(a: Float64Array, b: Float64Array, n: number): Float64Array {
 	for (let i = 0; i < n; i++) {
 		let scale = 0;
-		for (const c of a[i]) scale = Math.max(scale, Math.abs(c));
+		for (let j = 0; j < n; j++) scale = Math.max(scale, Math.abs(a[i * n + j]));
 		if (scale > 0) {
-			for (let j = 0; j < n; j++) a[i][j] /= scale;
+			for (let j = 0; j < n; j++) a[i * n + j] /= scale;
 			b[i] /= scale;
 		}
 	}
 	for (let k = 0; k < n; k++) {
 		let p = k;
-		for (let i = k + 1; i < n; i++) if (Math.abs(a[i][k]) > Math.abs(a[p][k])) p = i;
-		[a[k], a[p]] = [a[p], a[k]];
-		[b[k], b[p]] = [b[p], b[k]];
-		const pivot = a[k][k];
+		for (let i = k + 1; i < n; i++) if (Math.abs(a[i * n + k]) > Math.abs(a[p * n + k])) p = i;
+		if (p !== k) {
+			for (let j = 0; j < n; j++) {
+				const t = a[k * n + j];
+				a[k * n + j] = a[p * n + j];
+				a[p * n + j] = t;
+			}
+			const t = b[k];
+			b[k] = b[p];
+			b[p] = t;
+		}
+		const pivot = a[k * n + k];
 		if (pivot === 0) throw new Error('The supports do not hold the shelf (a mechanism).');
 		for (let i = k + 1; i < n; i++) {
-			const f = a[i][k] / pivot;
+			const f = a[i * n + k] / pivot;
 			if (f === 0) continue;
-			for (let j = k; j < n; j++) a[i][j] -= f * a[k][j];
+			for (let j = k; j < n; j++) a[i * n + j] -= f * a[k * n + j];
 			b[i] -= f * b[k];
 		}
 	}
-	const x = new Array<number>(n).fill(0);
+	const x = new Float64Array(n);
 	for (let i = n - 1; i >= 0; i--) {
 		let s = b[i];
-		for (let j = i + 1; j < n; j++) s -= a[i][j] * x[j];
-		x[i] = s / a[i][i];
+		for (let j = i + 1; j < n; j++) s -= a[i * n + j] * x[j];
+		x[i] = s / a[i * n + i];
 	}
 	return x;
 }
 
 export function solveBeam(model: BeamModel, loads: BeamLoads): BeamSolution {
-	const rows: number[][] = [];
-	const rhs: number[] = [];
-	const add = (q: Quantity, x: number) => {
-		const [c, k] = row(model, loads, q, x);
-		rows.push(c);
-		rhs.push(-k);
-	};
-	for (const q of END_EQUATIONS[model.left]) add(q, 0);
-	for (const q of END_EQUATIONS[model.right]) add(q, model.length);
-	for (const s of model.inner) add('v', s);
-	const u = solveLinear(rows, rhs);
-	return { model, loads, m0: u[0], v0: u[1], c1: u[2], c2: u[3], inner: u.slice(4) };
+	const n = 4 + model.inner.length;
+	const a = new Float64Array(n * n);
+	const b = new Float64Array(n);
+	const left = END_EQUATIONS[model.left];
+	const right = END_EQUATIONS[model.right];
+	b[0] = -writeRow(model, loads, left[0], 0, a, 0);
+	b[1] = -writeRow(model, loads, left[1], 0, a, n);
+	b[2] = -writeRow(model, loads, right[0], model.length, a, 2 * n);
+	b[3] = -writeRow(model, loads, right[1], model.length, a, 3 * n);
+	for (let j = 0; j < model.inner.length; j++)
+		b[4 + j] = -writeRow(model, loads, 'v', model.inner[j], a, (4 + j) * n);
+	const u = solveFlat(a, b, n);
+	const inner: number[] = new Array(n - 4);
+	for (let j = 4; j < n; j++) inner[j - 4] = u[j];
+	return { model, loads, m0: u[0], v0: u[1], c1: u[2], c2: u[3], inner };
 }
 
 /** Sag at x, m (downward positive). */
 export function sagAt(s: BeamSolution, x: number): number {
 	const { ei, ga, inner } = s.model;
 	const shearFlex = Number.isFinite(ga) ? 1 / ga : 0;
-	const l = loadTerms(s.loads, x);
-	let f = l.f - (s.m0 * x * x) / 2 - (s.v0 * x * x * x) / 6;
-	let m = l.m + s.m0 + s.v0 * x;
+	let f = loadF(s.loads, x) - (s.m0 * x * x) / 2 - (s.v0 * x * x * x) / 6;
+	let m = loadM(s.loads, x) + s.m0 + s.v0 * x;
 	for (let j = 0; j < inner.length; j++) {
 		const d = pos(x - inner[j]);
 		f -= (s.inner[j] * d * d * d) / 6;
@@ -181,14 +232,14 @@ export function sagAt(s: BeamSolution, x: number): number {
 
 /** Bending moment at x, N·m (sagging positive). */
 export function momentAt(s: BeamSolution, x: number): number {
-	let m = loadTerms(s.loads, x).m + s.m0 + s.v0 * x;
+	let m = loadM(s.loads, x) + s.m0 + s.v0 * x;
 	for (let j = 0; j < s.inner.length; j++) m += s.inner[j] * pos(x - s.model.inner[j]);
 	return m;
 }
 
 /** Shear force just right of x, N. */
 export function shearAt(s: BeamSolution, x: number): number {
-	let v = loadTerms(s.loads, x).v + s.v0;
+	let v = loadV(s.loads, x) + s.v0;
 	for (let j = 0; j < s.inner.length; j++) if (x >= s.model.inner[j]) v += s.inner[j];
 	return v;
 }
@@ -218,22 +269,21 @@ export function reactions(s: BeamSolution): { at: number; force: number; moment:
 }
 
 /** Largest absolute bending moment and where: checked at every break point and shear zero. */
-export function maxMoment(s: BeamSolution): { moment: number; at: number } {
-	const { length, inner } = s.model;
-	const breaks = new Set<number>([0, length, ...inner]);
-	for (const p of s.loads.points) breaks.add(p.at);
-	for (const u of s.loads.udls) {
-		breaks.add(u.from);
-		breaks.add(u.to);
-	}
-	const xs = [...breaks].filter((x) => x >= 0 && x <= length).sort((a, b) => a - b);
-	let best = { moment: 0, at: 0 };
-	const consider = (x: number) => {
-		const m = Math.abs(momentAt(s, x));
-		if (m > best.moment) best = { moment: m, at: x };
-	};
+export function maxMoment(
+	s: BeamSolution,
+	xs = breakPoints(s.model, s.loads)
+): {
+	moment: number;
+	at: number;
+} {
+	let moment = 0;
+	let at = 0;
 	for (let i = 0; i < xs.length; i++) {
-		consider(xs[i]);
+		const m = Math.abs(momentAt(s, xs[i]));
+		if (m > moment) {
+			moment = m;
+			at = xs[i];
+		}
 		// left limit matters only for a jump in M, which point forces do not cause; shear is
 		// linear between break points, so its zero (a moment peak) is found exactly from two points
 		if (i + 1 < xs.length) {
@@ -245,11 +295,17 @@ export function maxMoment(s: BeamSolution): { moment: number; at: number } {
 			const v2 = shearAt(s, x2);
 			if (v1 !== v2) {
 				const x0 = x1 - (v1 * (x2 - x1)) / (v2 - v1);
-				if (x0 > a && x0 < b) consider(x0);
+				if (x0 > a && x0 < b) {
+					const m0 = Math.abs(momentAt(s, x0));
+					if (m0 > moment) {
+						moment = m0;
+						at = x0;
+					}
+				}
 			}
 		}
 	}
-	return best;
+	return { moment, at };
 }
 
 /**
@@ -402,10 +458,13 @@ function quadraticRootsIn(q0: number, q1: number, q2: number, h: number, out: nu
 
 const scratch: number[] = [];
 
+function cubicAt(d0: number, d1: number, d2: number, d3: number, t: number): number {
+	return d0 + t * (d1 + t * (d2 + t * d3));
+}
+
 /**
  * Largest value of segment i over [0, h] and where (t from the segment's start): the ends, the
- * turning points of the slope, and each zero where the slope goes from rising to falling
- * (bisected to the last bit the interval allows).
+ * turning points of the slope, and each zero where the slope goes from rising to falling.
  */
 export function segmentPeak(c: Float64Array, i: number, h: number): { t: number; y: number } {
 	const o = 5 * i;
@@ -414,16 +473,8 @@ export function segmentPeak(c: Float64Array, i: number, h: number): { t: number;
 	const d1 = 2 * c[o + 2];
 	const d2 = 3 * c[o + 3];
 	const d3 = 4 * c[o + 4];
-	const slope = (t: number) => d0 + t * (d1 + t * (d2 + t * d3));
 	let bestT = 0;
 	let best = c[o];
-	const consider = (t: number) => {
-		const y = pieceAt(c, i, t);
-		if (y > best) {
-			best = y;
-			bestT = t;
-		}
-	};
 	scratch.length = 0;
 	scratch.push(0);
 	quadraticRootsIn(d1, 2 * d2, 3 * d3, h, scratch);
@@ -431,19 +482,56 @@ export function segmentPeak(c: Float64Array, i: number, h: number): { t: number;
 	for (let k = 0; k + 1 < scratch.length; k++) {
 		let lo = scratch[k];
 		let hi = scratch[k + 1];
-		if (k > 0) consider(lo);
-		const slo = slope(lo);
-		const shi = slope(hi);
+		let t = -1;
+		if (k > 0) t = lo;
+		let fl = cubicAt(d0, d1, d2, d3, lo);
+		let fh = cubicAt(d0, d1, d2, d3, hi);
 		// the slope is monotone between these points: a maximum of v only where it falls through 0
-		if (!(slo > 0 && shi < 0)) continue;
-		for (let n = 0; n < 80; n++) {
-			const mid = 0.5 * (lo + hi);
-			if (mid <= lo || mid >= hi) break;
-			if (slope(mid) > 0) lo = mid;
-			else hi = mid;
+		if (fl > 0 && fh < 0) {
+			// regula falsi with the Illinois correction, bisecting when a step lands outside
+			let side = 0;
+			for (let n = 0; n < 100 && hi - lo > 1e-13 * h; n++) {
+				let m = (lo * fh - hi * fl) / (fh - fl);
+				if (!(m > lo && m < hi)) m = 0.5 * (lo + hi);
+				if (!(m > lo && m < hi)) break;
+				const fm = cubicAt(d0, d1, d2, d3, m);
+				if (fm > 0) {
+					lo = m;
+					fl = fm;
+					if (side === 1) fh /= 2;
+					side = 1;
+				} else if (fm < 0) {
+					hi = m;
+					fh = fm;
+					if (side === -1) fl /= 2;
+					side = -1;
+				} else {
+					lo = hi = m;
+					break;
+				}
+			}
+			const root = 0.5 * (lo + hi);
+			if (t >= 0) {
+				const y = pieceAt(c, i, t);
+				if (y > best) {
+					best = y;
+					bestT = t;
+				}
+			}
+			t = root;
 		}
-		consider(0.5 * (lo + hi));
+		if (t >= 0) {
+			const y = pieceAt(c, i, t);
+			if (y > best) {
+				best = y;
+				bestT = t;
+			}
+		}
 	}
-	consider(h);
+	const y = pieceAt(c, i, h);
+	if (y > best) {
+		best = y;
+		bestT = h;
+	}
 	return { t: bestT, y: best };
 }
