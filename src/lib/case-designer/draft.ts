@@ -3,11 +3,10 @@
  * the case engine's design (quantity strings, which caseDesignSchema reads), and back from a stored
  * design (SI numbers) to texts in the reader's unit. Bare numbers are inches to an inch user and
  * millimetres to a millimetre user (withUnitMark), as in every other field of the product.
+ * Stored designs come back through stored.ts.
  */
 import type { CaseDesignInput } from '../schemas/case';
 import { withUnitMark } from '../components/quantity-input/reading';
-import { formatLength } from '../engine/length';
-import { formatPressure } from '../engine/quantity';
 import type { UserLengthUnit } from '../workbench/lengths';
 
 export type JointChoice = 'biscuit' | 'pocket-screw' | 'screw' | 'dado';
@@ -222,115 +221,4 @@ export function toDesign(d: CaseDraft, unit: UserLengthUnit): CaseDesignInput {
 		limit: d.limit,
 		service: d.service
 	};
-}
-
-type Stored = Record<string, unknown>;
-const obj = (v: unknown): Stored | undefined =>
-	v && typeof v === 'object' && !Array.isArray(v) ? (v as Stored) : undefined;
-
-/** A stored design (validated, SI numbers) back into the form's texts, in the reader's unit. */
-export function fromDesign(input: unknown, unit: UserLengthUnit): CaseDraft {
-	const d = defaultCase(unit);
-	const s = obj(input);
-	if (!s) return d;
-	const L = (v: unknown, fallback: string) =>
-		typeof v === 'number' ? formatLength(v, { unit }) : typeof v === 'string' ? v : fallback;
-	const M = (v: unknown, fallback: string) => (typeof v === 'string' ? v : fallback);
-	const end = (v: unknown): EndDraft => {
-		const e = obj(v) ?? {};
-		return {
-			material: M(e.material, ''),
-			thickness: L(e.thickness, ''),
-			joint: (e.joint as JointChoice) ?? 'biscuit',
-			jointCount: typeof e.jointCount === 'number' ? e.jointCount : null
-		};
-	};
-	d.width = L(s.width, d.width);
-	d.height = L(s.height, d.height);
-	d.depth = L(s.depth, d.depth);
-	const sides = obj(s.sides) ?? {};
-	d.sides = {
-		material: M(sides.material, d.sides.material),
-		thickness: L(sides.thickness, d.sides.thickness)
-	};
-	d.top = end(s.top);
-	d.bottom = end(s.bottom);
-	const back = obj(s.back);
-	d.back = back
-		? {
-				on: true,
-				material: M(back.material, d.back.material),
-				thickness: L(back.thickness, d.back.thickness),
-				fitted: back.fitted === 'applied' ? 'applied' : 'rabbet'
-			}
-		: { ...d.back, on: false };
-	d.shelves = (Array.isArray(s.shelves) ? s.shelves : []).map((raw) => {
-		const r = obj(raw) ?? {};
-		const loads = (Array.isArray(r.loads) ? r.loads : []) as Stored[];
-		const spread = loads.findIndex((l) => l?.kind === 'area');
-		const row = newShelf(unit, L(r.height, ''));
-		const nosing = obj(r.nosing);
-		return {
-			...row,
-			name: typeof r.name === 'string' ? r.name : '',
-			kind: r.kind === 'fixed' ? 'fixed' : 'adjustable',
-			material: M(r.material, ''),
-			thickness: L(r.thickness, ''),
-			joint: (r.joint as JointChoice) ?? 'biscuit',
-			jointCount: typeof r.jointCount === 'number' ? r.jointCount : null,
-			ends: r.ends === 'fixed' ? 'fixed' : 'simple',
-			load: spread >= 0 ? pressureText(loads[spread].pressure, unit) : '',
-			nosing: nosing
-				? {
-						on: true,
-						material: M(nosing.material, OAK),
-						height: L(nosing.height, row.nosing.height),
-						thickness: L(nosing.thickness, row.nosing.thickness)
-					}
-				: row.nosing,
-			otherLoads: loads.filter((_, i) => i !== spread)
-		} satisfies ShelfRowDraft;
-	});
-	const frame = obj(s.faceFrame);
-	d.faceFrame = frame
-		? {
-				on: true,
-				material: M(frame.material, d.faceFrame.material),
-				thickness: L(frame.thickness, d.faceFrame.thickness),
-				stileWidth: L(frame.stileWidth, d.faceFrame.stileWidth),
-				railWidth: L(frame.railWidth, d.faceFrame.railWidth),
-				joint: frame.joint === 'biscuit' ? 'biscuit' : 'pocket-screw',
-				attach: frame.attach === 'pocket-screw' ? 'pocket-screw' : 'biscuit'
-			}
-		: { ...d.faceFrame, on: false };
-	const base = obj(s.base);
-	d.base = base
-		? { on: true, height: L(base.height ?? 0, '0'), setback: L(base.setback ?? 0, '0') }
-		: { ...d.base, on: false };
-	const anchoring = obj(s.anchoring);
-	d.anchoring = {
-		kind: (anchoring?.kind as AnchorChoice) ?? 'none',
-		intoStuds: anchoring?.intoStuds === true
-	};
-	d.seismicRegion = s.seismicRegion === true;
-	if ((LIMITS as readonly unknown[]).includes(s.limit)) d.limit = s.limit as CaseLimit;
-	if (s.service === 'humid' || s.service === 'wet') d.service = s.service;
-	else d.service = 'dry';
-	d.kept = {
-		...(typeof s.name === 'string' ? { name: s.name } : {}),
-		...(Array.isArray(s.drawers) ? { drawers: s.drawers as CaseDesignInput['drawers'] } : {}),
-		...(Array.isArray(s.doors) ? { doors: s.doors as CaseDesignInput['doors'] } : {}),
-		...(typeof s.floorTiltDeg === 'number' ? { floorTiltDeg: s.floorTiltDeg } : {}),
-		...(anchoring && anchoring.height !== undefined
-			? { anchorHeight: anchoring.height as string | number }
-			: {})
-	};
-	return d;
-}
-
-/** A stored pressure (pascals) as the user would type it; a stored text as it was. */
-function pressureText(v: unknown, unit: UserLengthUnit): string {
-	if (typeof v === 'string') return v;
-	if (typeof v !== 'number') return '';
-	return formatPressure(v, { unit: unit === 'mm' ? 'kPa' : 'lbf/ft²' });
 }

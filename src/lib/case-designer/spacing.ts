@@ -28,7 +28,7 @@ export function nextShelfHeight(d: CaseDraft, unit: UserLengthUnit): string {
 		...shelves,
 		{ top: height, under: topUnder }
 	].sort((a, b) => a.top - b.top);
-	let best = { from: bottomTop, clear: topUnder - bottomTop };
+	let best = { from: bottomTop, clear: -Infinity };
 	for (let i = 0; i + 1 < surfaces.length; i++) {
 		const clear = surfaces[i + 1].under - surfaces[i].top;
 		if (clear > best.clear) best = { from: surfaces[i].top, clear };
