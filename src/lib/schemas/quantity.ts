@@ -24,6 +24,8 @@ const SI_NAME: Record<QuantityKind, string> = {
 	moment: 'newton metres'
 };
 
+const MIN_LENGTH_M = 1e-6;
+
 /** A quantity of the given kind: string or SI number in, SI number out. */
 export function quantityField(kind: QuantityKind, options: QuantityFieldOptions = {}) {
 	const expected = expectedFor(kind);
@@ -41,6 +43,16 @@ export function quantityField(kind: QuantityKind, options: QuantityFieldOptions 
 			const value = read.value;
 			if (bound === 'positive' && !(value > 0)) {
 				ctx.addIssue({ code: 'custom', input, message: 'Must be greater than zero.' });
+				return z.NEVER;
+			}
+			// a micrometre is far below any real part: a smaller length is a slip (and denormal numbers
+			// would reach the solver)
+			if (kind === 'length' && bound === 'positive' && value < MIN_LENGTH_M) {
+				ctx.addIssue({
+					code: 'custom',
+					input,
+					message: 'Too small: at least 0.001 mm. Check the unit.'
+				});
 				return z.NEVER;
 			}
 			if (bound === 'nonnegative' && !(value >= 0)) {
