@@ -45,20 +45,19 @@ export interface Solved {
 	creepApplies: boolean;
 }
 
-export function solveShelf(model: ShelfModel): Solved {
+function beamsOf(model: ShelfModel): { instant: BeamModel; creep: BeamModel; loads: BeamLoads } {
 	const { section, input } = model;
 	const shear = input.options.shearDeflection;
-	const beam = (ei: number, ga: number): BeamModel => ({
-		length: model.length,
-		left: model.left,
-		right: model.right,
-		inner: model.inner,
-		ei,
-		ga: shear ? ga : Infinity
-	});
-	const instant = beam(section.ei, section.ga);
-	const creep = beam(section.eiLongTerm, section.gaLongTerm);
-	const loads = merge(model.applied, model.selfWeight);
+	const base = { length: model.length, left: model.left, right: model.right, inner: model.inner };
+	return {
+		instant: { ...base, ei: section.ei, ga: shear ? section.ga : Infinity },
+		creep: { ...base, ei: section.eiLongTerm, ga: shear ? section.gaLongTerm : Infinity },
+		loads: merge(model.applied, model.selfWeight)
+	};
+}
+
+export function solveShelf(model: ShelfModel): Solved {
+	const { instant, creep, loads } = beamsOf(model);
 	const all = solveBeam(instant, loads);
 	const xs = breakPoints(instant, loads);
 	const c = new Float64Array(5 * Math.max(0, xs.length - 1));
@@ -66,7 +65,7 @@ export function solveShelf(model: ShelfModel): Solved {
 	const longTerm = (x: number) => piecesAt(pieces, x);
 	// Creep acts on the permanent load: the shelf's own weight always, the contents when the
 	// duration is long (EN 1995-1-1 §2.3.2.2: final = instant × (1 + k_def) under permanent load).
-	if (input.duration === 'long') {
+	if (model.input.duration === 'long') {
 		addSagPieces(solveBeam(creep, loads), xs, c);
 		const creepApplies = totalLoad(loads) > 0;
 		return { model, all, selfWeightInstant: null, pieces, longTerm, creepApplies };
@@ -79,6 +78,26 @@ export function solveShelf(model: ShelfModel): Solved {
 	addSagPieces(solveBeam(creep, perm), xs, c);
 	addSagPieces(permInstant, xs, c, -1);
 	return { model, all, selfWeightInstant: permInstant, pieces, longTerm, creepApplies: true };
+}
+
+/**
+ * Only the governing sag of solveShelf, as pieces: what a solver needs on every step. Under long
+ * duration the instant beam is not needed at all, so one solve instead of two.
+ */
+export function longTermPieces(model: ShelfModel): SagPieces {
+	const { instant, creep, loads } = beamsOf(model);
+	const xs = breakPoints(instant, loads);
+	const c = new Float64Array(5 * Math.max(0, xs.length - 1));
+	if (model.input.duration === 'long') {
+		addSagPieces(solveBeam(creep, loads), xs, c);
+		return { xs, c };
+	}
+	addSagPieces(solveBeam(instant, loads), xs, c);
+	const perm = model.selfWeight;
+	if (totalLoad(perm) === 0) return { xs, c };
+	addSagPieces(solveBeam(creep, perm), xs, c);
+	addSagPieces(solveBeam(instant, perm), xs, c, -1);
+	return { xs, c };
 }
 
 export interface Check {
@@ -108,8 +127,8 @@ function spanPeak(pieces: SagPieces, x0: number, x1: number): { x: number; y: nu
 }
 
 /** Margin of the governing span only: what the solvers iterate on. */
-export function marginOfSolved(solved: Solved): number {
-	const { model, pieces } = solved;
+export function marginOfModel(model: ShelfModel): number {
+	const pieces = longTermPieces(model);
 	let x0 = 0;
 	let margin = Infinity;
 	for (const l of model.spans) {

@@ -169,25 +169,37 @@ export function buildModel(input: ShelfInput): ShelfModel {
 		STANDARD_GRAVITY
 	);
 
+	return layOut(input, section, panel, deflectionLimit(input.limit), warnings);
+}
+
+const ENDS: Record<'simple' | 'fixed' | 'cantilever', [EndCondition, EndCondition]> = {
+	simple: ['pin', 'pin'],
+	fixed: ['fixed', 'fixed'],
+	cantilever: ['fixed', 'free']
+};
+
+/** The parts of a model that hang on the spans, supports and loads, around a built section. */
+function layOut(
+	input: ShelfInput,
+	section: SectionProperties,
+	panel: ResolvedMaterial,
+	limit: DeflectionLimit,
+	warnings: ShelfWarning[]
+): ShelfModel {
 	const support = input.support;
 	const spans = typeof support === 'object' ? support.spans : [input.span ?? Number.NaN];
 	const length = spans.reduce((a, b) => a + b, 0);
 	const inner: number[] = [];
 	for (let i = 0, x = 0; i < spans.length - 1; i++) inner.push((x += spans[i]));
-	const ends: Record<string, [EndCondition, EndCondition]> = {
-		simple: ['pin', 'pin'],
-		fixed: ['fixed', 'fixed'],
-		cantilever: ['fixed', 'free']
-	};
 	const [left, right] =
 		typeof support === 'object'
 			? support.ends === 'fixed'
-				? ends.fixed
-				: ends.simple
-			: ends[support];
+				? ENDS.fixed
+				: ENDS.simple
+			: ENDS[support];
 
-	const limit = deflectionLimit(input.limit);
 	// a span so short that its allowed sag rounds to nothing cannot be checked (a margin of 0/0)
+	const issues: ShelfIssue[] = [];
 	spans.forEach((l, i) => {
 		if (!(limit.allowed(l) > 0))
 			issues.push({
@@ -225,6 +237,15 @@ export function buildModel(input: ShelfInput): ShelfModel {
 		limit,
 		warnings
 	};
+}
+
+/**
+ * The model of an input that differs from the model's own only in span, spans or loads: the
+ * section, materials and limit are kept, the rest laid out again. What a solver varying the
+ * span or a load calls on every step (same numbers as buildModel of that input).
+ */
+export function relayOut(model: ShelfModel, input: ShelfInput): ShelfModel {
+	return layOut(input, model.section, model.panel, model.limit, model.warnings);
 }
 
 export function isStocked(model: ShelfModel): boolean {

@@ -19,13 +19,13 @@ import { maxMoment } from './beam';
 import {
 	analyzeInput,
 	checkSpans,
-	marginOfSolved,
+	marginOfModel,
 	parseRequest,
 	safely,
 	solveShelf
 } from './analyze';
 import { ShelfInputError } from './errors';
-import { buildModel } from './model';
+import { buildModel, relayOut, type ShelfModel } from './model';
 import { partStresses } from './section';
 import type { ShelfResult } from './types';
 
@@ -76,7 +76,7 @@ export function bracketedRoot(
 
 /** Governing margin of a validated input: positive passes. */
 export function marginOf(input: ShelfInput): number {
-	return marginOfSolved(solveShelf(buildModel(input)));
+	return marginOfModel(buildModel(input));
 }
 
 function rejectPositioned(input: { loads: ShelfInput['loads'] }, what: string) {
@@ -123,7 +123,9 @@ export function maxSpanInput(input: z.output<typeof maxSpanRequestSchema>): MaxS
 			};
 		return { ...input, span: total };
 	};
-	const g = (total: number) => marginOf(at(total));
+	// the section, materials and limit do not hang on the span: build them once
+	const model = buildModel(at(1));
+	const g = (total: number) => marginOfModel(relayOut(model, at(total)));
 	let lo = 0.01;
 	const glo = g(lo);
 	if (glo < 0)
@@ -296,8 +298,11 @@ export function maxLoadInput(input: z.output<typeof maxLoadRequestSchema>): MaxL
 				? { kind: 'line', intensity: x, from: shape.from, to: shape.to }
 				: { kind: 'point', force: x, at: shape.at };
 	const at = (x: number): ShelfInput => ({ ...input, loads: [...input.loads, loadOf(x)] });
+	// the section, materials and limit do not hang on the load: build them once
+	const base = buildModel(at(0));
+	const modelAt = (x: number): ShelfModel => relayOut(base, at(x));
 	const utilisation = (x: number) => {
-		const model = buildModel(at(x));
+		const model = modelAt(x);
 		const solved = solveShelf(model);
 		const m = maxMoment(solved.all).moment;
 		const stresses = partStresses(model.section, m);
@@ -308,7 +313,7 @@ export function maxLoadInput(input: z.output<typeof maxLoadRequestSchema>): MaxL
 		);
 		return u;
 	};
-	const deflection = (x: number) => marginOf(at(x));
+	const deflection = (x: number) => marginOfModel(modelAt(x));
 	const strength = (x: number) => 1 - utilisation(x);
 	const solveFor = (g: (x: number) => number) => {
 		const g0 = g(0);
