@@ -129,7 +129,7 @@ export function layoutShelf(input: ShelfDrawingInput, widthPx: number) {
 
 	const deepestPx =
 		Math.max(...curve.map(([, s]) => s), input.allowedM ?? 0) * scale * exaggeration;
-	const floor = top + facePx + deepestPx + 18;
+	const floor = top + facePx + deepestPx + 30;
 	const dimY = floor + 22;
 	const height = dimY + 22;
 
