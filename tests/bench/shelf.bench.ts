@@ -1,5 +1,12 @@
 import { bench, describe } from 'vitest';
-import { analyzeShelf, maxSpan, type ShelfRequest } from '../../src/lib/engine';
+import {
+	analyzeInput,
+	analyzeShelf,
+	maxSpan,
+	maxSpanInput,
+	maxSpanRequestSchema,
+	type ShelfRequest
+} from '../../src/lib/engine';
 import { buildModel } from '../../src/lib/engine/model';
 import { solveShelf } from '../../src/lib/engine/analyze';
 import { shelfRequestSchema } from '../../src/lib/schemas/shelf';
@@ -22,6 +29,10 @@ describe('one analysis', () => {
 	bench('analyzeShelf (validate, model, solve, 101-point curve)', () => {
 		sink += analyzeShelf(request).sag.longTerm;
 	});
+	const validated = shelfRequestSchema.parse(request);
+	bench('analyzeInput (already validated: model, solve, 101-point curve)', () => {
+		sink += analyzeInput(validated).sag.longTerm;
+	});
 	bench('bare formula: 5wL⁴/384EI + wL²/8κGA', () => {
 		const L = 0.9 + sink * 1e-12;
 		sink +=
@@ -34,6 +45,10 @@ describe('longest span', () => {
 	bench('maxSpan (bracketed root find over the full analysis)', () => {
 		sink += maxSpan(withoutSpan).span;
 	});
+	const validated = maxSpanRequestSchema.parse(withoutSpan);
+	bench('maxSpanInput (already validated)', () => {
+		sink += maxSpanInput(validated).span;
+	});
 	bench('bare formula: cube root of 384EI/(144·5w)', () => {
 		sink += Math.cbrt((384 * E * I) / (144 * 5 * (w + sink * 1e-12)));
 	});
@@ -42,7 +57,7 @@ describe('longest span', () => {
 describe('curve of 101 points', () => {
 	const input = shelfRequestSchema.parse(request);
 	const solved = solveShelf(buildModel(input));
-	bench('engine curve (singularity functions, creep included)', () => {
+	bench('engine curve (quartic pieces, creep included)', () => {
 		let s = 0;
 		for (let i = 0; i <= 100; i++) s += solved.longTerm((0.9 * i) / 100);
 		sink += s;

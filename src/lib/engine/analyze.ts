@@ -23,7 +23,7 @@ import {
 } from './beam';
 import { ShelfInputError } from './errors';
 import { buildModel, isStocked, type ShelfModel } from './model';
-import { NEWTONS_PER_LBF } from './quantity';
+import { NEWTONS_PER_LBF } from './si';
 import { partStresses } from './section';
 import type { SafeResult, ShelfIssue, ShelfResult, ShelfWarning, SpanCheck } from './types';
 import { ENGINE_VERSION } from './version';

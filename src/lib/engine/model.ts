@@ -13,7 +13,7 @@ import type { EdgeInput, ShelfInput } from '../schemas/shelf';
 import type { BeamLoads, EndCondition } from './beam';
 import { ShelfInputError } from './errors';
 import { deflectionLimit, type DeflectionLimit } from './limits';
-import { STANDARD_GRAVITY } from './quantity';
+import { STANDARD_GRAVITY } from './si';
 import { sectionProperties, type SectionPart, type SectionProperties } from './section';
 import type { ShelfIssue, ShelfWarning } from './types';
 

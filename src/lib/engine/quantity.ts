@@ -4,6 +4,7 @@
  */
 import { create, unitDependencies, type Unit } from 'mathjs';
 import { QuantityError, parseLength } from './length';
+import { NEWTONS_PER_LBF, STANDARD_GRAVITY } from './si';
 
 // Only the unit machinery: a small slice of mathjs, created on first use.
 let math: { unit: (text: string) => Unit } | undefined;
@@ -12,10 +13,7 @@ function mathUnit(text: string): Unit {
 	return math.unit(text);
 }
 
-/** Standard acceleration of gravity, exact by definition (3rd CGPM, 1901): 9.80665 m/s². */
-export const STANDARD_GRAVITY = 9.80665;
-/** 1 lbf = 4.4482216152605 N (exact, from the pound and standard gravity). */
-export const NEWTONS_PER_LBF = 4.4482216152605;
+export { NEWTONS_PER_LBF, STANDARD_GRAVITY };
 /** 1 psi = 1 lbf/in² = 6894.757293168 Pa. */
 export const PASCALS_PER_PSI = NEWTONS_PER_LBF / 0.0254 ** 2;
 export const PASCALS_PER_PSF = PASCALS_PER_PSI / 144;
