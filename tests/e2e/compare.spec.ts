@@ -35,7 +35,7 @@ test('a designer compares three materials and saves the comparison', async ({ pa
 
 	await page.getByRole('button', { name: 'Add a candidate' }).click();
 	await page.locator('#cand-2-material').selectOption('red-oak');
-	await page.getByLabel('Thickness (actual)').nth(2).fill('3/4');
+	await page.locator('#cand-2-thickness').fill('3/4');
 	await expect(table(page).locator('tbody tr')).toHaveCount(3);
 	await expect(table(page)).toContainText('3/4" Red oak');
 	await expect(table(page)).toContainText('3/4" MDF');

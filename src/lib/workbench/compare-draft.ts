@@ -5,7 +5,7 @@
  */
 import type { ComparisonRequest } from '../schemas/analysis';
 import { findMaterial } from '../engine/index';
-import { METRES_PER_INCH, formatLength } from '../engine/length';
+import { METRES_PER_INCH, formatLength, tryParseLength } from '../engine/length';
 import { withUnitMark } from '../components/quantity-input/reading';
 import type { UserLengthUnit } from './lengths';
 import { defaultDraft, fromInput, toRequest, type ShelfDraft } from './shelf-draft';
@@ -44,13 +44,15 @@ export function defaultComparison(unit: UserLengthUnit): ComparisonDraft {
 }
 
 /** How the chart and the table name a candidate: `3/4" MDF + 1 1/2" nosing`. */
-export function candidateLabel(c: CandidateDraft): string {
+export function candidateLabel(c: CandidateDraft, unit: UserLengthUnit): string {
 	const full = findMaterial(c.material)?.name ?? c.material;
 	const name = full.replace(/\s*\(.*?\)/g, '').replace(/, solid$/, '');
-	return `${c.thickness.trim()} ${name}${c.nosing ? ` + ${c.nosingHeight.trim()} nosing` : ''}`.slice(
-		0,
-		80
-	);
+	const L = (text: string) => {
+		const read = tryParseLength(withUnitMark(text, unit));
+		return read.ok ? formatLength(read.value, { unit }) : text.trim();
+	};
+	const strip = c.nosing ? ` + ${L(c.nosingHeight)} nosing` : '';
+	return `${L(c.thickness)} ${name}${strip}`.slice(0, 80);
 }
 
 export function toComparisonRequest(d: ComparisonDraft, unit: UserLengthUnit): ComparisonRequest {
@@ -73,7 +75,7 @@ export function toComparisonRequest(d: ComparisonDraft, unit: UserLengthUnit): C
 						}
 					]
 				: [],
-			label: candidateLabel(c)
+			label: candidateLabel(c, unit)
 		}))
 	};
 }

@@ -1,0 +1,96 @@
+import { describe, expect, it } from 'vitest';
+import { readLengthText, withUnitMark } from '../../../src/lib/components/quantity-input/reading';
+import { formatLength, tryParseLength } from '../../../src/lib/engine/length';
+import { ceilTo, floorTo, unitStepM } from '../../../src/lib/workbench/lengths';
+import {
+	defaultDraft,
+	fieldOf,
+	fromInput,
+	toRequest
+} from '../../../src/lib/workbench/shelf-draft';
+import { aboutLength, describeShelf } from '../../../src/lib/workbench/shelf-sentences';
+import { analyzeShelf, shelfRequestSchema } from '../../../src/lib/engine/index';
+
+// 1 in = 0.0254 m exactly (international yard and pound agreement, 1959)
+const IN = 0.0254;
+
+describe('what woodworkers type', () => {
+	it('reads bare numbers as inches (or mm for a mm user), never as metres', () => {
+		expect(withUnitMark('3/4', 'frac16')).toBe('3/4"');
+		expect(withUnitMark('35 1/2', 'frac16')).toBe('35 1/2"');
+		expect(withUnitMark('900', 'mm')).toBe('900 mm');
+		expect(withUnitMark('2\' 11-1/2"', 'frac16')).toBe('2\' 11-1/2"');
+	});
+	it('shows the value read in the user unit, or why it could not be read', () => {
+		const read = (t: string, u: 'frac16' | 'mm') =>
+			readLengthText(t, u, tryParseLength, formatLength);
+		expect(read('2\' 11-1/2"', 'frac16')).toEqual({ ok: true, value: 35.5 * IN, shown: '35 1/2"' });
+		expect(read('900 mm', 'frac16')).toMatchObject({ ok: true, shown: '35 7/16"' }); // 35.43"
+		expect(read('3/4', 'mm')).toMatchObject({ ok: true, shown: '19 mm' }); // 19.05 mm
+		expect(read('11 1/4 bananas', 'frac16')).toMatchObject({ ok: false });
+		expect(read('', 'frac16')).toEqual({ ok: false, message: 'Enter a length.' });
+	});
+});
+
+describe('rounding on the user grid', () => {
+	it('rounds a longest span down and a strip up to the unit step', () => {
+		expect(floorTo(19.0006 * IN, unitStepM('frac16')) / IN).toBeCloseTo(19, 12);
+		expect(floorTo(19.07 * IN, unitStepM('frac16')) / IN).toBeCloseTo(19.0625, 12);
+		expect(ceilTo(1.01 * IN, IN / 4) / IN).toBeCloseTo(1.25, 12);
+		expect(ceilTo(0.0381, 0.005)).toBeCloseTo(0.04, 12);
+	});
+});
+
+describe('the shelf draft', () => {
+	it('makes a valid request from the first shelf and reads a stored one back in the same texts', () => {
+		const draft = {
+			...defaultDraft('frac16'),
+			front: { ...defaultDraft('frac16').front, on: true }
+		};
+		const stored = shelfRequestSchema.parse(toRequest(draft, 'frac16'));
+		expect(stored.span).toBeCloseTo(36 * IN, 12);
+		expect(stored.depth).toBeCloseTo(11.25 * IN, 12);
+		const back = fromInput(stored, 'frac16');
+		expect([back.span, back.depth, back.thickness, back.load]).toEqual([
+			'36"',
+			'11 1/4"',
+			'3/4"',
+			'40 lbf/ft²'
+		]);
+		expect(back.front).toEqual({
+			on: true,
+			material: 'red-oak',
+			height: '1 1/2"',
+			thickness: '3/4"'
+		});
+	});
+	it('splits a continuous shelf into equal spans and names the field of an issue', () => {
+		const draft = {
+			...defaultDraft('frac16'),
+			span: '48',
+			support: 'continuous' as const,
+			bays: 3
+		};
+		const req = toRequest(draft, 'frac16');
+		expect(req.support).toMatchObject({
+			spans: [16 * IN, 16 * IN, 16 * IN].map((x) => expect.closeTo(x, 12))
+		});
+		expect(fieldOf(['loads', 0, 'at'])).toBe('pointAt');
+		expect(fieldOf(['support', 'spans', 1])).toBe('span');
+	});
+});
+
+describe('plain sentences', () => {
+	it('says the sag, the creep and the margin in words', () => {
+		const r = analyzeShelf(toRequest(defaultDraft('frac16'), 'frac16'));
+		const said = describeShelf(r, 'frac16', 'books');
+		expect(said.sag).toBe(
+			`This shelf sags ${aboutLength(r.sag.instant, 'frac16')} when loaded, and ${aboutLength(r.sag.longTerm, 'frac16')} after a year under the same books.`
+		);
+		// L/144 of 36" is exactly 1/4"
+		expect(said.verdict).toBe(
+			`That is within the L/144 limit (1/4"), with ${Math.round(r.limit.margin * 100)}% to spare.`
+		);
+		expect(aboutLength(0.0001, 'frac16')).toBe('less than 1/16"');
+	});
+});
