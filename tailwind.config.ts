@@ -8,7 +8,7 @@ export default {
 		extend: {
 			colors: {
 				paper: { DEFAULT: '#f4efe4', deep: '#ebe3d3', card: '#fbf8f1' },
-				graphite: { DEFAULT: '#2a2926', soft: '#55524b', faint: '#8a857a', rule: '#cfc6b4' },
+				graphite: { DEFAULT: '#2a2926', soft: '#55524b', faint: '#6b665c', rule: '#cfc6b4' },
 				pencil: { DEFAULT: '#b3401a', deep: '#8e3213', wash: '#f3dccf' },
 				verdict: { pass: '#2f5d3a', fail: '#b3401a', warn: '#8a5a00' }
 			},
