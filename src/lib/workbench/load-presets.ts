@@ -1,44 +1,47 @@
 /**
- * Load presets with their source. The design loads are the Architectural Woodwork Standards'
- * (AWI/AWMAC/WI, 2009, §1.2.21): 50 lb/ft² for school, hospital and library shelving, 40 lb/ft²
- * for all other shelving (constants in reference/materials.ts).
+ * The engine's load presets (reference/load-presets.ts, each with its source) as the shelf form
+ * uses them: a kind of load, a text to type in the user's units, and what lies on the shelf.
  */
-import {
-	AWS_DESIGN_LOAD_GENERAL_PSF,
-	AWS_DESIGN_LOAD_LIBRARY_PSF
-} from '../../../reference/materials';
-import { PASCALS_PER_PSF, formatPressure } from '../engine/quantity';
+import { loadPresets } from '../engine/index';
+import { formatLineLoad, formatPressure } from '../engine/quantity';
 import type { UserLengthUnit } from './lengths';
 
 export interface LoadPreset {
 	id: string;
 	label: string;
+	kind: 'area' | 'line';
+	/** Pa for an area load, N/m for a line load */
+	valueSI: number;
 	/** what lies on the shelf, for "after a year under the same …" */
 	contents: string;
-	pressurePa: number;
 	source: string;
 }
 
-const AWS = 'Architectural Woodwork Standards (AWI/AWMAC/WI, 2009) §1.2.21';
+const CONTENTS: Record<string, string> = {
+	'aws-library': 'books',
+	books: 'books',
+	records: 'records',
+	dishes: 'dishes'
+};
 
-export const LOAD_PRESETS: LoadPreset[] = [
-	{
-		id: 'aws-general',
-		label: 'General shelving',
-		contents: 'load',
-		pressurePa: AWS_DESIGN_LOAD_GENERAL_PSF * PASCALS_PER_PSF,
-		source: `${AWS}: 40 lb/ft² for all other shelving`
-	},
-	{
-		id: 'aws-library',
-		label: 'Library, school or hospital shelving',
-		contents: 'books',
-		pressurePa: AWS_DESIGN_LOAD_LIBRARY_PSF * PASCALS_PER_PSF,
-		source: `${AWS}: 50 lb/ft² for school, hospital and library shelving`
-	}
-];
+export const LOAD_PRESETS: LoadPreset[] = loadPresets.map((p) => ({
+	id: p.id,
+	label: p.name,
+	kind: p.load.kind,
+	valueSI: p.load.kind === 'area' ? p.load.pressure : p.load.intensity,
+	contents: CONTENTS[p.id] ?? 'load',
+	source: p.source
+}));
 
-/** The preset's pressure as the user would type it in their unit system. */
+/** The preset's load as the user would type it in their unit system. */
 export function presetText(preset: LoadPreset, unit: UserLengthUnit): string {
-	return formatPressure(preset.pressurePa, { unit: unit === 'mm' ? 'kPa' : 'lbf/ft²' });
+	const metric = unit === 'mm';
+	return preset.kind === 'area'
+		? formatPressure(preset.valueSI, { unit: metric ? 'kPa' : 'lbf/ft²' })
+		: formatLineLoad(preset.valueSI, { unit: metric ? 'N/m' : 'lbf/ft' });
+}
+
+/** The preset a draft's load matches, if any. */
+export function presetOf(kind: string, text: string, unit: UserLengthUnit): LoadPreset | undefined {
+	return LOAD_PRESETS.find((p) => p.kind === kind && presetText(p, unit) === text.trim());
 }
