@@ -1,0 +1,20 @@
+#!/usr/bin/env bash
+# npm run bench: the Node benches (vitest bench), then a fresh build, the gzipped JavaScript the
+# shelf check route loads, and the browser bench (span input to screen in Chromium).
+# Benchmarks report; they never fail on a slow number.
+# One run at a time on a machine, shared with the e2e runner: the build folder is shared.
+set -euo pipefail
+cd "$(dirname "$0")/../.."
+bash tests/e2e/support/ensure-chromium.sh
+exec 9>/tmp/spanwright-e2e.lock
+flock 9
+npx vitest bench --run
+npx vite build --logLevel warn
+if [ -f tests/bench/route-size.ts ]; then
+	npx tsx tests/bench/route-size.ts
+else
+	# hook: tests/bench/route-size.ts (the shelf route's gzipped JS from the build manifest) is
+	# written separately; it runs here once it exists.
+	echo "route-size: tests/bench/route-size.ts not present yet, skipped"
+fi
+npx tsx tests/bench/browser/shelf-input.ts
