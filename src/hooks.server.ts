@@ -3,6 +3,8 @@ import { sequence } from '@sveltejs/kit/hooks';
 import { building, dev } from '$app/environment';
 import { actorForUserId, actorFromBearer } from '$lib/server/accounts';
 import { authHandle, authSecret } from '$lib/server/auth';
+// units beyond the trade's table (unit-table.ts) are read on the server with mathjs
+import '$lib/engine/quantity-full';
 
 /** Refuse to start a production server without AUTH_SECRET, rather than fail every request. */
 export const init: ServerInit = () => {

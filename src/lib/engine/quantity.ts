@@ -1,16 +1,36 @@
 /**
- * Forces, pressures, line loads, moduli, densities and moments as mathjs unit strings
- * (`40 lbf/ft^2`, `1.9 kPa`, `1.8e6 psi`). Read once at the edge; the numeric core sees SI numbers.
+ * Forces, pressures, line loads, moduli, densities and moments as unit strings (`40 lbf/ft^2`,
+ * `1.9 kPa`, `1.8e6 psi`). Read once at the edge; the numeric core sees SI numbers.
+ *
+ * The units the trade writes come from an exact table (unit-table.ts) with no unit library, so the
+ * browser never loads one. Anything else goes to a full parser (mathjs, in quantity-full.ts) only
+ * where one has been registered: the server registers it at start (hooks.server.ts); tests and
+ * Node scripts import quantity-full.ts when they need unusual units.
  */
-import { create, unitDependencies, type Unit } from 'mathjs';
 import { QuantityError, parseLength } from './length';
 import { NEWTONS_PER_LBF, STANDARD_GRAVITY } from './si';
+import { readFromTable } from './unit-table';
 
-// Only the unit machinery: a small slice of mathjs, created on first use.
-let math: { unit: (text: string) => Unit } | undefined;
-function mathUnit(text: string): Unit {
-	math ??= create({ unitDependencies }) as unknown as { unit: (text: string) => Unit };
-	return math.unit(text);
+/** What the kind's value is in SI, as a unit string a full parser understands. */
+export interface UnitTarget {
+	si: string;
+	/** the mass-based unit whose weight is meant (`50 kg` of books is a force of 50·g) */
+	massBased?: string;
+}
+
+/** Reads a normalised quantity text to SI for the target, or undefined if it cannot. */
+export type FullUnitParser = (text: string, target: UnitTarget) => number | undefined;
+
+let fullParser: FullUnitParser | undefined;
+
+/** Register the full unit parser (quantity-full.ts does, on import). */
+export function useFullUnitParser(parse: FullUnitParser): void {
+	fullParser = parse;
+}
+
+/** Whether a full unit parser is registered (units beyond the table can be read). */
+export function hasFullUnitParser(): boolean {
+	return fullParser !== undefined;
 }
 
 export { NEWTONS_PER_LBF, STANDARD_GRAVITY };
@@ -23,10 +43,7 @@ export const KG_PER_M3_PER_PCF = 0.45359237 / 0.3048 ** 3;
 export type QuantityKind =
 	'length' | 'force' | 'pressure' | 'lineLoad' | 'modulus' | 'density' | 'moment';
 
-interface KindInfo {
-	si: string;
-	/** the mass-based unit whose weight is meant (`50 kg` of books is a force of 50·g) */
-	massBased?: string;
+interface KindInfo extends UnitTarget {
 	expected: string;
 }
 
@@ -47,12 +64,18 @@ const KINDS: Record<Exclude<QuantityKind, 'length'>, KindInfo> = {
 	moment: { si: 'N m', expected: 'a moment such as 500 lbf in or 60 N m' }
 };
 
+/** The SI unit (and the mass-based unit meant as a weight) a full parser reads the kind in. */
+export function unitTargetFor(kind: Exclude<QuantityKind, 'length'>): UnitTarget {
+	const { si, massBased } = KINDS[kind];
+	return massBased ? { si, massBased } : { si };
+}
+
 export function expectedFor(kind: QuantityKind): string {
 	return kind === 'length' ? 'a length such as 35 1/2", 900 mm or 0.9 m' : KINDS[kind].expected;
 }
 
 /** Trade shorthands mathjs does not know, and typographic marks. */
-function normalise(text: string): string {
+export function normalise(text: string): string {
 	return text
 		.trim()
 		.replace(/²/g, '^2')
@@ -67,17 +90,10 @@ function normalise(text: string): string {
 		.replace(/\bpounds?\b/g, 'lb');
 }
 
-function tryUnit(text: string): Unit | undefined {
-	try {
-		return mathUnit(text);
-	} catch {
-		return undefined;
-	}
-}
-
 /**
  * Parse a quantity of the given kind to SI (N, Pa, N/m, Pa, kg/m³, N·m, m). A number is taken as
  * already SI. `lb` and `kg` in a force-like quantity mean their weight under standard gravity.
+ * A unit outside the table is read only if a full parser is registered (useFullUnitParser).
  * Throws QuantityError naming what was expected.
  */
 export function parseQuantity(input: string | number, kind: QuantityKind): number {
@@ -91,12 +107,7 @@ export function parseQuantity(input: string | number, kind: QuantityKind): numbe
 		throw new QuantityError(input, info.expected);
 	const text = normalise(input);
 	if (/^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i.test(text)) return Number(text);
-	const u = tryUnit(text);
-	if (!u || u.value === null) throw new QuantityError(input, info.expected);
-	let value: number | undefined;
-	if (u.equalBase(mathUnit(info.si))) value = u.toNumber(info.si);
-	else if (info.massBased && u.equalBase(mathUnit(info.massBased)))
-		value = u.toNumber(info.massBased) * STANDARD_GRAVITY;
+	const value = readFromTable(text, kind) ?? fullParser?.(text, info);
 	if (value === undefined || !Number.isFinite(value)) throw new QuantityError(input, info.expected);
 	return value;
 }
