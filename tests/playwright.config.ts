@@ -29,14 +29,8 @@ export default defineConfig({
 			]
 		}
 	},
-	projects: [
-		{ name: 'desktop', use: { ...devices['Desktop Chrome'], channel: undefined } },
-		{
-			name: 'phone',
-			use: { viewport: { width: 375, height: 740 }, isMobile: true, hasTouch: true },
-			testMatch: /\.phone\.spec\.ts$/
-		}
-	],
+	// One browser; the journeys set a 375 px phone viewport themselves where they check it.
+	projects: [{ name: 'desktop', use: { ...devices['Desktop Chrome'], channel: undefined } }],
 	webServer: {
 		command: `npx tsx tests/e2e/support/server.ts`,
 		cwd: '..',
