@@ -132,7 +132,12 @@ async function measure(page: Page, input: string, screen: string, label: string)
 		await page.waitForTimeout(250);
 	}
 	const ok = samples.filter((s) => s.changed);
-	return { label, samples: samples.length, unchanged: samples.length - ok.length, ok };
+	// when the screen did not follow, say what the field said (its reading or its error)
+	const field = page
+		.locator(input)
+		.locator('xpath=ancestor::div[contains(@class,"quantity-input")]');
+	const said = ok.length < samples.length ? (await field.innerText()).replace(/\s+/g, ' ') : '';
+	return { label, samples: samples.length, unchanged: samples.length - ok.length, ok, said };
 }
 
 function quantile(sorted: number[], q: number): number {
@@ -161,7 +166,10 @@ function report(r: Awaited<ReturnType<typeof measure>>) {
 			r.ok.map((s) => s.domMs)
 		)
 	);
-	if (r.unchanged) console.log(`  ${r.unchanged} samples left the SVG unchanged (not counted)`);
+	if (r.unchanged) {
+		console.log(`  ${r.unchanged} samples left the SVG unchanged (not counted)`);
+		console.log(`  the span field after the last one: ${r.said}`);
+	}
 }
 
 async function main() {
@@ -193,6 +201,7 @@ async function main() {
 			viewport: { width: 1280, height: 900 }
 		});
 		const page = await context.newPage();
+		page.on('pageerror', (err) => console.error(`page error: ${err.message}`));
 
 		// Sign in as a person would (tests/e2e/support/auth.ts).
 		await page.goto('/signin');
@@ -241,6 +250,9 @@ async function main() {
 		);
 		report(shelf);
 		report(compare);
+		// a screen that never followed the input is a broken page, not a slow one
+		const dead = [shelf, compare].filter((r) => r.ok.length === 0).map((r) => r.label);
+		if (dead.length) throw new Error(`no sample changed the SVG on: ${dead.join('; ')}`);
 	} finally {
 		await browser?.close();
 		await stop();
