@@ -9,8 +9,9 @@ import {
 } from '../../src/lib/engine/quantity';
 import { UNIT_TABLE, readFromTable, type TableKind } from '../../src/lib/engine/unit-table';
 
-// Exact definitions (NIST SP 811 (2008), Appendix B.8; international yard and pound, 1959;
-// standard gravity, 3rd CGPM 1901), written out here apart from the engine's own constants.
+// Exact definitions (international yard and pound, 1959; standard gravity, 3rd CGPM 1901), written
+// out here apart from the engine's own constants. "B.8" below: NIST SP 811 (2008 ed.), Appendix
+// B.8, factors for units listed alphabetically (from memory).
 const IN = 0.0254;
 const FT = 0.3048;
 const LB_KG = 0.45359237;
@@ -30,7 +31,7 @@ const SPELLINGS: [string, TableKind, number][] = [
 	['200 lb', 'force', 200 * LBF],
 	['200 lbs', 'force', 200 * LBF],
 	['200 pounds', 'force', 200 * LBF],
-	['1.5 kip', 'force', 1500 * LBF], // 1 kip = 1000 lbf (NIST SP 811 B.8)
+	['1.5 kip', 'force', 1500 * LBF], // 1 kip = 1000 lbf (B.8)
 	['450 N', 'force', 450],
 	['0.45 kN', 'force', 450],
 	['20 kgf', 'force', 20 * G],
@@ -52,11 +53,13 @@ const SPELLINGS: [string, TableKind, number][] = [
 	['1.8e6 psi', 'modulus', (1.8e6 * LBF) / IN ** 2],
 	['1.8E6 psi', 'modulus', (1.8e6 * LBF) / IN ** 2],
 	['1.8 Mpsi', 'modulus', (1.8e6 * LBF) / IN ** 2],
-	['1800 ksi', 'modulus', (1.8e6 * LBF) / IN ** 2], // ksi = 1000 lbf/in² (NIST SP 811 B.8)
+	['1800 ksi', 'modulus', (1.8e6 * LBF) / IN ** 2], // ksi = 1000 lbf/in² (B.8)
 	['12400 MPa', 'modulus', 12.4e9],
 	['12.4 GPa', 'modulus', 12.4e9],
 	['12400 N/mm^2', 'modulus', 12.4e9],
 	['12400 N/mm²', 'modulus', 12.4e9],
+	['12.4 kN/mm²', 'modulus', 12.4e9],
+	['200 kgf/m²', 'pressure', 200 * G],
 	['20 plf', 'lineLoad', (20 * LBF) / FT],
 	['20 lbf/ft', 'lineLoad', (20 * LBF) / FT],
 	['20 lb/ft', 'lineLoad', (20 * LBF) / FT],
@@ -105,7 +108,7 @@ describe('the unit table alone (as in the browser, no mathjs)', () => {
 	});
 
 	it('refuses a unit outside the table until the full parser is loaded', () => {
-		// 2 bar = 200 kPa (NIST SP 811 B.8: bar, 1.0 E+05 Pa): mathjs knows it, the table does not
+		// 2 bar = 200 kPa (B.8: bar, 1.0 E+05 Pa): mathjs knows it, the table does not
 		expect(readFromTable('2 bar', 'pressure')).toBeUndefined();
 		expect(tryParseQuantity('2 bar', 'pressure')).toEqual({
 			ok: false,
@@ -154,7 +157,7 @@ describe('every table entry against mathjs itself', () => {
 
 	it('differs from mathjs only by its rounded kip and psi constants', () => {
 		// mathjs: kip 4448.2216 N, psi 6894.75729276459 Pa; exact: 4448.2216152605 N and
-		// 6894.757293168361 Pa (1000 lbf; lbf/in², NIST SP 811 B.8)
+		// 6894.757293168361 Pa (1000 lbf; lbf/in²; B.8)
 		const psi = mathjs('1 psi', unitTargetFor('modulus'))!;
 		const kip = mathjs('1 kip', unitTargetFor('force'))!;
 		expect(rel(psi, (1 * LBF) / IN ** 2)).toBeGreaterThan(1e-12);
@@ -179,8 +182,8 @@ describe('every table entry against mathjs itself', () => {
 
 	it('falls back to mathjs for a unit outside the table once it is registered', () => {
 		expect(hasFullUnitParser()).toBe(true);
-		expect(parseQuantity('2 bar', 'pressure')).toBeCloseTo(2e5, 6); // NIST SP 811 B.8: bar
-		expect(parseQuantity('3 dyn', 'force')).toBeCloseTo(3e-5, 15); // NIST SP 811 B.8: dyne
+		expect(parseQuantity('2 bar', 'pressure')).toBeCloseTo(2e5, 6); // B.8: bar, 1.0 E+05 Pa
+		expect(parseQuantity('3 dyn', 'force')).toBeCloseTo(3e-5, 15); // B.8: dyne, 1.0 E-05 N
 		expect(() => parseQuantity('2 bar', 'force')).toThrow(/force such as/);
 	});
 });

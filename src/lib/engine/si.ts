@@ -1,6 +1,7 @@
 /**
- * Exact conversion constants the numeric core needs, apart from the unit parser (quantity.ts,
- * which loads mathjs): the model and the analysis import these without pulling mathjs in.
+ * Exact conversion constants the numeric core needs, apart from the unit parser (quantity.ts and
+ * its table, unit-table.ts; mathjs only through quantity-full.ts, which the server registers):
+ * the model and the analysis import these without pulling in any unit library.
  */
 
 /** Standard acceleration of gravity, exact by definition (3rd CGPM, 1901): 9.80665 m/s². */

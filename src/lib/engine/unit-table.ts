@@ -10,22 +10,26 @@ import { NEWTONS_PER_LBF, STANDARD_GRAVITY } from './si';
 /** The quantity kinds this table reads (lengths have their own parser, length.ts). */
 export type TableKind = 'force' | 'pressure' | 'lineLoad' | 'modulus' | 'density' | 'moment';
 
-/** 1 lb = 0.45359237 kg, exact (international avoirdupois pound, 1959; NIST SP 811 (2008), B.8). */
+// Sources: the exact definitions of the international inch, foot and avoirdupois pound (1959) and
+// of standard gravity (3rd CGPM, 1901); the rounded factors quoted beside them are those of
+// NIST SP 811 (2008 ed.), Appendix B.8, "Factors for units listed alphabetically" (from memory).
+
+/** 1 lb = 0.45359237 kg, exact (international avoirdupois pound, 1959). */
 export const KG_PER_LB = 0.45359237;
-/** 1 kip = 1000 lbf = 4448.2216152605 N (NIST SP 811 (2008), B.8: kip, 4.448 222 E+03 N). */
+/** 1 kip = 1000 lbf = 4448.2216152605 N (NIST SP 811 B.8: kip, 4.448 222 E+03 N). */
 export const NEWTONS_PER_KIP = 1000 * NEWTONS_PER_LBF;
-/** 1 kgf = 9.80665 N, exact from standard gravity (NIST SP 811 (2008), B.8: kilogram-force). */
+/** 1 kgf = 9.80665 N, exact from standard gravity (NIST SP 811 B.8: kilogram-force). */
 export const NEWTONS_PER_KGF = STANDARD_GRAVITY;
 
-const IN = METRES_PER_INCH; // 0.0254 m exact (international inch, 1959; NIST SP 811 B.8)
-const FT = METRES_PER_FOOT; // 0.3048 m exact (international foot, 1959; NIST SP 811 B.8)
-const LBF = NEWTONS_PER_LBF; // 4.4482216152605 N exact (si.ts; NIST SP 811 B.8: pound-force)
+const IN = METRES_PER_INCH; // 0.0254 m, exact (international inch, 1959)
+const FT = METRES_PER_FOOT; // 0.3048 m, exact (international foot, 1959)
+const LBF = NEWTONS_PER_LBF; // 4.4482216152605 N, exact: 1 lb × standard gravity (si.ts)
 /** a pound of mass meant as its weight under standard gravity (as `lb` in a force or load) */
 const LB_WEIGHT = KG_PER_LB * STANDARD_GRAVITY;
 
-/** psi = lbf/in² = 6894.757293168 Pa (NIST SP 811 (2008), B.8: 6.894 757 E+03 Pa). */
+/** psi = lbf/in² = 6894.757293168 Pa (NIST SP 811 B.8: 6.894 757 E+03 Pa). */
 const PSI = LBF / IN ** 2;
-/** psf = lbf/ft² = 47.88025898 Pa (NIST SP 811 (2008), B.8: 4.788 026 E+01 Pa). */
+/** psf = lbf/ft² = 47.88025898 Pa (NIST SP 811 B.8: 4.788 026 E+01 Pa). */
 const PSF = LBF / FT ** 2;
 
 const FORCE: Record<string, number> = {
@@ -48,10 +52,13 @@ const STRESS: Record<string, number> = {
 	'N/m^2': 1,
 	'kN/m^2': 1e3,
 	'N/mm^2': 1 / 1e-3 ** 2,
+	'kN/mm^2': 1e3 / 1e-3 ** 2,
+	'MN/m^2': 1e6,
+	'kgf/cm^2': NEWTONS_PER_KGF / 1e-2 ** 2,
 	'lbf/ft^2': PSF,
 	'lbf/in^2': PSI,
 	psi: PSI,
-	// 1 Mpsi = 10⁶ psi (how plywood stiffness is often quoted: 1.8 Mpsi)
+	// 1 Mpsi = 10⁶ psi (stiffness is often quoted so, 1.8 Mpsi: common practice, no source)
 	Mpsi: 1e6 * PSI,
 	// ksi is rewritten to kip/in² by normalise (NIST SP 811 B.8: ksi, 6.894 757 E+06 Pa)
 	'kip/in^2': NEWTONS_PER_KIP / IN ** 2,
@@ -63,7 +70,8 @@ const PRESSURE: Record<string, number> = {
 	// a mass per area is its weight per area (lb/ft² of books)
 	'lb/ft^2': LB_WEIGHT / FT ** 2,
 	'lb/in^2': LB_WEIGHT / IN ** 2,
-	'kg/m^2': STANDARD_GRAVITY
+	'kg/m^2': STANDARD_GRAVITY,
+	'kgf/m^2': NEWTONS_PER_KGF
 };
 
 const LINE_LOAD: Record<string, number> = {
@@ -75,7 +83,8 @@ const LINE_LOAD: Record<string, number> = {
 	'kip/ft': NEWTONS_PER_KIP / FT,
 	'lb/ft': LB_WEIGHT / FT,
 	'lb/in': LB_WEIGHT / IN,
-	'kg/m': STANDARD_GRAVITY
+	'kg/m': STANDARD_GRAVITY,
+	'kgf/m': NEWTONS_PER_KGF
 };
 
 const DENSITY: Record<string, number> = {
