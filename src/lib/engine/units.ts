@@ -1,7 +1,9 @@
 /**
  * Units at the edge of the engine: read what people type, write what they read.
- * Lengths have their own small parser (length.ts, no mathjs); other quantities go through a slice
- * of mathjs (quantity.ts). A UI that only needs lengths may import './length' directly.
+ * Lengths have their own small parser (length.ts); other quantities are read from an exact table of
+ * the units the trade writes (unit-table.ts, via quantity.ts). Anything else falls back to mathjs
+ * where quantity-full.ts has been imported (the server does, in hooks.server.ts); the browser
+ * bundle carries no mathjs.
  */
 export {
 	METRES_PER_FOOT,
