@@ -1,9 +1,9 @@
 // The save action shared by the analysis screens: validate the form and the input with the shared
 // schemas, then create (303 to the saved analysis) or update (409 when someone saved in between).
-import { fail, redirect, type RequestEvent } from '@sveltejs/kit';
+import { error, fail, redirect, type RequestEvent } from '@sveltejs/kit';
 import type { z } from 'zod';
 import { requireActor } from '$lib/server/access';
-import { AnalysisProblem, createAnalysis, updateAnalysis } from '$lib/server/analyses';
+import { AnalysisProblem, createAnalysis, getAnalysis, updateAnalysis } from '$lib/server/analyses';
 import type { AnalysisKind } from '$lib/server/db/schema';
 import { analysisFormSchema } from '$lib/schemas/analysis-form';
 
@@ -58,4 +58,28 @@ export async function saveAnalysis(
 		throw e;
 	}
 	redirect(303, `/projects/${projectId}/${screen}/${id}`);
+}
+
+/** The load of a saved analysis's screen: the analysis, if it is of this kind and in this project. */
+export function loadSavedAnalysis(
+	event: Pick<RequestEvent, 'locals' | 'params'>,
+	kind: AnalysisKind
+) {
+	const { analysis, project, role } = getAnalysis(
+		requireActor(event.locals.actor),
+		event.params.analysisId!
+	);
+	if (analysis.projectId !== event.params.id || analysis.kind !== kind) error(404, 'Not found.');
+	return {
+		project: { id: project.id, name: project.name },
+		role,
+		analysis: {
+			id: analysis.id,
+			name: analysis.name,
+			input: analysis.input,
+			version: analysis.version,
+			updatedAt: analysis.updatedAt,
+			updatedByName: analysis.updatedByName
+		}
+	};
 }

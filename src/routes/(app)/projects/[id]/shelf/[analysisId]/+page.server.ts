@@ -1,26 +1,8 @@
-import { error } from '@sveltejs/kit';
-import { requireActor } from '$lib/server/access';
-import { getAnalysis } from '$lib/server/analyses';
 import { shelfRequestSchema } from '$lib/schemas/shelf';
-import { saveAnalysis } from '../../save-analysis.server';
+import { loadSavedAnalysis, saveAnalysis } from '../../save-analysis.server';
 import type { Actions, PageServerLoad } from './$types';
 
-export const load: PageServerLoad = ({ locals, params }) => {
-	const { analysis, project, role } = getAnalysis(requireActor(locals.actor), params.analysisId);
-	if (analysis.projectId !== params.id || analysis.kind !== 'shelf') error(404, 'Not found.');
-	return {
-		project: { id: project.id, name: project.name },
-		role,
-		analysis: {
-			id: analysis.id,
-			name: analysis.name,
-			input: analysis.input,
-			version: analysis.version,
-			updatedAt: analysis.updatedAt,
-			updatedByName: analysis.updatedByName
-		}
-	};
-};
+export const load: PageServerLoad = (event) => loadSavedAnalysis(event, 'shelf');
 
 export const actions: Actions = {
 	save: (event) =>
