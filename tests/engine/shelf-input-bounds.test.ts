@@ -21,3 +21,27 @@ describe('lengths too small to be real', () => {
 		if (r.ok) expect(Number.isFinite(r.result.sag.instant)).toBe(true);
 	});
 });
+
+// Found by the superposition property test (fast-check seed -432040145): a point load a denormal
+// distance (where = 3.35e-321 of the span) from a support sags the shelf by a denormal, and
+// span / sag overflowed to Infinity.
+describe('a load too close to a support to sag the shelf measurably', () => {
+	it('has no span-over-sag ratio, and every number stays finite', () => {
+		const r = safeAnalyzeShelf({
+			span: 0.2,
+			depth: 0.1,
+			thickness: 0.01,
+			material: { name: 'random board', modulus: 1008995530.5066426, rupture: 1e7, density: 300 },
+			support: 'simple',
+			selfWeight: false,
+			duration: 'short',
+			options: { shearDeflection: true },
+			loads: [{ kind: 'point', force: 193.64009138243125, at: 3.35e-321 * 0.2 }]
+		} as ShelfRequest);
+		expect(r.ok).toBe(true);
+		if (r.ok) {
+			expect(r.result.ratio).toBeNull();
+			expect(r.result.sag.instant).toBeLessThan(1e-300);
+		}
+	});
+});

@@ -307,7 +307,7 @@ export function analyzeInput(input: ShelfInput): ShelfResult {
 			source: model.limit.source,
 			spans: check.spans
 		},
-		ratio: longTermSag > 0 ? (g.to - g.from) / longTermSag : null,
+		ratio: spanOverSag(g.to - g.from, longTermSag),
 		stiffness: section.ei,
 		stiffnessLongTerm: section.eiLongTerm,
 		shearStiffness: section.ga,
@@ -412,3 +412,13 @@ export function safely<R, T>(fn: (request: R) => T): (request: R) => SafeResult<
 
 /** analyzeShelf for the keystroke: never throws. */
 export const safeAnalyzeShelf = safely(analyzeShelf);
+
+/**
+ * Span over sag, or null when the shelf does not sag measurably: a sag too small to divide by
+ * (a denormal from a vanishing load, found by the superposition property test) gives no ratio
+ * rather than Infinity.
+ */
+export function spanOverSag(spanM: number, sagM: number): number | null {
+	const ratio = spanM / sagM;
+	return sagM > 0 && Number.isFinite(ratio) ? ratio : null;
+}
