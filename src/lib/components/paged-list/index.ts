@@ -1,0 +1,1 @@
+export { PagedFetch } from './paged-fetch.svelte';
