@@ -1,0 +1,1 @@
+export { default as DraftingDefs } from './DraftingDefs.svelte';
