@@ -1,7 +1,8 @@
 import type { Handle, HandleServerError, ServerInit } from '@sveltejs/kit';
 import { sequence } from '@sveltejs/kit/hooks';
 import { building, dev } from '$app/environment';
-import { actorForUserId, actorFromBearer } from '$lib/server/accounts';
+import { actorFromBearer } from '$lib/server/accounts/api-tokens';
+import { actorForUserId } from '$lib/server/accounts/users';
 import { authHandle, authSecret } from '$lib/server/auth';
 // units beyond the trade's table (unit-table.ts) are read on the server with mathjs
 import '$lib/engine/quantity-full';

@@ -3,10 +3,10 @@ import { describe, expect, it } from 'vitest';
 import {
 	actorFromBearer,
 	createApiToken,
-	createUser,
-	listApiTokens,
-	sha256
-} from '../../src/lib/server/accounts';
+	listApiTokens
+} from '../../src/lib/server/accounts/api-tokens';
+import { sha256 } from '../../src/lib/server/accounts/secrets';
+import { createUser } from '../../src/lib/server/accounts/users';
 import type { Actor } from '../../src/lib/server/access';
 import { schema } from '../../src/lib/server/db';
 import { actorHandle, securityHeaders } from '../../src/hooks.server';

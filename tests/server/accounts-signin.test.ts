@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
 import { describe, expect, it } from 'vitest';
-import { createUser } from '../../src/lib/server/accounts';
+import { createUser } from '../../src/lib/server/accounts/users';
 import { authHandle } from '../../src/lib/server/auth';
 import { schema } from '../../src/lib/server/db';
 import { waitForMailTo } from '../../src/lib/server/dev/caught-mail';

@@ -1,22 +1,21 @@
 import { eq } from 'drizzle-orm';
 import { describe, expect, it } from 'vitest';
 import {
-	AccountExistsError,
-	createUser,
-	passwordSignIn,
-	REFUSE_AFTER_FAILURES,
-	requestPasswordReset,
-	findUserByEmail,
-	resetPassword,
-	sessionIsCurrent,
-	resetTokenIsLive,
-	setLengthUnit,
-	signInGate,
 	PASSWORD_RESET_TTL_MS,
-	verifyPassword,
+	requestPasswordReset,
+	resetPassword,
+	resetTokenIsLive
+} from '../../src/lib/server/accounts/password-resets';
+import { getProfile, setLengthUnit } from '../../src/lib/server/accounts/profile';
+import { sessionIsCurrent } from '../../src/lib/server/accounts/sessions';
+import { passwordSignIn, verifyPassword } from '../../src/lib/server/accounts/sign-in';
+import { REFUSE_AFTER_FAILURES, signInGate } from '../../src/lib/server/accounts/throttle';
+import {
+	AccountExistsError,
 	actorForUserId,
-	getProfile
-} from '../../src/lib/server/accounts';
+	createUser,
+	findUserByEmail
+} from '../../src/lib/server/accounts/users';
 import { latestMailTo, waitForMailTo } from '../../src/lib/server/dev/caught-mail';
 import { linksIn } from '../../src/lib/server/dev/mail-catcher';
 import { schema } from '../../src/lib/server/db';

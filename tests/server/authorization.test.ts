@@ -21,7 +21,7 @@ import type { Actor } from '../../src/lib/server/access';
 import * as meApi from '../../src/routes/api/v1/me/+server';
 import * as tokensApi from '../../src/routes/api/v1/tokens/+server';
 import * as tokenApi from '../../src/routes/api/v1/tokens/[id]/+server';
-import { createApiToken } from '../../src/lib/server/accounts';
+import { createApiToken } from '../../src/lib/server/accounts/api-tokens';
 
 useTempDb();
 

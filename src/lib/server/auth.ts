@@ -11,13 +11,11 @@ import { isRedirect, type RequestEvent } from '@sveltejs/kit';
 import { dev } from '$app/environment';
 import { env } from '$env/dynamic/private';
 import { signInSchema } from '$lib/schemas/account';
-import {
-	allowMailTo,
-	findUserByEmail,
-	passwordSignIn,
-	sessionIsCurrent,
-	throttleMessage
-} from './accounts';
+import { allowMailTo } from './accounts/mail-allowance';
+import { sessionIsCurrent } from './accounts/sessions';
+import { passwordSignIn } from './accounts/sign-in';
+import { throttleMessage } from './accounts/throttle';
+import { findUserByEmail } from './accounts/users';
 import { getDb } from './db';
 import { accounts, sessions, users, verificationTokens } from './db/schema';
 import {

@@ -1,5 +1,5 @@
 import { eq, inArray } from 'drizzle-orm';
-import { createUser } from '../accounts';
+import { createUser } from '../accounts/users';
 import { getDb } from '../db';
 import { memberships, projects, users, workshops } from '../db/schema';
 import { DEMO_ACCOUNTS } from './accounts';

@@ -3,13 +3,8 @@ import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { apiTokenCreateSchema, apiTokenRevokeSchema, profileSchema } from '$lib/schemas/account';
 import { requireActor } from '$lib/server/access';
-import {
-	createApiToken,
-	getProfile,
-	listApiTokens,
-	revokeApiToken,
-	updateProfile
-} from '$lib/server/accounts';
+import { createApiToken, listApiTokens, revokeApiToken } from '$lib/server/accounts/api-tokens';
+import { getProfile, updateProfile } from '$lib/server/accounts/profile';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ locals }) => {

@@ -2,7 +2,7 @@ import { fail } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { resetRequestSchema } from '$lib/schemas/account';
-import { requestPasswordReset } from '$lib/server/accounts';
+import { requestPasswordReset } from '$lib/server/accounts/password-resets';
 import { linkOrigin, MAIL_UNAVAILABLE_MESSAGE, mailDown } from '$lib/server/mail';
 import type { Actions, PageServerLoad } from './$types';
 

@@ -3,7 +3,7 @@ import { message, setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { dev } from '$app/environment';
 import { safeRedirectPath, signInLinkSchema, signInSchema } from '$lib/schemas/account';
-import { throttleMessage } from '$lib/server/accounts';
+import { throttleMessage } from '$lib/server/accounts/throttle';
 import { mailSignInLink, signInWithPassword } from '$lib/server/auth';
 import { DEMO_ACCOUNTS } from '$lib/server/demo/accounts';
 import { MAIL_UNAVAILABLE_MESSAGE, mailDown } from '$lib/server/mail';

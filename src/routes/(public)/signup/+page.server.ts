@@ -2,7 +2,7 @@ import { fail, redirect } from '@sveltejs/kit';
 import { setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { safeRedirectPath, signUpSchema } from '$lib/schemas/account';
-import { AccountExistsError, createUser } from '$lib/server/accounts';
+import { AccountExistsError, createUser } from '$lib/server/accounts/users';
 import { mailSignInLink } from '$lib/server/auth';
 import { mailDown } from '$lib/server/mail';
 import type { Actions, PageServerLoad } from './$types';

@@ -2,7 +2,7 @@ import { fail, redirect } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { resetPasswordSchema } from '$lib/schemas/account';
-import { resetPassword, resetTokenIsLive } from '$lib/server/accounts';
+import { resetPassword, resetTokenIsLive } from '$lib/server/accounts/password-resets';
 import type { Actions, PageServerLoad } from './$types';
 
 const EXPIRED = 'This link has expired or was already used. Ask for a new one.';

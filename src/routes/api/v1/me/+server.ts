@@ -1,6 +1,6 @@
 import { json } from '@sveltejs/kit';
 import { requireActor } from '$lib/server/access';
-import { getProfile } from '$lib/server/accounts';
+import { getProfile } from '$lib/server/accounts/profile';
 import { api } from '$lib/server/http';
 import { listWorkshops } from '$lib/server/workshops';
 import type { RequestHandler } from './$types';

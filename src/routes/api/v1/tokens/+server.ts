@@ -1,7 +1,7 @@
 import { json } from '@sveltejs/kit';
 import { apiTokenCreateSchema } from '$lib/schemas/account';
 import { requireActor } from '$lib/server/access';
-import { createApiToken, listApiTokens } from '$lib/server/accounts';
+import { createApiToken, listApiTokens } from '$lib/server/accounts/api-tokens';
 import { api, readJson } from '$lib/server/http';
 import type { RequestHandler } from './$types';
 

@@ -1,5 +1,5 @@
 import { requireActor } from '$lib/server/access';
-import { revokeApiToken } from '$lib/server/accounts';
+import { revokeApiToken } from '$lib/server/accounts/api-tokens';
 import { api, problem } from '$lib/server/http';
 import type { RequestHandler } from './$types';
 

@@ -1,0 +1,102 @@
+import { and, eq, gt, isNull } from 'drizzle-orm';
+import { getDb } from '../db';
+import { passwordResets, signInFailures, users } from '../db/schema';
+import { sendPasswordReset } from '../mail';
+import { allowMailTo } from './mail-allowance';
+import { hashPassword } from './passwords';
+import { randomSecret, sha256 } from './secrets';
+import { emailKey } from './throttle';
+import { findUserByEmail } from './users';
+
+export const PASSWORD_RESET_TTL_MS = 60 * 60 * 1000;
+
+/**
+ * Mail a one-time link for choosing a new password. Says nothing about whether the address has an
+ * account: the caller shows the same answer either way.
+ */
+export async function requestPasswordReset(
+	email: string,
+	origin: string,
+	now = Date.now()
+): Promise<{ ok: true } | { ok: false; retryAfterMinutes: number }> {
+	// counted for every address, known or not, so the answer gives nothing away
+	const allowed = allowMailTo(email, now);
+	if (!allowed.ok) return allowed;
+	const user = findUserByEmail(email);
+	if (!user?.email) return { ok: true };
+	const token = randomSecret();
+	getDb()
+		.insert(passwordResets)
+		.values({
+			tokenHash: sha256(token),
+			userId: user.id,
+			expiresAt: new Date(now + PASSWORD_RESET_TTL_MS)
+		})
+		.run();
+	await sendPasswordReset(user.email, `${origin}/reset/${token}`);
+	return { ok: true };
+}
+
+function liveReset(token: string, now: number) {
+	return getDb()
+		.select()
+		.from(passwordResets)
+		.where(
+			and(
+				eq(passwordResets.tokenHash, sha256(token)),
+				isNull(passwordResets.usedAt),
+				gt(passwordResets.expiresAt, new Date(now))
+			)
+		)
+		.get();
+}
+
+/** Whether a reset link can still be used (for showing the form or an "expired" note). */
+export function resetTokenIsLive(token: string, now = Date.now()) {
+	return Boolean(liveReset(token, now));
+}
+
+/** Set a new password with a reset link. Consumes the link; false when it is unknown, used or expired. */
+export async function resetPassword(token: string, newPassword: string, now = Date.now()) {
+	if (!liveReset(token, now)) return false;
+	const passwordHash = await hashPassword(newPassword);
+	const db = getDb();
+	return db.transaction((tx) => {
+		// claim the link atomically, so two tabs cannot both use it
+		const claimed = tx
+			.update(passwordResets)
+			.set({ usedAt: new Date(now) })
+			.where(
+				and(
+					eq(passwordResets.tokenHash, sha256(token)),
+					isNull(passwordResets.usedAt),
+					gt(passwordResets.expiresAt, new Date(now))
+				)
+			)
+			.returning({ userId: passwordResets.userId })
+			.get();
+		if (!claimed) return false;
+		const user = tx
+			.update(users)
+			.set({ passwordHash, sessionsValidFrom: new Date(now) })
+			.where(eq(users.id, claimed.userId))
+			.returning({ email: users.email, emailVerified: users.emailVerified })
+			.get();
+		// the mail reached them, so the address is theirs
+		if (user && !user.emailVerified)
+			tx.update(users)
+				.set({ emailVerified: new Date(now) })
+				.where(eq(users.id, claimed.userId))
+				.run();
+		// other links sent earlier stop working too
+		tx.update(passwordResets)
+			.set({ usedAt: new Date(now) })
+			.where(and(eq(passwordResets.userId, claimed.userId), isNull(passwordResets.usedAt)))
+			.run();
+		if (user?.email)
+			tx.delete(signInFailures)
+				.where(eq(signInFailures.key, emailKey(user.email)))
+				.run();
+		return true;
+	});
+}

@@ -1,0 +1,67 @@
+import { eq } from 'drizzle-orm';
+import type { Actor } from '../access';
+import { getDb } from '../db';
+import { users } from '../db/schema';
+import { createWorkshopFor } from '../workshops';
+import { hashPassword } from './passwords';
+
+export interface AccountUser {
+	id: string;
+	email: string;
+	name: string | null;
+}
+
+export class AccountExistsError extends Error {
+	constructor() {
+		super('An account with this e-mail address already exists.');
+	}
+}
+
+/** Create an account with a password, and the personal workshop every account starts with. */
+export async function createUser(input: {
+	name: string;
+	email: string;
+	password: string;
+}): Promise<AccountUser> {
+	const email = input.email.trim().toLowerCase();
+	const passwordHash = await hashPassword(input.password);
+	const db = getDb();
+	try {
+		return db.transaction((tx) => {
+			const user = tx
+				.insert(users)
+				.values({ name: input.name.trim(), email, passwordHash })
+				.returning({ id: users.id, email: users.email, name: users.name })
+				.get();
+			createWorkshopFor(user.id, `${input.name.trim()}’s workshop`, true);
+			return { id: user.id, email: user.email ?? email, name: user.name };
+		});
+	} catch (e) {
+		if (isUniqueViolation(e)) throw new AccountExistsError();
+		throw e;
+	}
+}
+
+function isUniqueViolation(e: unknown) {
+	return (
+		typeof e === 'object' &&
+		e !== null &&
+		'code' in e &&
+		String(e.code).startsWith('SQLITE_CONSTRAINT')
+	);
+}
+
+export function findUserByEmail(email: string) {
+	return getDb().select().from(users).where(eq(users.email, email.trim().toLowerCase())).get();
+}
+
+/** The acting user for a user id (from a verified session), or null when the account is gone. */
+export function actorForUserId(id: string, via: Actor['via'] = 'session'): Actor | null {
+	const user = getDb()
+		.select({ id: users.id, email: users.email, name: users.name })
+		.from(users)
+		.where(eq(users.id, id))
+		.get();
+	if (!user?.email) return null;
+	return { id: user.id, email: user.email, name: user.name, via };
+}
