@@ -9,7 +9,7 @@ import { defaultComparison, toComparisonRequest } from '../../src/lib/workbench/
 import { runComparison } from '../../src/lib/workbench/compare-run';
 import { defaultDraft, toRequest } from '../../src/lib/workbench/shelf-draft';
 import { fixesFor } from '../../src/lib/workbench/shelf-fixes';
-import { describeShelf } from '../../src/lib/workbench/shelf-sentences';
+import { describeShelf } from '../../src/lib/kinds/shelf-words';
 import { drawingFor } from '../../src/lib/workbench/shelf-view';
 
 const draft = defaultDraft('frac16');
@@ -21,7 +21,7 @@ describe('shelf check: one keystroke', () => {
 		const d = { ...draft, span: spans[i++ % spans.length] };
 		const run = safeAnalyzeShelf(toRequest(d, 'frac16'));
 		if (!run.ok) throw new Error('unreadable');
-		describeShelf(run.result, 'frac16', 'books');
+		describeShelf(run.result, 'frac16', { contents: 'books' });
 		layoutShelf(drawingFor(d, run.result, 'frac16'), 720);
 	});
 });

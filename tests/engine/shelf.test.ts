@@ -401,21 +401,3 @@ describe('inverse solvers', () => {
 		expect(r.total).toBe(r.magnitude);
 	});
 });
-
-describe('plain sentences', () => {
-	it('say the sag in fractions of an inch and whether it passes', async () => {
-		const { describeShelf } = await import('../../src/lib/engine');
-		const r = analyzeShelf({
-			span: '30"',
-			depth: '10"',
-			thickness: '3/4"',
-			material: 'red-oak',
-			loads: [{ kind: 'area', pressure: '40 psf' }]
-		});
-		const text = describeShelf(r, { unit: 'frac32' });
-		expect(text[0]).toMatch(
-			/^This shelf sags about \d*\s?\d+\/\d+" when loaded, and about .* after months/
-		);
-		expect(text[1]).toMatch(r.limit.pass ? /within L\/144/ : /more than L\/144/);
-	});
-});

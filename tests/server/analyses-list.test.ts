@@ -6,7 +6,7 @@ import * as listApi from '../../src/routes/api/v1/projects/[id]/analyses/+server
 import { analyzeShelf, type ShelfRequest } from '../../src/lib/engine';
 import { createProject } from '../../src/lib/server/projects';
 import { createAnalysis, listAnalyses } from '../../src/lib/server/analyses';
-import type { ComparisonResult } from '../../src/lib/server/analysis-kinds';
+import type { ComparisonResult } from '../../src/lib/kinds/comparison';
 
 useTempDb();
 

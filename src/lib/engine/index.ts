@@ -92,5 +92,4 @@ export type {
 export type { JointInput } from '../schemas/joinery';
 export type { StabilityInput } from '../schemas/stability';
 export type { CaseDesign, CaseDesignInput } from '../schemas/case';
-export { describeShelf, type DescribeFormat } from './describe';
 export { loadPresets, type LoadPreset } from '../../../reference/load-presets';

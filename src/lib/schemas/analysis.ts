@@ -1,23 +1,15 @@
 /**
  * Saved analyses: the shapes of their API bodies and queries, and the comparison request (one
  * shelf, several materials and thicknesses). The input of each kind is validated by that kind's
- * engine schema on the server (src/lib/server/analysis-kinds.ts), so here it is `unknown`.
+ * schema in the registry (src/lib/kinds/registry.ts), so here it is `unknown`.
  */
 import { z } from 'zod';
 import { edgeSchema, materialSchema, shelfRequestSchema } from './shelf';
 import { lengthField } from './quantity';
+import { ANALYSIS_KINDS as analysisKinds, type AnalysisKind } from '../kinds/names';
 
-/** The kinds a project keeps; the same list as the database column (db/schema.ts). */
-export const analysisKinds = ['shelf', 'comparison', 'joint', 'stability', 'case'] as const;
-export type AnalysisKindName = (typeof analysisKinds)[number];
-
-export const ANALYSIS_KIND_LABELS: Record<AnalysisKindName, string> = {
-	shelf: 'Shelf check',
-	comparison: 'Material comparison',
-	joint: 'Joint plan',
-	stability: 'Stability check',
-	case: 'Case design'
-};
+/** The kinds a project keeps are named once, in src/lib/kinds/names.ts. */
+export type AnalysisKindName = AnalysisKind;
 
 const analysisName = z
 	.string()

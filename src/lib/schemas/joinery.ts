@@ -50,7 +50,8 @@ export const jointOptionsSchema = z.object({
 	dadoDepth: lengthField({ max: 0.05 }).optional()
 });
 
-const jointShape = z.object({
+/** A joint as people and programs send it; stored in this shape (SI numbers). */
+export const jointShape = z.object({
 	kind: jointKindSchema,
 	fastener: fastenerKindSchema,
 	/** length of the meeting line, usually the shelf depth */
@@ -65,8 +66,8 @@ const jointShape = z.object({
 
 export type JointInput = z.input<typeof jointShape>;
 
-/** POST /api/v1/joints and planJoint */
-export const jointRequestSchema = jointShape.transform((j): JointRequest => ({
+/** A parsed joint in the engine's SI shape. */
+export const toJointRequest = (j: z.output<typeof jointShape>): JointRequest => ({
 	kind: j.kind,
 	fastener: j.fastener,
 	lengthM: j.length,
@@ -80,4 +81,7 @@ export const jointRequestSchema = jointShape.transform((j): JointRequest => ({
 		pinDiameterM: j.options?.pinDiameter,
 		dadoDepthM: j.options?.dadoDepth
 	}
-}));
+});
+
+/** POST /api/v1/joints and planJoint */
+export const jointRequestSchema = jointShape.transform(toJointRequest);

@@ -7,7 +7,7 @@ import { error } from '@sveltejs/kit';
 import { and, asc, count, desc, eq, gt, isNull, or, sql, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
 import { requireRole, type Actor } from './access';
-import { computeAnalysis, describeAnalysis, describeInput } from './analysis-kinds';
+import { computeAnalysis, describeAnalysis, describeInput } from '$lib/kinds/registry';
 import { getDb } from './db';
 import { analyses, analysisRevisions, projects, users, type AnalysisKind } from './db/schema';
 import type { ProblemIssue } from './http';

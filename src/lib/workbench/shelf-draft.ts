@@ -193,6 +193,18 @@ function numberOr(v: unknown, format: (n: number) => string): string {
 }
 
 /** Which form field an engine issue belongs to (issues are paths into the request). */
+/** Where each field of the form is, for the list of marked fields at the top of the screen. */
+export const FIELD_PLACES: Partial<Record<keyof ShelfDraft, { id: string; label: string }>> = {
+	span: { id: 'shelf-span', label: 'Span' },
+	depth: { id: 'shelf-depth', label: 'Depth' },
+	thickness: { id: 'shelf-thickness', label: 'Thickness' },
+	material: { id: 'shelf-material', label: 'Material' },
+	load: { id: 'load-value', label: 'Load' },
+	pointAt: { id: 'load-at', label: 'Where the load sits' },
+	front: { id: 'front-height', label: 'Nosing' },
+	limitRatio: { id: 'limit-ratio', label: 'Limit' }
+};
+
 export function fieldOf(path: (string | number)[]): keyof ShelfDraft | 'form' {
 	const [head, , key] = path;
 	if (head === 'span' || head === 'support') return 'span';

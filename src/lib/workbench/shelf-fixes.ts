@@ -15,13 +15,13 @@ import type { ShelfResult } from '../engine/types';
 import type { ShelfRequest } from '../schemas/shelf';
 import { ceilTo, floorTo, unitStepM, type UserLengthUnit } from './lengths';
 import { toRequest, type ShelfDraft } from './shelf-draft';
-import { aboutLength } from './shelf-sentences';
+import { aboutLength } from '../kinds/shelf-words';
 
 export interface ShelfFix {
 	id: 'span' | 'thickness' | 'nosing' | 'support';
 	/** the button's words: "Shorten the span to 31 1/2"" */
 	action: string;
-	/** what it gives: "then it sags about 3/16" after a year" */
+	/** what it gives: "then it sags about 3/16"" */
 	outcome: string;
 	apply: (d: ShelfDraft) => ShelfDraft;
 }

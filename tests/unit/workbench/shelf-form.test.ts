@@ -8,7 +8,7 @@ import {
 	fromInput,
 	toRequest
 } from '../../../src/lib/workbench/shelf-draft';
-import { aboutLength, describeShelf } from '../../../src/lib/workbench/shelf-sentences';
+import { aboutLength, describeShelf } from '../../../src/lib/kinds/shelf-words';
 import { analyzeShelf, shelfRequestSchema } from '../../../src/lib/engine/index';
 
 // 1 in = 0.0254 m exactly (international yard and pound agreement, 1959)
@@ -83,9 +83,9 @@ describe('the shelf draft', () => {
 describe('plain sentences', () => {
 	it('says the sag, the creep and the margin in words', () => {
 		const r = analyzeShelf(toRequest(defaultDraft('frac16'), 'frac16'));
-		const said = describeShelf(r, 'frac16', 'books');
+		const said = describeShelf(r, 'frac16', { contents: 'books' });
 		expect(said.sag).toBe(
-			`This shelf sags ${aboutLength(r.sag.instant, 'frac16')} when loaded, and ${aboutLength(r.sag.longTerm, 'frac16')} after a year under the same books.`
+			`This shelf sags ${aboutLength(r.sag.instant, 'frac16')} when loaded, and ${aboutLength(r.sag.longTerm, 'frac16')} in the long run under the same books.`
 		);
 		// L/144 of 36" is exactly 1/4"
 		expect(said.verdict).toBe(

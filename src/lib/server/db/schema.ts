@@ -6,6 +6,10 @@ import {
 	text,
 	uniqueIndex
 } from 'drizzle-orm/sqlite-core';
+import { ANALYSIS_KINDS, type AnalysisKind } from '../../kinds/names';
+
+// the kinds of saved analysis are named once, in src/lib/kinds/names.ts
+export { ANALYSIS_KINDS, type AnalysisKind };
 
 const id = () =>
 	text('id')
@@ -172,8 +176,6 @@ export const signInFailures = sqliteTable(
 );
 
 // ---- Analyses (workbench): inputs, results, engine version, revisions ----
-export const ANALYSIS_KINDS = ['shelf', 'comparison', 'joint', 'stability', 'case'] as const;
-export type AnalysisKind = (typeof ANALYSIS_KINDS)[number];
 
 export const analyses = sqliteTable(
 	'analysis',

@@ -18,15 +18,6 @@ export interface AnalysisPage {
 	perPage: number;
 }
 
-/** The editor route of each kind (the comparison screen lives under /compare). */
-export const EDITOR_SEGMENT: Record<AnalysisKindName, string> = {
-	shelf: 'shelf',
-	comparison: 'compare',
-	case: 'case',
-	joint: 'joint',
-	stability: 'stability'
-};
-
 async function call<T>(url: string, init: RequestInit = {}): Promise<T> {
 	const res = await fetch(url, {
 		...init,
