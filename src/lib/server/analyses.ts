@@ -9,6 +9,7 @@ import { alias } from 'drizzle-orm/sqlite-core';
 import { requireRole, type Actor } from './access';
 import { computeAnalysis, describeAnalysis, describeInput } from '$lib/kinds/registry';
 import { getDb } from './db';
+import { containsText } from './db/contains';
 import { analyses, analysisRevisions, projects, users, type AnalysisKind } from './db/schema';
 import type { ProblemIssue } from './http';
 import { lengthUnitOf } from './preferences';
@@ -42,10 +43,6 @@ const sortColumn = {
 	pass: analyses.pass
 } as const;
 
-function escapeLike(s: string) {
-	return s.replace(/[\\%_]/g, (c) => `\\${c}`);
-}
-
 const listColumns = {
 	id: analyses.id,
 	projectId: analyses.projectId,
@@ -76,15 +73,7 @@ export function listAnalyses(actor: Actor, projectId: string, query: AnalysisLis
 	getProject(actor, projectId);
 	const db = getDb();
 	const where: SQL[] = [eq(analyses.projectId, projectId), isNull(analyses.deletedAt)];
-	if (query.q) {
-		const pattern = `%${escapeLike(query.q)}%`;
-		where.push(
-			or(
-				sql`${analyses.name} like ${pattern} escape '\\'`,
-				sql`${analyses.summary} like ${pattern} escape '\\'`
-			)!
-		);
-	}
+	if (query.q) where.push(containsText([analyses.name, analyses.summary], query.q));
 	if (query.kind) where.push(eq(analyses.kind, query.kind));
 	if (query.pass) where.push(eq(analyses.pass, query.pass === 'pass'));
 	const filter = and(...where);

@@ -1,6 +1,7 @@
-import { and, asc, count, desc, eq, like, or, type SQL } from 'drizzle-orm';
+import { and, asc, count, desc, eq, type SQL } from 'drizzle-orm';
 import { requireRole, type Actor } from './access';
 import { getDb } from './db';
+import { containsText } from './db/contains';
 import { projects, users } from './db/schema';
 import type { ProjectInput, ProjectListQuery } from '$lib/schemas/project';
 import { error } from '@sveltejs/kit';
@@ -14,25 +15,13 @@ const sortColumn = {
 	created: projects.createdAt
 } as const;
 
-function escapeLike(s: string) {
-	return s.replace(/[\\%_]/g, (c) => `\\${c}`);
-}
-
 /** A page of the workshop's projects, searched by name, client and site notes. */
 export function listProjects(actor: Actor, query: ProjectListQuery) {
 	requireRole(actor, query.workshop, 'viewer');
 	const db = getDb();
 	const where: SQL[] = [eq(projects.workshopId, query.workshop)];
-	if (query.q) {
-		const pattern = `%${escapeLike(query.q)}%`;
-		where.push(
-			or(
-				like(projects.name, pattern),
-				like(projects.client, pattern),
-				like(projects.siteNotes, pattern)
-			)!
-		);
-	}
+	if (query.q)
+		where.push(containsText([projects.name, projects.client, projects.siteNotes], query.q));
 	const filter = and(...where);
 	const order = query.dir === 'asc' ? asc(sortColumn[query.sort]) : desc(sortColumn[query.sort]);
 	const items = db
