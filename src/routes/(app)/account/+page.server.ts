@@ -6,6 +6,7 @@ import { requireActor } from '$lib/server/access';
 import { createApiToken, listApiTokens, revokeApiToken } from '$lib/server/accounts/api-tokens';
 import { getProfile, updateProfile } from '$lib/server/accounts/profile';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/form-body';
 
 export const load: PageServerLoad = async ({ locals }) => {
 	if (!locals.actor) redirect(303, '/signin?next=/account');
@@ -25,7 +26,9 @@ export const load: PageServerLoad = async ({ locals }) => {
 export const actions: Actions = {
 	profile: async ({ request, locals }) => {
 		const actor = requireActor(locals.actor);
-		const form = await superValidate(request, zod4(profileSchema), { id: 'profile' });
+		const form = await superValidate(await readForm(request), zod4(profileSchema), {
+			id: 'profile'
+		});
 		if (!form.valid) return fail(400, { form });
 		updateProfile(actor, form.data);
 		return message(form, 'Saved.');
@@ -33,7 +36,9 @@ export const actions: Actions = {
 
 	createToken: async ({ request, locals }) => {
 		const actor = requireActor(locals.actor);
-		const form = await superValidate(request, zod4(apiTokenCreateSchema), { id: 'token' });
+		const form = await superValidate(await readForm(request), zod4(apiTokenCreateSchema), {
+			id: 'token'
+		});
 		if (!form.valid) return fail(400, { form });
 		const token = createApiToken(actor, form.data);
 		// Shown once, in this answer only (not in a redirect URL): it is stored only as a hash.
@@ -42,7 +47,7 @@ export const actions: Actions = {
 
 	revokeToken: async ({ request, locals }) => {
 		const actor = requireActor(locals.actor);
-		const form = await superValidate(request, zod4(apiTokenRevokeSchema));
+		const form = await superValidate(await readForm(request), zod4(apiTokenRevokeSchema));
 		if (!form.valid) return fail(400, { form });
 		if (!revokeApiToken(actor, form.data.id))
 			return fail(404, {

@@ -6,6 +6,7 @@ import { createProject } from '$lib/server/projects';
 import { currentWorkshop } from '$lib/server/workshops';
 import { projectSchema } from '$lib/schemas/project';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/form-body';
 
 export const load: PageServerLoad = async ({ locals }) => {
 	requireActor(locals.actor);
@@ -17,7 +18,7 @@ export const actions: Actions = {
 		const actor = requireActor(locals.actor);
 		const ws = currentWorkshop(actor);
 		if (!ws) error(404, 'You belong to no workshop yet.');
-		const form = await superValidate(request, zod4(projectSchema));
+		const form = await superValidate(await readForm(request), zod4(projectSchema));
 		if (!form.valid) return fail(400, { createForm: form });
 		const project = createProject(actor, ws.id, form.data);
 		redirect(303, `/projects/${project.id}`);

@@ -12,6 +12,7 @@ import {
 	workshopNameSchema
 } from '$lib/schemas/workshop';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/form-body';
 
 function current(locals: App.Locals) {
 	const actor = requireActor(locals.actor);
@@ -35,27 +36,33 @@ export const load: PageServerLoad = async ({ locals }) => {
 export const actions: Actions = {
 	switch: async ({ locals, request, url }) => {
 		const actor = requireActor(locals.actor);
-		const id = String((await request.formData()).get('workshopId') ?? '');
+		const id = String((await readForm(request)).get('workshopId') ?? '');
 		workshops.switchWorkshop(actor, id);
 		redirect(303, url.searchParams.get('next') ?? '/projects');
 	},
 	rename: async ({ locals, request }) => {
 		const { actor, ws } = current(locals);
-		const form = await superValidate(request, zod4(workshopNameSchema), { id: 'rename' });
+		const form = await superValidate(await readForm(request), zod4(workshopNameSchema), {
+			id: 'rename'
+		});
 		if (!form.valid) return fail(400, { renameForm: form });
 		workshops.renameWorkshop(actor, ws.id, form.data.name);
 		return message(form, 'Renamed.');
 	},
 	create: async ({ locals, request }) => {
 		const actor = requireActor(locals.actor);
-		const form = await superValidate(request, zod4(workshopNameSchema), { id: 'create' });
+		const form = await superValidate(await readForm(request), zod4(workshopNameSchema), {
+			id: 'create'
+		});
 		if (!form.valid) return fail(400, { createForm: form });
 		workshops.createWorkshopFor(actor.id, form.data.name);
 		redirect(303, '/workshop');
 	},
 	invite: async ({ locals, request, url }) => {
 		const { actor, ws } = current(locals);
-		const form = await superValidate(request, zod4(invitationSchema), { id: 'invite' });
+		const form = await superValidate(await readForm(request), zod4(invitationSchema), {
+			id: 'invite'
+		});
 		if (!form.valid) return fail(400, { inviteForm: form });
 		const { invitation, token } = workshops.createInvitation(
 			actor,
@@ -78,21 +85,21 @@ export const actions: Actions = {
 	},
 	role: async ({ locals, request }) => {
 		const { actor, ws } = current(locals);
-		const parsed = memberRoleSchema.safeParse(Object.fromEntries(await request.formData()));
+		const parsed = memberRoleSchema.safeParse(Object.fromEntries(await readForm(request)));
 		if (!parsed.success) return fail(400, { memberError: 'Choose a role.' });
 		workshops.changeMemberRole(actor, ws.id, parsed.data.userId, parsed.data.role);
 		return { memberMessage: 'Role changed.' };
 	},
 	remove: async ({ locals, request }) => {
 		const { actor, ws } = current(locals);
-		const parsed = memberRemoveSchema.safeParse(Object.fromEntries(await request.formData()));
+		const parsed = memberRemoveSchema.safeParse(Object.fromEntries(await readForm(request)));
 		if (!parsed.success) return fail(400, { memberError: 'Choose a member.' });
 		workshops.removeMember(actor, ws.id, parsed.data.userId);
 		return { memberMessage: 'Member removed.' };
 	},
 	revoke: async ({ locals, request }) => {
 		const { actor, ws } = current(locals);
-		workshops.revokeInvitation(actor, ws.id, String((await request.formData()).get('id') ?? ''));
+		workshops.revokeInvitation(actor, ws.id, String((await readForm(request)).get('id') ?? ''));
 		return { memberMessage: 'Invitation withdrawn.' };
 	},
 	delete: async ({ locals }) => {

@@ -5,6 +5,7 @@ import { resetRequestSchema } from '$lib/schemas/account';
 import { requestPasswordReset } from '$lib/server/accounts/password-resets';
 import { linkOrigin, MAIL_UNAVAILABLE_MESSAGE, mailDown } from '$lib/server/mail';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/form-body';
 
 export const load: PageServerLoad = async () => ({
 	form: await superValidate(zod4(resetRequestSchema))
@@ -12,7 +13,7 @@ export const load: PageServerLoad = async () => ({
 
 export const actions: Actions = {
 	default: async ({ request, url }) => {
-		const form = await superValidate(request, zod4(resetRequestSchema));
+		const form = await superValidate(await readForm(request), zod4(resetRequestSchema));
 		if (!form.valid) return fail(400, { form });
 		const result = await requestPasswordReset(form.data.email, linkOrigin(url)).catch(mailDown);
 		if (!result) return message(form, MAIL_UNAVAILABLE_MESSAGE, { status: 503 });

@@ -8,6 +8,7 @@ import { mailSignInLink, signInWithPassword } from '$lib/server/auth';
 import { DEMO_ACCOUNTS } from '$lib/server/demo/accounts';
 import { MAIL_UNAVAILABLE_MESSAGE, mailDown } from '$lib/server/mail';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/form-body';
 
 const AFTER_SIGN_IN = '/projects';
 
@@ -50,7 +51,9 @@ export const load: PageServerLoad = async ({ url, locals }) => {
 
 export const actions: Actions = {
 	password: async (event) => {
-		const form = await superValidate(event.request, zod4(signInSchema), { id: 'password' });
+		const form = await superValidate(await readForm(event.request), zod4(signInSchema), {
+			id: 'password'
+		});
 		if (!form.valid) return fail(400, { form });
 		const redirectTo = safeRedirectPath(form.data.redirectTo, AFTER_SIGN_IN);
 		const result = await signInWithPassword(event, { ...form.data, redirectTo });
@@ -70,7 +73,9 @@ export const actions: Actions = {
 	},
 
 	link: async (event) => {
-		const form = await superValidate(event.request, zod4(signInLinkSchema), { id: 'link' });
+		const form = await superValidate(await readForm(event.request), zod4(signInLinkSchema), {
+			id: 'link'
+		});
 		if (!form.valid) return fail(400, { form });
 		const redirectTo = safeRedirectPath(form.data.redirectTo, AFTER_SIGN_IN);
 		const mailed = await mailSignInLink(event, { email: form.data.email, redirectTo }).catch(

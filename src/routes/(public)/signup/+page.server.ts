@@ -6,6 +6,7 @@ import { AccountExistsError, createUser } from '$lib/server/accounts/users';
 import { mailSignInLink } from '$lib/server/auth';
 import { mailDown } from '$lib/server/mail';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/form-body';
 
 export const load: PageServerLoad = async ({ locals, url }) => {
 	const next = safeRedirectPath(url.searchParams.get('next'), '/projects');
@@ -18,7 +19,7 @@ export const load: PageServerLoad = async ({ locals, url }) => {
 
 export const actions: Actions = {
 	default: async (event) => {
-		const form = await superValidate(event.request, zod4(signUpSchema));
+		const form = await superValidate(await readForm(event.request), zod4(signUpSchema));
 		if (!form.valid) return fail(400, { form });
 		try {
 			await createUser({

@@ -5,6 +5,7 @@ import { requireActor } from '$lib/server/access';
 import { deleteProject, getProject, listProjects, updateProject } from '$lib/server/projects';
 import { projectSchema } from '$lib/schemas/project';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/form-body';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
 	const actor = requireActor(locals.actor);
@@ -34,13 +35,16 @@ export const load: PageServerLoad = async ({ locals, params }) => {
 export const actions: Actions = {
 	update: async ({ locals, params, request }) => {
 		const actor = requireActor(locals.actor);
-		const form = await superValidate(request, zod4(projectSchema));
+		const form = await superValidate(await readForm(request), zod4(projectSchema));
 		if (!form.valid) return fail(400, { editForm: form });
 		updateProject(actor, params.id, form.data);
 		return message(form, 'Saved.');
 	},
-	delete: async ({ locals, params }) => {
-		deleteProject(requireActor(locals.actor), params.id);
+	// without JavaScript the first press asks again on the page (the dialog does it in the browser)
+	delete: async ({ locals, params, request }) => {
+		const actor = requireActor(locals.actor);
+		if ((await readForm(request)).get('confirm') !== 'yes') return { confirmDelete: true };
+		deleteProject(actor, params.id);
 		redirect(303, '/projects');
 	}
 };

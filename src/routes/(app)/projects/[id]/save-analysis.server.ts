@@ -6,6 +6,7 @@ import { requireActor } from '$lib/server/access';
 import { AnalysisProblem, createAnalysis, getAnalysis, updateAnalysis } from '$lib/server/analyses';
 import type { AnalysisKind } from '$lib/server/db/schema';
 import { analysisFormSchema } from '$lib/schemas/analysis-form';
+import { readForm } from '$lib/server/form-body';
 
 type Issue = { path: (string | number)[]; message: string };
 
@@ -21,7 +22,7 @@ export async function saveAnalysis(
 ) {
 	const actor = requireActor(event.locals.actor);
 	const projectId = event.params.id!;
-	const form = analysisFormSchema.safeParse(Object.fromEntries(await event.request.formData()));
+	const form = analysisFormSchema.safeParse(Object.fromEntries(await readForm(event.request)));
 	if (!form.success) {
 		const issues: Issue[] = form.error.issues.map((i) => ({
 			path: clean(i.path),

@@ -4,6 +4,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { resetPasswordSchema } from '$lib/schemas/account';
 import { resetPassword, resetTokenIsLive } from '$lib/server/accounts/password-resets';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/form-body';
 
 const EXPIRED = 'This link has expired or was already used. Ask for a new one.';
 
@@ -14,7 +15,7 @@ export const load: PageServerLoad = async ({ params }) => ({
 
 export const actions: Actions = {
 	default: async ({ request, params }) => {
-		const form = await superValidate(request, zod4(resetPasswordSchema));
+		const form = await superValidate(await readForm(request), zod4(resetPasswordSchema));
 		if (!form.valid) return fail(400, { form });
 		if (!(await resetPassword(params.token, form.data.password)))
 			return message(form, EXPIRED, { status: 400 });

@@ -9,6 +9,7 @@ import {
 	restoreRevision
 } from '$lib/server/analyses';
 import type { Actions, PageServerLoad } from './$types';
+import { readForm } from '$lib/server/form-body';
 
 const versionSchema = z.coerce.number().int().min(1);
 
@@ -49,7 +50,7 @@ export const load: PageServerLoad = ({ locals, params, url }) => {
 export const actions: Actions = {
 	restore: async ({ locals, params, request }) => {
 		const actor = requireActor(locals.actor);
-		const form = await request.formData();
+		const form = await readForm(request);
 		const version = versionSchema.safeParse(form.get('version'));
 		const base = versionSchema.safeParse(form.get('current'));
 		if (!version.success || !base.success)
