@@ -4,7 +4,7 @@
  * stale version is refused (409) and nothing is overwritten.
  */
 import { error } from '@sveltejs/kit';
-import { and, asc, count, desc, eq, gt, isNull, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, count, desc, eq, gt, isNull, sql, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
 import { requireRole, type Actor } from './access';
 import { computeAnalysis, describeAnalysis, describeInput } from '$lib/kinds/registry';
