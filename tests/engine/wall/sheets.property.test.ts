@@ -137,20 +137,18 @@ describe('sheet layouts of the demo wall', () => {
 			});
 		}
 	});
-	it('with grain kept for looks on the face material, no MDO part turns', () => {
+	it('with grain kept for looks on the face material, no MDO part turns; veneered birch keeps it by default', () => {
 		const kept = wallSheets(DEMO_WALL, {
-			...DEFAULT_SHEET_OPTIONS,
-			stocks: [
-				{
-					materialName: 'MDO (medium density overlay plywood)',
-					lengthM: 96 * IN,
-					widthM: 48 * IN,
-					keepGrain: true
-				}
-			]
+			kerfM: IN / 8,
+			trimM: IN / 4,
+			stocks: [{ material: 'mdo', lengthM: 96 * IN, widthM: 48 * IN, keepGrain: true }]
 		});
 		const mdo = kept.sheets.sheets.filter((s) => s.materialName.startsWith('MDO'));
 		expect(mdo.length).toBeGreaterThan(0);
 		expect(mdo.flatMap((s) => s.placements).every((p) => !p.turned)).toBe(true);
+		const stock = (name: string) =>
+			sheets.options.stocks.find((s) => s.materialName.startsWith(name))!;
+		expect(stock('Birch').keepGrain).toBe(true);
+		expect(stock('MDO').keepGrain).toBe(false);
 	});
 });

@@ -3,7 +3,8 @@
  * the cut list, the sheet layouts, banding and hardware. Framework-free, SI in and out.
  */
 import { bandingTotals, cutList, type BandingTotal, type CutList } from '../cutlist';
-import { DEFAULT_SHEET_OPTIONS, planSheets, type SheetOptions, type SheetPlan } from '../sheets';
+import { DEFAULT_SHEET_OPTIONS, planSheets, type SheetPlan, type SheetStock } from '../sheets';
+import { materialName } from '../case/geometry';
 import { checkWall } from './check';
 import { isSheetGood } from './geometry';
 import { hardwareList, type HardwareLine } from './hardware';
@@ -13,6 +14,8 @@ export { checkWall } from './check';
 export { hardwareList, hingesFor, type HardwareLine } from './hardware';
 export { DEMO_WALL } from './demo';
 export type * from './types';
+export type { CutGroup, CutList, BandingTotal } from '../cutlist';
+export type { SheetPlan, SheetLayout, Placement, Cut, Offcut } from '../sheets';
 
 export interface WallShop {
 	check: WallResult;
@@ -33,18 +36,49 @@ export function wallShop(w: WallDesign): WallShop {
 	};
 }
 
-/** The sheet layouts of the wall's cut list. */
+/** Sheet stock and saw for the layouts: a material by its id or name; a material not listed comes
+ * in 4×8 sheets. */
+export interface SheetRequest {
+	kerfM: number;
+	trimM: number;
+	stocks: { material: string; lengthM: number; widthM: number; keepGrain?: boolean }[];
+}
+
+/** Veneered faces show their grain, so their parts keep it by default; painted or hidden faces
+ * (MDO, sheathing plywood, MDF, particleboard) may turn (a choice of this tool, after issue 10). */
+const VENEERED = new Set([
+	'hardwood-plywood-veneer-core',
+	'hardwood-plywood-mdf-core',
+	'birch-multiply'
+]);
+
 export function wallSheets(
 	w: WallDesign,
-	options: SheetOptions = DEFAULT_SHEET_OPTIONS
-): {
-	cutList: CutList;
-	sheets: SheetPlan;
-} {
+	req: SheetRequest = {
+		kerfM: DEFAULT_SHEET_OPTIONS.kerfM,
+		trimM: DEFAULT_SHEET_OPTIONS.trimM,
+		stocks: []
+	}
+): { cutList: CutList; sheets: SheetPlan } {
 	const check = checkWall(w);
 	const list = cutList(check.parts, w.roughAllowance);
+	const stocks: SheetStock[] = [];
+	for (const g of list.groups) {
+		if (stocks.some((s) => s.materialName === g.materialName)) continue;
+		const id = typeof g.material === 'string' ? g.material : undefined;
+		const given = req.stocks.find((s) => s.material === id || s.material === g.materialName);
+		stocks.push({
+			materialName: g.materialName,
+			lengthM: given?.lengthM ?? DEFAULT_SHEET_OPTIONS.defaultStock.lengthM,
+			widthM: given?.widthM ?? DEFAULT_SHEET_OPTIONS.defaultStock.widthM,
+			keepGrain: given?.keepGrain ?? (id !== undefined && VENEERED.has(id))
+		});
+	}
+	const options = { ...DEFAULT_SHEET_OPTIONS, kerfM: req.kerfM, trimM: req.trimM, stocks };
 	return {
 		cutList: list,
 		sheets: planSheets(list.groups, (g) => !isSheetGood(g.material), options)
 	};
 }
+
+export { materialName };

@@ -3,12 +3,14 @@ import { foundationOperations } from './foundation';
 import { joineryOperations } from './joinery';
 import { shelfOperations } from './shelf';
 import type { ApiOperation } from './types';
+import { wallOperations } from './wall';
 import { workbenchOperations } from './workbench';
 
 export const operations: ApiOperation[] = [
 	...foundationOperations,
 	...shelfOperations,
 	...joineryOperations,
+	...wallOperations,
 	...workbenchOperations
 ];
 
