@@ -4,7 +4,14 @@
  * nothing, so the database schema and the project page can use it without loading any engine; what
  * each kind computes and says is in ./registry.ts, keyed by the same names.
  */
-export const ANALYSIS_KINDS = ['shelf', 'comparison', 'joint', 'stability', 'case'] as const;
+export const ANALYSIS_KINDS = [
+	'shelf',
+	'comparison',
+	'joint',
+	'stability',
+	'case',
+	'wall'
+] as const;
 export type AnalysisKind = (typeof ANALYSIS_KINDS)[number];
 
 export interface KindName {
@@ -21,7 +28,8 @@ export const KIND_NAMES: Record<AnalysisKind, KindName> = {
 	comparison: { label: 'Material comparison', start: 'Compare materials', screen: 'compare' },
 	joint: { label: 'Joint plan', start: 'Plan a joint', screen: 'joint' },
 	stability: { label: 'Tipping check', start: 'Check tipping', screen: 'tipping' },
-	case: { label: 'Case design', start: 'Design a case', screen: 'case' }
+	case: { label: 'Case design', start: 'Design a case', screen: 'case' },
+	wall: { label: 'Wall of cases', start: 'Plan a wall of cases', screen: 'wall' }
 };
 
 export const kindLabel = (kind: AnalysisKind) => KIND_NAMES[kind].label;

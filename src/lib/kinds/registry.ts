@@ -14,6 +14,9 @@ import { checkStabilitySI } from '../engine/stability/index';
 import type { StabilityResult } from '../engine/stability/types';
 import { ENGINE_VERSION } from '../engine/version';
 import { caseDesignSchema } from '../schemas/case';
+import { toWallDesign, wallDesignSchema } from '../schemas/wall';
+import { checkWall } from '../engine/wall/check';
+import type { WallResult } from '../engine/wall/types';
 import { jointShape, toJointRequest } from '../schemas/joinery';
 import { shelfRequestSchema } from '../schemas/shelf';
 import { stabilityShape, toStabilityRequest } from '../schemas/stability';
@@ -122,6 +125,16 @@ export const caseKind: KindSpec<typeof caseDesignSchema, CaseResult> = {
 	inputRows: (input) => plainRows(input)
 };
 
+export const wallKind: KindSpec<typeof wallDesignSchema, WallResult> = {
+	schema: wallDesignSchema,
+	compute: (input) => engine(() => checkWall(toWallDesign(input))),
+	pass: (r) => r.pass,
+	engineVersion: () => ENGINE_VERSION,
+	// the same sentence as a case: count of checks, the worst first
+	summary: (r) => describeCase(r).summary,
+	inputRows: (input) => plainRows(input)
+};
+
 /** Top-level fields as rows; nested parts as compact JSON (SI numbers). */
 function plainRows(input: object): [string, string][] {
 	return Object.entries(input).map(([key, value]) => [
@@ -188,7 +201,8 @@ const OPS: Record<AnalysisKind, KindOps> = {
 	comparison: opsOf(comparisonKind),
 	joint: opsOf(jointKind),
 	stability: opsOf(stabilityKind),
-	case: opsOf(caseKind)
+	case: opsOf(caseKind),
+	wall: opsOf(wallKind)
 };
 
 export { ANALYSIS_KINDS };

@@ -55,7 +55,13 @@ export function hardwareList(w: WallDesign, r: WallResult): HardwareLine[] {
 			if (f === 'dado') continue;
 			add(
 				`${f}|${j.plan.description}`,
-				{ kind: f, label: j.plan.description, unit: 'each', basis: 'joint plans' },
+				// "shelf pin 5 mm, 2 at this end": the count is the line's own
+				{
+					kind: f,
+					label: j.plan.description.replace(/, \d+ at this end$/, ''),
+					unit: 'each',
+					basis: 'joint plans'
+				},
 				j.plan.count * j.joints
 			);
 		}

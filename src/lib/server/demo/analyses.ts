@@ -1,5 +1,6 @@
 import type { Actor } from '../access';
 import { createAnalysis, updateAnalysis } from '../analyses';
+import { defaultWall, toInput } from '../../wall-designer/draft';
 
 // Saved analyses of the demo scenario (invented inputs; every result is computed by the engine
 // when seeded). Tomas, the shop lead, saved them; Ines revised the library shelf once.
@@ -82,7 +83,7 @@ export function seedDemoAnalyses(projectIds: Record<string, string>, users: Demo
 	const pantry = projectIds['Kiln Lane pantry'];
 	const save = (
 		projectId: string,
-		kind: 'shelf' | 'comparison' | 'joint' | 'case',
+		kind: 'shelf' | 'comparison' | 'joint' | 'case' | 'wall',
 		name: string,
 		input: unknown
 	) => createAnalysis(tomas, projectId, { kind, name, input }).id;
@@ -98,6 +99,8 @@ export function seedDemoAnalyses(projectIds: Record<string, string>, users: Demo
 		save(library, 'comparison', 'Shelf stock for the library wall', libraryComparison),
 		save(library, 'joint', 'Fixed shelf to case side', fixedShelfJoint),
 		save(pantry, 'shelf', 'Deep pantry shelf, appliance bay', pantryShelf),
-		save(school, 'case', 'Teacher cabinet', teacherCabinet)
+		save(school, 'case', 'Teacher cabinet', teacherCabinet),
+		// a scenario of our own: two tall bookcases and two low drawer units, side by side
+		save(library, 'wall', 'Living-room wall, four units', toInput(defaultWall('frac16'), 'frac16'))
 	];
 }
