@@ -1,3 +1,4 @@
-export { PagedFetch } from './paged-fetch.svelte';
 export { default as Pager } from './Pager.svelte';
 export { default as SortHeader } from './SortHeader.svelte';
+export { actionHref, debounce, listHref, sortHref, type ListParams } from './list-url';
+export { default as ListForm } from './ListForm.svelte';

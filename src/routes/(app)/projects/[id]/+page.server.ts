@@ -4,6 +4,7 @@ import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireActor } from '$lib/server/access';
 import { deleteProject, getProject, listProjects, updateProject } from '$lib/server/projects';
 import { projectSchema } from '$lib/schemas/project';
+import { analysisRowActions } from './analysis-actions.server';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/form-body';
 
@@ -43,8 +44,9 @@ export const actions: Actions = {
 	// without JavaScript the first press asks again on the page (the dialog does it in the browser)
 	delete: async ({ locals, params, request }) => {
 		const actor = requireActor(locals.actor);
-		if ((await readForm(request)).get('confirm') !== 'yes') return { confirmDelete: true };
+		if ((await readForm(request)).get('confirm') !== 'yes') return { confirmProjectDelete: true };
 		deleteProject(actor, params.id);
 		redirect(303, '/projects');
-	}
+	},
+	...analysisRowActions
 };
