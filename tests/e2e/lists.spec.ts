@@ -65,14 +65,14 @@ test.describe('without JavaScript', () => {
 		expect((await rowNames(page)).sort()).toEqual(['Bay 1', 'Bay 10', 'Bay 11', 'Bay 12']);
 
 		// sort by name, then the other way; the search is kept
-		await page.getByRole('link', { name: 'Project' }).click();
+		await page.getByRole('link', { name: 'Project', exact: true }).click();
 		await expect(page).toHaveURL(/sort=name&dir=asc/);
 		expect(await rowNames(page)).toEqual(['Bay 1', 'Bay 10', 'Bay 11', 'Bay 12']);
 		await expect(page.getByRole('columnheader', { name: 'Project' })).toHaveAttribute(
 			'aria-sort',
 			'ascending'
 		);
-		await page.getByRole('link', { name: 'Project' }).click();
+		await page.getByRole('link', { name: 'Project', exact: true }).click();
 		expect(await rowNames(page)).toEqual(['Bay 12', 'Bay 11', 'Bay 10', 'Bay 1']);
 
 		// page through every project in name order
@@ -91,7 +91,7 @@ test.describe('without JavaScript', () => {
 		expect(await rowNames(again)).toEqual(['Bay 8', 'Bay 9']);
 		await again.close();
 
-		await page.getByRole('link', { name: 'Bay 9' }).click();
+		await page.getByRole('link', { name: 'Bay 9', exact: true }).click();
 		await expect(page.getByRole('heading', { level: 1, name: 'Bay 9' })).toBeVisible();
 	});
 
@@ -142,7 +142,7 @@ test.describe('without JavaScript', () => {
 		await expect(page.getByText('Brought back “Shelf 09”.')).toBeVisible();
 		expect((await rowNames(page))[0]).toBe('Shelf 09');
 
-		await page.getByRole('link', { name: 'Shelf 09' }).click();
+		await page.getByRole('link', { name: 'Shelf 09', exact: true }).click();
 		await expect(page).toHaveURL(/\/shelf\//);
 	});
 });

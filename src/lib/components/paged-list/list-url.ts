@@ -2,10 +2,12 @@
  * A list's state lives in its page's URL (search, filters, sort, page), so a list can be
  * bookmarked, shared, and used without JavaScript. These build the links that change one part.
  */
+import type { ResolvedPathname } from '$app/types';
+
 export type ListParams = Record<string, string | number | null | undefined>;
 
 /** The page's own address with some parameters set (or removed, for '', null or undefined). */
-export function listHref(url: URL, changes: ListParams): string {
+export function listHref(url: URL, changes: ListParams): ResolvedPathname {
 	const params = new URLSearchParams();
 	// a form action's name (`?/delete`) is not part of the list's state
 	for (const [k, v] of url.searchParams) if (!k.startsWith('/')) params.append(k, v);
@@ -14,7 +16,8 @@ export function listHref(url: URL, changes: ListParams): string {
 		else params.set(k, String(v));
 	}
 	const query = params.toString();
-	return query ? `${url.pathname}?${query}` : url.pathname;
+	// the page's own pathname, already resolved against the base path
+	return (query ? `${url.pathname}?${query}` : url.pathname) as ResolvedPathname;
 }
 
 /**
@@ -26,7 +29,7 @@ export function sortHref(
 	column: string,
 	current: { sort: string; dir: 'asc' | 'desc' },
 	newestFirst: readonly string[] = ['updated', 'created']
-): string {
+): ResolvedPathname {
 	const dir =
 		current.sort === column
 			? current.dir === 'asc'
