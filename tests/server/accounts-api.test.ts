@@ -121,7 +121,9 @@ describe('API tokens', () => {
 			id: lu.id,
 			email: lu.email,
 			name: 'Lu',
-			via: 'token'
+			via: 'token',
+			// the actor carries the user's length unit (the default, 1/16")
+			lengthUnit: 'frac16'
 		});
 		const used = db()
 			.db.select()

@@ -2,6 +2,7 @@ import { error } from '@sveltejs/kit';
 import { and, eq } from 'drizzle-orm';
 import { getDb } from './db';
 import { memberships, type Role } from './db/schema';
+import type { LengthUnit } from '$lib/schemas/preferences';
 
 /** Who is acting: the signed-in user, however they proved it (session cookie or API token). */
 export interface Actor {
@@ -9,6 +10,11 @@ export interface Actor {
 	email: string;
 	name: string | null;
 	via: 'session' | 'token';
+	/**
+	 * How the actor writes lengths, read with the actor once per request (so a list does not ask
+	 * again for every row). Absent on actors made by hand (scripts, tests): then read when needed.
+	 */
+	lengthUnit?: LengthUnit;
 }
 
 const RANK: Record<Role, number> = { viewer: 1, editor: 2, owner: 3 };

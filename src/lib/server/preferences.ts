@@ -6,12 +6,18 @@ import { LENGTH_UNITS, type LengthUnit } from '$lib/schemas/preferences';
 
 /** The actor's chosen way of writing lengths (fractional inches to a precision, decimal inches, mm). */
 export function lengthUnitOf(actor: Actor): LengthUnit {
+	if (actor.lengthUnit) return actor.lengthUnit;
 	const row = getDb()
 		.select({ u: users.lengthUnit })
 		.from(users)
 		.where(eq(users.id, actor.id))
 		.get();
-	return (LENGTH_UNITS as readonly string[]).includes(row?.u ?? '')
-		? (row!.u as LengthUnit)
+	return readLengthUnit(row?.u);
+}
+
+/** A stored length unit, or the default (1/16") for a missing or unknown one. */
+export function readLengthUnit(stored: string | null | undefined): LengthUnit {
+	return (LENGTH_UNITS as readonly string[]).includes(stored ?? '')
+		? (stored as LengthUnit)
 		: 'frac16';
 }

@@ -3,6 +3,7 @@ import { and, desc, eq, isNull } from 'drizzle-orm';
 import type { Actor } from '../access';
 import { getDb } from '../db';
 import { apiTokens, users } from '../db/schema';
+import { readLengthUnit } from '../preferences';
 import { randomSecret, sha256 } from './secrets';
 
 export interface ApiTokenSummary {
@@ -79,7 +80,8 @@ export function actorFromBearer(header: string | null | undefined, now = Date.no
 			lastUsedAt: apiTokens.lastUsedAt,
 			userId: users.id,
 			email: users.email,
-			name: users.name
+			name: users.name,
+			lengthUnit: users.lengthUnit
 		})
 		.from(apiTokens)
 		.innerJoin(users, eq(users.id, apiTokens.userId))
@@ -91,5 +93,11 @@ export function actorFromBearer(header: string | null | undefined, now = Date.no
 			.set({ lastUsedAt: new Date(now) })
 			.where(eq(apiTokens.id, row.id))
 			.run();
-	return { id: row.userId, email: row.email, name: row.name, via: 'token' };
+	return {
+		id: row.userId,
+		email: row.email,
+		name: row.name,
+		via: 'token',
+		lengthUnit: readLengthUnit(row.lengthUnit)
+	};
 }

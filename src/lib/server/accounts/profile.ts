@@ -24,6 +24,8 @@ export function setLengthUnit(actor: Actor, unit: LengthUnit) {
 	if (!(LENGTH_UNITS as readonly string[]).includes(unit))
 		throw new Error(`unknown length unit ${unit}`);
 	getDb().update(users).set({ lengthUnit: unit }).where(eq(users.id, actor.id)).run();
+	// the rest of this request (the page's load after the action) writes in the new unit
+	actor.lengthUnit = unit;
 }
 
 export function updateProfile(actor: Actor, input: { name: string; lengthUnit: LengthUnit }) {

@@ -2,6 +2,7 @@ import { eq } from 'drizzle-orm';
 import type { Actor } from '../access';
 import { getDb } from '../db';
 import { users } from '../db/schema';
+import { readLengthUnit } from '../preferences';
 import { createWorkshopFor } from '../workshops';
 import { hashPassword } from './passwords';
 
@@ -58,10 +59,16 @@ export function findUserByEmail(email: string) {
 /** The acting user for a user id (from a verified session), or null when the account is gone. */
 export function actorForUserId(id: string, via: Actor['via'] = 'session'): Actor | null {
 	const user = getDb()
-		.select({ id: users.id, email: users.email, name: users.name })
+		.select({ id: users.id, email: users.email, name: users.name, lengthUnit: users.lengthUnit })
 		.from(users)
 		.where(eq(users.id, id))
 		.get();
 	if (!user?.email) return null;
-	return { id: user.id, email: user.email, name: user.name, via };
+	return {
+		id: user.id,
+		email: user.email,
+		name: user.name,
+		via,
+		lengthUnit: readLengthUnit(user.lengthUnit)
+	};
 }
