@@ -1,0 +1,2 @@
+export { default as ErrorPanel } from './ErrorPanel.svelte';
+export { explainError } from './explain';
