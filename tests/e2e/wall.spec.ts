@@ -68,8 +68,8 @@ test('describe the four-unit wall, fix the worst, download the cut list and shee
 	const rows = Papa.parse<string[]>(await readFile((await cut.path())!, 'utf8')).data;
 	expect(rows[0].slice(0, 3)).toEqual(['Mark', 'Count', 'Part']);
 	const side = rows.find((r) => r[2] === 'side')!;
-	// tall sides: 80" less the 3 1/2" plinth; 1/8" more on the rough cut
-	expect(side.slice(0, 2)).toEqual(['A', '4']);
+	// the two tall end sides (their outer faces show): 80" less the 3 1/2" plinth; 1/8" more rough
+	expect(side.slice(0, 2)).toEqual(['A', '2']);
 	expect(side[5]).toBe('76 1/2"');
 	expect(side[7]).toBe('76 5/8"');
 

@@ -285,8 +285,14 @@ describe('the demo wall', () => {
 		expect(total).toBe(r.parts.length);
 		expect(shop.cutList.marks).toHaveLength(r.parts.length);
 		const sides = shop.cutList.groups.filter((g) => g.role === 'side');
-		// tall sides and low sides: two groups of four
-		expect(sides.map((g) => g.count)).toEqual([4, 4]);
+		// tall sides split by whether the outer face shows (the two ends of the run, the two against
+		// a low unit); the four low sides all stand against a neighbour
+		expect(sides.map((g) => g.count)).toEqual([2, 2, 4]);
+		expect(
+			sides
+				.filter((g) => g.machining.some((m) => m.includes('no finished face')))
+				.map((g) => g.count)
+		).toEqual([2, 4]);
 		expect(new Set(shop.cutList.groups.map((g) => g.mark)).size).toBe(shop.cutList.groups.length);
 	});
 	it('banding: the sum of banded edges, plus the waste share', () => {

@@ -100,7 +100,10 @@ export function caseParts(
 			thicknessM: side.thickness,
 			material: side.material,
 			banding: { long: bandFront(side.material), short: 0 },
-			machining: sideMachining,
+			// a side against its neighbour hides its outer face: any face grade will do
+			machining: touches[name]
+				? [...sideMachining, 'outer face hidden against the next case: no finished face needed']
+				: sideMachining,
 			touches: touches[name] ? name : undefined,
 			elevation: frame
 				? undefined
