@@ -5,7 +5,7 @@ import { actorFromBearer } from '$lib/server/accounts/api-tokens';
 import { actorForUserId } from '$lib/server/accounts/users';
 import { authHandle, authSecret } from '$lib/server/auth';
 // units beyond the trade's table (unit-table.ts) are read on the server with mathjs
-import '$lib/engine/quantity-full';
+import '$lib/engine/units/quantity-full';
 
 /** Refuse to start a production server without AUTH_SECRET, rather than fail every request. */
 export const init: ServerInit = () => {

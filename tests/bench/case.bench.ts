@@ -1,5 +1,6 @@
 import { bench, describe } from 'vitest';
-import { checkCase, checkCaseSI } from '../../src/lib/engine/case';
+import { checkCaseSI } from '../../src/lib/engine/case';
+import { checkCase } from '../../src/lib/compute';
 import { caseDesignSchema, type CaseDesignInput } from '../../src/lib/schemas/case';
 
 /** A 96"-tall library case, 36" wide, with 12 shelves at 40 lbf/ft² (every fourth one fixed). */

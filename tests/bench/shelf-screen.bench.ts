@@ -4,7 +4,7 @@
 // pauses and the comparison on each change of its screen: measured apart.
 import { bench, describe } from 'vitest';
 import { layoutShelf } from '../../src/lib/components/shelf-drawing/geometry';
-import { safeAnalyzeShelf } from '../../src/lib/engine/index';
+import { safeAnalyzeShelf } from '../../src/lib/compute';
 import { defaultComparison, toComparisonRequest } from '../../src/lib/workbench/compare-draft';
 import { runComparison } from '../../src/lib/workbench/compare-run';
 import { defaultDraft, toRequest } from '../../src/lib/workbench/shelf-draft';

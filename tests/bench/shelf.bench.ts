@@ -1,14 +1,9 @@
 import { bench, describe } from 'vitest';
-import {
-	analyzeInput,
-	analyzeShelf,
-	maxSpan,
-	maxSpanInput,
-	maxSpanRequestSchema,
-	type ShelfRequest
-} from '../../src/lib/engine';
-import { buildModel } from '../../src/lib/engine/model';
-import { solveShelf } from '../../src/lib/engine/analyze';
+import { analyzeInput, maxSpanInput } from '../../src/lib/engine';
+import { analyzeShelf, maxSpan, type ShelfRequest } from '../../src/lib/compute';
+import { maxSpanRequestSchema } from '../../src/lib/schemas/shelf';
+import { buildModel } from '../../src/lib/engine/shelf/model';
+import { solveShelf } from '../../src/lib/engine/shelf/analyze';
 import { shelfRequestSchema } from '../../src/lib/schemas/shelf';
 
 // Each engine figure sits beside a bare inline formula loop run in the same process: the ratio

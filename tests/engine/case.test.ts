@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { checkCase, type CaseDesignInput, type DesignChange } from '../../src/lib/engine/case';
+import { type DesignChange } from '../../src/lib/engine/case';
+import { checkCase, type CaseDesignInput } from '../../src/lib/compute';
 import { JoineryInputError } from '../../src/lib/engine/joinery';
 import { findMaterial } from '../../reference/materials';
 import { STOCK_HOLDING } from '../../reference/stock-holding';

@@ -2,7 +2,6 @@ import { describe, expect, it } from 'vitest';
 import {
 	JoineryInputError,
 	chooseBiscuit,
-	planJoint,
 	planJointSI,
 	pocketPlaces,
 	resolveStock,
@@ -11,6 +10,7 @@ import {
 	yieldLimitLb,
 	type JointRequest
 } from '../../src/lib/engine/joinery';
+import { planJoint } from '../../src/lib/compute';
 
 const IN = 0.0254;
 const LBF = 4.4482216152605;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { safeAnalyzeShelf, type ShelfRequest } from '../../src/lib/engine';
+import { safeAnalyzeShelf, type ShelfRequest } from '../../src/lib/compute';
 
 // Found by the junk-input property test (fast-check counterexample span = 5e-324): a denormal
 // length reached the solver and came back as an issue with no field. Lengths below a micrometre

@@ -1,11 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import {
-	analyzeShelf,
-	materialIds,
-	safeAnalyzeShelf,
-	type ShelfRequest
-} from '../../src/lib/engine';
+import { materialIds } from '../../src/lib/engine';
+import { analyzeShelf, safeAnalyzeShelf, type ShelfRequest } from '../../src/lib/compute';
 
 // Property tests: relations beam theory guarantees, over random shelves (SI numbers).
 const material = fc.record({

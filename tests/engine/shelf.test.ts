@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { ShelfInputError } from '../../src/lib/engine';
 import {
-	ShelfInputError,
 	analyzeShelf,
 	maxLoad,
 	maxSpan,
@@ -8,7 +8,7 @@ import {
 	minThickness,
 	safeAnalyzeShelf,
 	type ShelfRequest
-} from '../../src/lib/engine';
+} from '../../src/lib/compute';
 
 const IN = 0.0254;
 

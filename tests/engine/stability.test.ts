@@ -1,9 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import {
-	checkStability,
-	checkStabilitySI,
-	type StabilityRequest
-} from '../../src/lib/engine/stability';
+import { checkStabilitySI, type StabilityRequest } from '../../src/lib/engine/stability';
+import { checkStability } from '../../src/lib/compute';
 import { JoineryInputError } from '../../src/lib/engine/joinery';
 
 const IN = 0.0254;

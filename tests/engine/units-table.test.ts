@@ -6,8 +6,8 @@ import {
 	parseQuantity,
 	tryParseQuantity,
 	unitTargetFor
-} from '../../src/lib/engine/quantity';
-import { UNIT_TABLE, readFromTable, type TableKind } from '../../src/lib/engine/unit-table';
+} from '../../src/lib/engine/units/quantity';
+import { UNIT_TABLE, readFromTable, type TableKind } from '../../src/lib/engine/units/unit-table';
 
 // Exact definitions (international yard and pound, 1959; standard gravity, 3rd CGPM 1901), written
 // out here apart from the engine's own constants. "B.8" below: NIST SP 811 (2008 ed.), Appendix
@@ -136,7 +136,7 @@ function mathjsSpelling(unit: string, kind: TableKind): string {
 
 describe('every table entry against mathjs itself', () => {
 	beforeAll(async () => {
-		mathjs = (await import('../../src/lib/engine/quantity-full')).parseWithMathjs;
+		mathjs = (await import('../../src/lib/engine/units/quantity-full')).parseWithMathjs;
 	});
 
 	const entries = (Object.keys(UNIT_TABLE) as TableKind[]).flatMap((kind) =>

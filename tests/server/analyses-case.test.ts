@@ -1,8 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { useTempDb } from './support/db';
 import { makeWorkshopWithCast } from './support/actors';
-import { checkCase, type CaseDesignInput, type CaseResult } from '../../src/lib/engine/case';
-import { planJoint, type JointPlan } from '../../src/lib/engine/joinery';
+import { type CaseResult } from '../../src/lib/engine/case';
+import { checkCase, type CaseDesignInput } from '../../src/lib/compute';
+import { type JointPlan } from '../../src/lib/engine/joinery';
+import { planJoint } from '../../src/lib/compute';
 import { createProject } from '../../src/lib/server/projects';
 import { createAnalysis, duplicateAnalysis } from '../../src/lib/server/analyses';
 

@@ -3,7 +3,7 @@ import { useTempDb } from './support/db';
 import { event, makeWorkshopWithCast } from './support/actors';
 import { failingShelf, handShelf, saveShelf } from './support/analyses';
 import * as listApi from '../../src/routes/api/v1/projects/[id]/analyses/+server';
-import { analyzeShelf, type ShelfRequest } from '../../src/lib/engine';
+import { analyzeShelf, type ShelfRequest } from '../../src/lib/compute';
 import { createProject } from '../../src/lib/server/projects';
 import { createAnalysis, listAnalyses } from '../../src/lib/server/analyses';
 import type { ComparisonResult } from '../../src/lib/kinds/comparison';

@@ -4,7 +4,7 @@ import * as joints from '../../src/routes/api/v1/joints/+server';
 import * as stability from '../../src/routes/api/v1/stability/+server';
 import * as cases from '../../src/routes/api/v1/cases/check/+server';
 import { openApiDocument } from '../../src/lib/server/openapi';
-import { planJoint } from '../../src/lib/engine/joinery';
+import { planJoint } from '../../src/lib/compute';
 
 const LBF = 4.4482216152605;
 

@@ -4,8 +4,8 @@
  * is the sides'), a length that may be zero (a flush base), and a spread load.
  */
 import { readLengthText, type Reading } from '../components/quantity-input/reading';
-import { formatLength, tryParseLength } from '../engine/length';
-import { formatPressure, tryParseQuantity } from '../engine/quantity';
+import { formatLength, tryParseLength } from '../engine/units/length';
+import { formatPressure, tryParseQuantity } from '../engine/units/quantity';
 import type { UserLengthUnit } from '../workbench/lengths';
 
 /** Blank means "as the sides" (or whatever `blankWords` says). */

@@ -4,7 +4,7 @@
  */
 import type { CaseDesign } from '../schemas/case';
 import type { CaseMargin, CaseResult, CaseShelf } from '../engine/case/types';
-import { formatLength } from '../engine/length';
+import { formatLength } from '../engine/units/length';
 import type { UserLengthUnit } from '../workbench/lengths';
 import { marginWords } from './words';
 

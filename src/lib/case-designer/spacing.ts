@@ -3,7 +3,7 @@
  * Texts that cannot be read yet are left out (the form marks them).
  */
 import { withUnitMark } from '../components/quantity-input/reading';
-import { tryParseLength } from '../engine/length';
+import { tryParseLength } from '../engine/units/length';
 import { floorTo, lengthText, unitStepM, type UserLengthUnit } from '../workbench/lengths';
 import type { CaseDraft } from './draft';
 

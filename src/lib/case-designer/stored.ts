@@ -3,8 +3,8 @@
  * form texts, in the reader's unit. Parts the form does not edit are kept aside and written back.
  */
 import type { CaseDesignInput } from '../schemas/case';
-import { formatLength } from '../engine/length';
-import { formatPressure } from '../engine/quantity';
+import { formatLength } from '../engine/units/length';
+import { formatPressure } from '../engine/units/quantity';
 import type { UserLengthUnit } from '../workbench/lengths';
 import {
 	defaultCase,

@@ -1,35 +1,13 @@
 /**
- * The shelf engine's public face. Framework-free: any TypeScript runner can import this file.
- * Requests are plain JSON (quantity strings or SI numbers); results are SI numbers.
+ * The engine's public face. Framework-free: any TypeScript runner can import this file, and it
+ * imports nothing outside src/lib/engine and reference/. Inputs are typed SI values (see
+ * shelf/types.ts, joinery/types.ts, stability/types.ts, case/types.ts); results are SI numbers.
+ * Reading what people and programs send (quantity strings, defaults) is src/lib/schemas' work, and
+ * src/lib/compute.ts parses, then calls these.
  */
 export * from './units';
-export { ShelfInputError } from './errors';
-export type {
-	Reaction,
-	SafeResult,
-	ShelfIssue,
-	ShelfResult,
-	ShelfWarning,
-	SpanCheck,
-	WarningCode
-} from './types';
-export type {
-	CustomMaterial,
-	EdgeInput,
-	LimitInput,
-	LoadInput,
-	MaterialInput,
-	MaxLoadRequest,
-	MaxSpanRequest,
-	MinEdgeRequest,
-	MinThicknessRequest,
-	ShelfInput,
-	ShelfRequest,
-	SupportInput
-} from '../schemas/shelf';
-export { analyzeShelf, analyzeInput, safeAnalyzeShelf, safely } from './analyze';
+export * from './shelf';
 export { ENGINE_VERSION } from './version';
-export { deflectionLimit, type DeflectionLimit } from './limits';
 export {
 	materials,
 	materialIds,
@@ -37,36 +15,9 @@ export {
 	type ShelfMaterial,
 	type StockThickness
 } from '../../../reference/materials';
-export {
-	shelfRequestSchema,
-	maxSpanRequestSchema,
-	minThicknessRequestSchema,
-	minEdgeRequestSchema,
-	maxLoadRequestSchema
-} from '../schemas/shelf';
-export {
-	maxSpan,
-	minThickness,
-	minEdge,
-	maxLoad,
-	maxSpanInput,
-	minThicknessInput,
-	minEdgeInput,
-	maxLoadInput,
-	safeMaxSpan,
-	safeMinThickness,
-	safeMinEdge,
-	safeMaxLoad,
-	bracketedRoot,
-	type MaxSpanResult,
-	type MinThicknessResult,
-	type MinEdgeResult,
-	type MaxLoadResult,
-	type ThicknessTrial
-} from './solvers';
 
 // Joinery, stability and the whole-case check (issue 4)
-export { planJoint, planJointSI, JoineryInputError, type InputIssue } from './joinery';
+export { planJointSI, JoineryInputError, type InputIssue } from './joinery';
 export type {
 	JointRequest,
 	JointPlan,
@@ -76,10 +27,11 @@ export type {
 	CapacityCheck,
 	StockMaterial
 } from './joinery';
-export { checkStability, checkStabilitySI } from './stability';
+export { checkStabilitySI } from './stability';
 export type { StabilityRequest, StabilityResult, FrontEdgeLoad } from './stability';
-export { checkCase, checkCaseSI } from './case';
+export { checkCaseSI } from './case';
 export type {
+	CaseDesign,
 	CaseResult,
 	CaseShelf,
 	CaseJoint,
@@ -89,7 +41,4 @@ export type {
 	DesignChange,
 	DesignPath
 } from './case';
-export type { JointInput } from '../schemas/joinery';
-export type { StabilityInput } from '../schemas/stability';
-export type { CaseDesign, CaseDesignInput } from '../schemas/case';
 export { loadPresets, type LoadPreset } from '../../../reference/load-presets';

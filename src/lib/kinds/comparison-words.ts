@@ -2,7 +2,7 @@
  * A material comparison in one line, for lists and records: how many candidates meet the limit and
  * which sags least. Every figure is the engine's.
  */
-import { formatLength } from '../engine/length';
+import { formatLength } from '../engine/units/length';
 import { count, percent, type ReaderUnit } from './words';
 
 export interface CandidateOutcome {

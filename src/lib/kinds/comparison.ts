@@ -3,7 +3,7 @@
  * candidate computed from the input parsed once.
  */
 import { analyzeInput, safely, type ShelfResult } from '../engine/index';
-import { formatLength } from '../engine/length';
+import { formatLength } from '../engine/units/length';
 import { ENGINE_VERSION } from '../engine/version';
 import {
 	comparisonRequestSchema,

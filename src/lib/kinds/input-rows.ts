@@ -3,8 +3,8 @@
  * and forces in the reader's unit. Only formatting; nothing here is computed.
  */
 import { findMaterial } from '../../../reference/materials';
-import { formatLength } from '../engine/length';
-import { formatForce, formatLineLoad, formatPressure } from '../engine/quantity';
+import { formatLength } from '../engine/units/length';
+import { formatForce, formatLineLoad, formatPressure } from '../engine/units/quantity';
 import type { ComparisonInput } from '../schemas/analysis';
 import type { jointShape } from '../schemas/joinery';
 import type { ShelfInput } from '../schemas/shelf';

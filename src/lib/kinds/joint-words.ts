@@ -3,7 +3,7 @@
  * client's record. Every figure is the engine's; forces in the reader's system.
  */
 import type { JointPlan } from '../engine/joinery/types';
-import { formatForce, formatMoment } from '../engine/quantity';
+import { formatForce, formatMoment } from '../engine/units/quantity';
 import { count, percent, type ReaderUnit } from './words';
 
 const FASTENER_WORDS: Record<JointPlan['fastener'], [string, string]> = {

@@ -3,8 +3,8 @@
  * and the client's record: the sag when loaded and in the long run, the verdict against the limit
  * with the margin in words, the stress. Numbers in the reader's unit; every figure is the engine's.
  */
-import type { ShelfResult } from '../engine/types';
-import { formatLength } from '../engine/length';
+import type { ShelfResult } from '../engine/shelf/types';
+import { formatLength } from '../engine/units/length';
 import { apart, percent, type ReaderUnit } from './words';
 
 export { percent };

@@ -2,8 +2,8 @@
  * A tip-over check in plain words, the one writer for the tipping screen, the saved summary and
  * the client's record. Every figure is the engine's; forces in the reader's system.
  */
-import { formatLength } from '../engine/length';
-import { formatForce } from '../engine/quantity';
+import { formatLength } from '../engine/units/length';
+import { formatForce } from '../engine/units/quantity';
 import type { StabilityResult } from '../engine/stability/types';
 import type { ReaderUnit } from './words';
 

@@ -2,7 +2,7 @@
  * Small pieces every kind's sentences share: a count with its noun, a share as a percent, and
  * two lengths written finely enough that the reader can see which is larger.
  */
-import { formatLength, type LengthUnit } from '../engine/length';
+import { formatLength, type LengthUnit } from '../engine/units/length';
 
 /** The unit people choose in their preferences (src/lib/schemas/preferences.ts). */
 export type ReaderUnit = Exclude<LengthUnit, 'm'>;

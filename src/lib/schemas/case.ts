@@ -101,7 +101,7 @@ export const caseDesignShape = z.object({
 });
 
 export type CaseDesignInput = z.input<typeof caseDesignShape>;
-export type CaseDesign = z.output<typeof caseDesignShape>;
+export type { CaseDesign } from '../engine/case/types';
 
 /** Checks across fields: parts must fit inside the case. */
 export const caseDesignSchema = caseDesignShape.superRefine((d, ctx) => {

@@ -1,8 +1,10 @@
 /**
- * The shelf request, once: used by the engine (analyzeShelf and the solvers), the API routes and
- * the forms. Quantities arrive as strings or SI numbers and leave as SI numbers.
+ * The shelf request, once: used by the API routes, the forms and src/lib/compute.ts. Quantities
+ * arrive as strings or SI numbers and leave as SI numbers in the engine's input types
+ * (src/lib/engine/shelf/types.ts).
  */
 import { z } from 'zod';
+import { NAMED_LIMITS, geometryIssues } from '../engine/shelf';
 import { lengthField, quantityField } from './quantity';
 
 /** Guards against unit slips (e.g. 900 m meant as 900 mm); no shelf is this large. */
@@ -75,7 +77,7 @@ export const edgeSchema = z.object({
 	thickness: positiveLength(0.3)
 });
 
-export const namedLimits = ['L/144', 'L/240', 'L/360', '1/16in-per-ft', '0.02in-per-ft'] as const;
+export const namedLimits = NAMED_LIMITS;
 export const limitSchema = z.union([
 	z.enum(namedLimits),
 	z.object({ ratio: z.number().min(10).max(10000) }),
@@ -111,60 +113,18 @@ const baseShape = {
 };
 
 const baseSchema = z.object({ ...baseShape, span: baseShape.span.optional() });
-interface GeometryView {
-	span?: number;
-	support: z.output<typeof supportSchema>;
-	loads: z.output<typeof loadSchema>[];
-	edges: { side: string }[];
+
+/** Checks that need several fields at once (the engine's geometryIssues); every issue names its field. */
+function checkGeometry(
+	value: Parameters<typeof geometryIssues>[0],
+	ctx: z.RefinementCtx,
+	spanNeeded: boolean
+) {
+	for (const issue of geometryIssues(value, spanNeeded))
+		ctx.addIssue({ code: 'custom', path: issue.path, message: issue.message });
 }
 
-/** Checks that need several fields at once; every issue names its field. */
-function checkGeometry(value: GeometryView, ctx: z.RefinementCtx, spanNeeded: boolean) {
-	const spans = typeof value.support === 'object' ? value.support.spans : undefined;
-	const total = spans ? spans.reduce((a, b) => a + b, 0) : value.span;
-	if (spans && value.span !== undefined && Math.abs(value.span - (total ?? 0)) > 0.001)
-		ctx.addIssue({
-			code: 'custom',
-			path: ['span'],
-			message: 'The span must equal the sum of the spans, or be left out.'
-		});
-	if (spanNeeded && total === undefined)
-		ctx.addIssue({ code: 'custom', path: ['span'], message: 'Expected the span of the shelf.' });
-	const sides = new Set<string>();
-	value.edges.forEach((edge, i) => {
-		if (sides.has(edge.side))
-			ctx.addIssue({
-				code: 'custom',
-				path: ['edges', i, 'side'],
-				message: `Only one ${edge.side} strip is allowed.`
-			});
-		sides.add(edge.side);
-	});
-	if (total === undefined) return;
-	value.loads.forEach((load, i) => {
-		const inside = (x: number | undefined, key: string) => {
-			if (x !== undefined && x > total + 1e-9)
-				ctx.addIssue({
-					code: 'custom',
-					path: ['loads', i, key],
-					message: 'Must lie on the shelf: at most the span from the left end.'
-				});
-		};
-		if (load.kind === 'point') inside(load.at, 'at');
-		if (load.kind === 'line') {
-			inside(load.from, 'from');
-			inside(load.to, 'to');
-			if (load.from !== undefined && load.to !== undefined && load.to <= load.from)
-				ctx.addIssue({
-					code: 'custom',
-					path: ['loads', i, 'to'],
-					message: 'The end of a line load must lie beyond its start.'
-				});
-		}
-	});
-}
-
-/** analyzeShelf and POST /api/v1/shelf */
+/** analyzeShelf (src/lib/compute.ts) and POST /api/v1/shelf */
 export const shelfRequestSchema = baseSchema.superRefine((v, ctx) => checkGeometry(v, ctx, true));
 
 /** maxSpan: the span is what is sought (for several spans, their proportions are kept) */
@@ -216,14 +176,17 @@ function areaFree(end: 'from' | 'to') {
 }
 
 export type ShelfRequest = z.input<typeof shelfRequestSchema>;
-export type ShelfInput = z.output<typeof shelfRequestSchema>;
 export type MaxSpanRequest = z.input<typeof maxSpanRequestSchema>;
 export type MinThicknessRequest = z.input<typeof minThicknessRequestSchema>;
 export type MinEdgeRequest = z.input<typeof minEdgeRequestSchema>;
 export type MaxLoadRequest = z.input<typeof maxLoadRequestSchema>;
+/** a material as people and programs write it: an id, or figures as quantity strings */
 export type MaterialInput = z.input<typeof materialSchema>;
-export type CustomMaterial = z.output<typeof customMaterialSchema>;
-export type LoadInput = z.output<typeof loadSchema>;
-export type EdgeInput = z.output<typeof edgeSchema>;
-export type LimitInput = z.output<typeof limitSchema>;
-export type SupportInput = z.output<typeof supportSchema>;
+export type {
+	CustomMaterial,
+	EdgeInput,
+	LimitInput,
+	LoadInput,
+	ShelfInput,
+	SupportInput
+} from '../engine/shelf';

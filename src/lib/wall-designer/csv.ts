@@ -5,11 +5,11 @@
  */
 import Papa from 'papaparse';
 import type { CutList } from '../engine/cutlist';
-import { formatLength } from '../engine/length';
+import { formatLength } from '../engine/units/length';
 import type { SheetPlan } from '../engine/sheets';
 import type { HardwareLine } from '../engine/wall/hardware';
 import type { UserLengthUnit } from '../workbench/lengths';
-import { tryParseLength } from '../engine/length';
+import { tryParseLength } from '../engine/units/length';
 
 /** A size for the shop in the user's unit, finer where that makes it exact (a 23/32" panel is not
  * written as 3/4" to someone who works in sixteenths). */

@@ -6,7 +6,7 @@
 import { DEMO_WALL } from '../engine/wall/demo';
 import type { WallDesignInput } from '../schemas/wall';
 import { withUnitMark } from '../components/quantity-input/reading';
-import { formatLength, tryParseLength } from '../engine/length';
+import { formatLength, tryParseLength } from '../engine/units/length';
 import { lengthText, type UserLengthUnit } from '../workbench/lengths';
 
 /** The wall as typed: the schema's input with every length a text. */

@@ -5,7 +5,7 @@
  */
 import type { ComparisonRequest } from '../schemas/analysis';
 import { findMaterial } from '../engine/index';
-import { METRES_PER_INCH, formatLength, tryParseLength } from '../engine/length';
+import { METRES_PER_INCH, formatLength, tryParseLength } from '../engine/units/length';
 import { withUnitMark } from '../components/quantity-input/reading';
 import type { UserLengthUnit } from './lengths';
 import { defaultDraft, fromInput, toRequest, type ShelfDraft } from './shelf-draft';

@@ -2,8 +2,8 @@
  * The comparison computed in the browser: for each candidate the shelf at the current span, the
  * longest span within the limit (inverse solver) and the sag over a range of spans for the chart.
  */
-import { safeAnalyzeShelf, safeMaxSpan } from '../engine/index';
-import type { ShelfResult } from '../engine/types';
+import { safeAnalyzeShelf, safeMaxSpan } from '../compute';
+import type { ShelfResult } from '../engine/shelf/types';
 import type { ComparisonRequest } from '../schemas/analysis';
 import type { ShelfRequest } from '../schemas/shelf';
 

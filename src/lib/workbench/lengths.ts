@@ -2,7 +2,7 @@
  * Lengths on the user's own grid: the step of their unit (1/16", 1/32", 1/64", 0.001", 1 mm) and
  * rounding to it in the safe direction, so a suggested span that is written down still passes.
  */
-import { METRES_PER_INCH, formatLength, type LengthUnit } from '../engine/length';
+import { METRES_PER_INCH, formatLength, type LengthUnit } from '../engine/units/length';
 
 /** The unit people choose in their preferences (src/lib/schemas/preferences.ts). */
 export type UserLengthUnit = Exclude<LengthUnit, 'm'>;

@@ -3,7 +3,7 @@
  * uses them: a kind of load, a text to type in the user's units, and what lies on the shelf.
  */
 import { loadPresets } from '../engine/index';
-import { formatLineLoad, formatPressure } from '../engine/quantity';
+import { formatLineLoad, formatPressure } from '../engine/units/quantity';
 import type { UserLengthUnit } from './lengths';
 
 export interface LoadPreset {

@@ -4,8 +4,8 @@
  * Bare numbers are inches to an inch user and millimetres to a millimetre user (withUnitMark).
  */
 import type { ShelfRequest } from '../schemas/shelf';
-import { formatLength, parseLength } from '../engine/length';
-import { formatForce, formatLineLoad, formatPressure } from '../engine/quantity';
+import { formatLength, parseLength } from '../engine/units/length';
+import { formatForce, formatLineLoad, formatPressure } from '../engine/units/quantity';
 import { withUnitMark } from '../components/quantity-input/reading';
 import { loadUnitsFor, type UserLengthUnit } from './lengths';
 

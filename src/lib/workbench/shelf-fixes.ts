@@ -9,9 +9,9 @@ import {
 	safeMaxSpan,
 	safeMinEdge,
 	safeMinThickness
-} from '../engine/index';
-import { METRES_PER_INCH, formatLength } from '../engine/length';
-import type { ShelfResult } from '../engine/types';
+} from '../compute';
+import { METRES_PER_INCH, formatLength } from '../engine/units/length';
+import type { ShelfResult } from '../engine/shelf/types';
 import type { ShelfRequest } from '../schemas/shelf';
 import { ceilTo, floorTo, unitStepM, type UserLengthUnit } from './lengths';
 import { toRequest, type ShelfDraft } from './shelf-draft';

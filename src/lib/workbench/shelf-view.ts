@@ -4,8 +4,8 @@
  */
 import type { DrawingLoad, ShelfDrawingInput } from '../components/shelf-drawing/geometry';
 import { withUnitMark } from '../components/quantity-input/reading';
-import { tryParseLength } from '../engine/length';
-import type { ShelfResult } from '../engine/types';
+import { tryParseLength } from '../engine/units/length';
+import type { ShelfResult } from '../engine/shelf/types';
 import type { UserLengthUnit } from './lengths';
 import type { ShelfDraft } from './shelf-draft';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeShelf } from '../../../src/lib/engine/analyze';
+import { analyzeShelf } from '../../../src/lib/compute';
 import { bandingTotals, cutList } from '../../../src/lib/engine/cutlist';
 import { JoineryInputError } from '../../../src/lib/engine/joinery/validate';
 import {

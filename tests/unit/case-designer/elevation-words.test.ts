@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { layoutElevation } from '../../../src/lib/components/case-elevation/geometry';
 import { defaultCase, toDesign } from '../../../src/lib/case-designer/draft';
 import { inUserUnits, jointSentence, marginWords } from '../../../src/lib/case-designer/words';
-import { formatLength } from '../../../src/lib/engine/length';
+import { formatLength } from '../../../src/lib/engine/units/length';
 import { caseDesignSchema } from '../../../src/lib/schemas/case';
 
 const IN = 0.0254; // exactly, by the 1959 international inch

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { analyzeShelf, type ShelfResult } from '../../../src/lib/engine';
+import { type ShelfResult } from '../../../src/lib/engine';
+import { analyzeShelf } from '../../../src/lib/compute';
 import { describeShelf } from '../../../src/lib/kinds/shelf-words';
 import { describeCase, otherChecks } from '../../../src/lib/kinds/case-words';
 import { apart, count } from '../../../src/lib/kinds/words';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { readLengthText, withUnitMark } from '../../../src/lib/components/quantity-input/reading';
-import { formatLength, tryParseLength } from '../../../src/lib/engine/length';
+import { formatLength, tryParseLength } from '../../../src/lib/engine/units/length';
 import { ceilTo, floorTo, unitStepM } from '../../../src/lib/workbench/lengths';
 import {
 	defaultDraft,
@@ -9,7 +9,8 @@ import {
 	toRequest
 } from '../../../src/lib/workbench/shelf-draft';
 import { aboutLength, describeShelf } from '../../../src/lib/kinds/shelf-words';
-import { analyzeShelf, shelfRequestSchema } from '../../../src/lib/engine/index';
+import { analyzeShelf } from '../../../src/lib/compute';
+import { shelfRequestSchema } from '../../../src/lib/schemas/shelf';
 
 // 1 in = 0.0254 m exactly (international yard and pound agreement, 1959)
 const IN = 0.0254;

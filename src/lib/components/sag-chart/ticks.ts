@@ -2,7 +2,7 @@
  * Axis ticks on the user's own grid: whole inches by 1, 2, 3, 6 or 12 for spans, binary fractions
  * (1/64 … 1") for sags, and round millimetres for a millimetre user.
  */
-import { METRES_PER_INCH } from '../../engine/length';
+import { METRES_PER_INCH } from '../../engine/units/length';
 
 const INCH_STEPS = [1 / 64, 1 / 32, 1 / 16, 1 / 8, 1 / 4, 1 / 2, 1, 2, 3, 6, 12, 24, 48];
 const MM_STEPS = [0.1, 0.2, 0.5, 1, 2, 5, 10, 20, 50, 100, 200, 500, 1000];

@@ -1,8 +1,6 @@
-import { caseDesignSchema, type CaseDesign, type CaseDesignInput } from '../../schemas/case';
 import { JOINT_CAUTIONS } from '../joinery/cautions';
 import { planJointSI } from '../joinery/plan';
 import type { JointPlan, JointRequest } from '../joinery/types';
-import { parseOrThrow } from '../joinery/validate';
 import { checkStabilitySI } from '../stability/check';
 import { STABILITY_CAUTIONS } from '../stability/cautions';
 import { ENGINE_VERSION } from '../version';
@@ -12,7 +10,14 @@ import { caseMargins } from './margins';
 import { analyseShelves, asShelf, shelfRequest, ShelfAnalyses } from './shelves';
 import type { CaseGeometry } from './geometry';
 import { anchoringSuggestion, jointSuggestions, shelfSuggestions } from './suggest';
-import type { CaseJoint, CaseResult, CaseShelf, CaseSuggestion, DesignPath } from './types';
+import type {
+	CaseDesign,
+	CaseJoint,
+	CaseResult,
+	CaseShelf,
+	CaseSuggestion,
+	DesignPath
+} from './types';
 import { stabilityRequestOf } from './weight';
 
 const SHELF_CAUTIONS = [
@@ -20,17 +25,6 @@ const SHELF_CAUTIONS = [
 	'Do not overload shelves: the Architectural Woodwork Standards cap one shelf at 200 lb.'
 ];
 
-/**
- * Check a whole case from the same JSON the API takes: every shelf's analysis, every joint's plan
- * and capacity, tip-over and anchoring, the cut list, the margins worst first, and suggestions that
- * fix each failure as changes to the design. An estimate for planning; the cautions always come
- * with it. Throws JoineryInputError naming every bad field.
- */
-export function checkCase(input: CaseDesignInput): CaseResult {
-	return checkCaseSI(parseOrThrow(caseDesignSchema, input));
-}
-
-/** checkCase on a design already parsed by caseDesignSchema (SI numbers). */
 /** Failing shelves that are the same shelf (same request to the shelf engine), grouped so each
  * suggestion is worked out once and applies to all of them. */
 function sameShelves(failing: CaseShelf[], d: CaseDesign, g: CaseGeometry): CaseShelf[][] {
@@ -60,6 +54,12 @@ function forAll(x: CaseSuggestion, first: CaseShelf, group: CaseShelf[]): CaseSu
 	};
 }
 
+/**
+ * Check a whole case (SI numbers): every shelf's analysis, every joint's plan
+ * and capacity, tip-over and anchoring, the cut list, the margins worst first, and suggestions that
+ * fix each failure as changes to the design. An estimate for planning; the cautions always come
+ * with it. Throws JoineryInputError naming a bad field.
+ */
 export function checkCaseSI(d: CaseDesign): CaseResult {
 	const g = caseGeometry(d);
 	const runs = new ShelfAnalyses();

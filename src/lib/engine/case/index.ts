@@ -1,3 +1,3 @@
-export { checkCase, checkCaseSI } from './check';
+export { checkCaseSI } from './check';
 export { caseGeometry, partsList } from './geometry';
 export type * from './types';

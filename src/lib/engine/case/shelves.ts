@@ -1,20 +1,20 @@
-import type { ShelfRequest } from '../../schemas/shelf';
-import { analyzeShelf } from '../analyze';
-import { ShelfInputError } from '../errors';
 import { JoineryInputError } from '../joinery/validate';
-import type { ShelfResult } from '../types';
+import { analyzeInput } from '../shelf/analyze';
+import { ShelfInputError } from '../shelf/errors';
+import { DEFAULT_SHELF_OPTIONS, type ShelfInput, type ShelfResult } from '../shelf/types';
+import { geometryIssues } from '../shelf/validate';
 import type { CaseGeometry } from './geometry';
 import type { CaseDesign, CaseShelf, DesignPath } from './types';
 
 type DesignShelf = CaseDesign['shelves'][number];
 
-/** The shelf engine request for one shelf of the case (SI numbers, which the shelf schema accepts). */
+/** The shelf engine's input for one shelf of the case. */
 export function shelfRequest(
 	d: CaseDesign,
 	g: CaseGeometry,
 	s: DesignShelf,
 	spanM = g.innerWidthM
-): ShelfRequest {
+): ShelfInput {
 	return {
 		span: spanM,
 		depth: g.insideDepthM - (s.nosing?.thickness ?? 0),
@@ -27,20 +27,32 @@ export function shelfRequest(
 		edges: s.nosing ? [{ side: 'front', ...s.nosing }] : [],
 		duration: 'long',
 		service: d.service,
-		limit: d.limit
+		limit: d.limit,
+		options: DEFAULT_SHELF_OPTIONS
 	};
+}
+
+/** What the shelf schema would refuse in a shelf the case built: a nosing as deep as the shelf,
+ * a load beyond the span. */
+function shelfIssues(input: ShelfInput) {
+	const issues = geometryIssues(input, true);
+	if (!(input.depth > 0))
+		issues.unshift({ path: ['depth'], message: 'Must be greater than zero.' });
+	return issues;
 }
 
 /** Identical shelves are analysed once per check: a case often repeats one shelf many times. */
 export class ShelfAnalyses {
 	private memo = new Map<string, ShelfResult>();
 
-	run(request: ShelfRequest, path: DesignPath): ShelfResult {
+	run(request: ShelfInput, path: DesignPath): ShelfResult {
 		const key = JSON.stringify(request);
 		const hit = this.memo.get(key);
 		if (hit) return hit;
 		try {
-			const result = analyzeShelf(request);
+			const issues = shelfIssues(request);
+			if (issues.length) throw new ShelfInputError(issues);
+			const result = analyzeInput(request);
 			this.memo.set(key, result);
 			return result;
 		} catch (e) {

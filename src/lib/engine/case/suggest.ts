@@ -1,9 +1,9 @@
 import { findMaterial } from '../../../../reference/materials';
-import { ShelfInputError } from '../errors';
-import { formatLength } from '../length';
+import { ShelfInputError } from '../shelf/errors';
+import { formatLength } from '../units/length';
 import { planJointSI } from '../joinery/plan';
 import type { JointRequest } from '../joinery/types';
-import { maxSpan, minEdge } from '../solvers';
+import { maxSpanInput, minEdgeInput } from '../shelf/solvers';
 import type { CaseGeometry } from './geometry';
 import { asShelf, shelfRequest, type ShelfAnalyses } from './shelves';
 import type { CaseDesign, CaseJoint, CaseShelf, CaseSuggestion, DesignPath } from './types';
@@ -65,7 +65,7 @@ export function shelfSuggestions(
 				...s,
 				nosing: { material: nosingMaterial, height: 0.01, thickness: NOSING_THICKNESS_M }
 			});
-			const found = minEdge({
+			const found = minEdgeInput({
 				...base,
 				edges: [],
 				strip: { side: 'front', material: nosingMaterial, thickness: NOSING_THICKNESS_M }
@@ -92,7 +92,7 @@ export function shelfSuggestions(
 
 	try {
 		const { span: _span, ...rest } = shelfRequest(d, g, s);
-		const longest = maxSpan(rest).span;
+		const longest = maxSpanInput(rest).span;
 		const width = Math.floor((longest + 2 * d.sides.thickness) / SIXTEENTH) * SIXTEENTH;
 		if (width < d.width - 1e-3 && width - 2 * d.sides.thickness > 0.05)
 			out.push({

@@ -1,9 +1,107 @@
-import type { CaseDesign, CaseDesignInput } from '../../schemas/case';
 import type { JointPlan } from '../joinery/types';
+import type { LimitInput, LoadInput, ShelfMaterialInput, ShelfResult } from '../shelf/types';
+import type { AnchorKind } from '../stability/types';
 import type { StabilityResult } from '../stability/types';
-import type { ShelfResult } from '../types';
 
-export type { CaseDesign, CaseDesignInput };
+/**
+ * A whole case, SI (metres, newtons): what src/lib/schemas/case.ts reads a design into. Keys are
+ * those the user's design has, so a suggested change (a path and an SI value) can be written
+ * straight back into it. Weights of drawers and doors are forces (N), as typed.
+ */
+export type CaseJointKind = 'biscuit' | 'pocket-screw' | 'screw' | 'dado';
+
+export interface CasePanel {
+	material: ShelfMaterialInput;
+	thickness: number;
+}
+
+export interface CaseEndPanel {
+	/** default: the sides' material and thickness */
+	material?: ShelfMaterialInput;
+	thickness?: number;
+	joint: CaseJointKind;
+	/** fasteners per end instead of the planned number */
+	jointCount?: number;
+	/** what it carries, as on a shelf (none by default) */
+	loads: LoadInput[];
+}
+
+export interface CaseNosing {
+	material: ShelfMaterialInput;
+	/** vertical size of the strip */
+	height: number;
+	/** front-to-back size of the strip */
+	thickness: number;
+}
+
+export interface CaseShelfDesign {
+	name?: string;
+	/** height of the shelf's top face above the floor */
+	height: number;
+	kind: 'fixed' | 'adjustable';
+	material?: ShelfMaterialInput;
+	thickness?: number;
+	/** fixed shelves: how it is joined to the sides */
+	joint: CaseJointKind;
+	jointCount?: number;
+	/** fixed shelves: take the ends as fixed (the joint must then carry the end moment) */
+	ends: 'simple' | 'fixed';
+	loads: LoadInput[];
+	nosing?: CaseNosing;
+	/** height of what stands on it, for the centre of gravity */
+	itemHeight?: number;
+}
+
+export interface CaseFaceFrame {
+	material: ShelfMaterialInput;
+	thickness: number;
+	stileWidth: number;
+	railWidth: number;
+	/** how rails meet stiles */
+	joint: 'pocket-screw' | 'biscuit';
+	/** how the frame meets the case front */
+	attach: 'biscuit' | 'pocket-screw';
+}
+
+export interface CaseDrawer {
+	/** height of the drawer above the floor */
+	height: number;
+	/** weight of the empty drawer, N */
+	weight: number;
+	contentsWeight?: number;
+	/** how far it opens beyond the front */
+	extension?: number;
+}
+
+export interface CaseDoor {
+	weight: number;
+	width: number;
+	centreHeight: number;
+}
+
+export interface CaseDesign {
+	name?: string;
+	/** overall outside sizes; the depth includes the back and any face frame */
+	width: number;
+	height: number;
+	depth: number;
+	sides: CasePanel;
+	top: CaseEndPanel;
+	bottom: CaseEndPanel;
+	/** a back fitted in a rabbet in the sides, or applied over the back edges */
+	back?: CasePanel & { fitted: 'rabbet' | 'applied' };
+	shelves: CaseShelfDesign[];
+	faceFrame?: CaseFaceFrame;
+	/** a plinth or feet: the bottom sits at `height`, the front support line is `setback` behind */
+	base?: { height?: number; setback?: number };
+	drawers?: CaseDrawer[];
+	doors?: CaseDoor[];
+	floorTiltDeg?: number;
+	anchoring?: { kind: AnchorKind; height?: number; intoStuds?: boolean };
+	seismicRegion?: boolean;
+	limit: LimitInput;
+	service: 'dry' | 'humid' | 'wet';
+}
 
 /** A path into the design object, e.g. `['shelves', 2, 'thickness']`. */
 export type DesignPath = (string | number)[];

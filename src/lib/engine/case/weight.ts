@@ -1,5 +1,4 @@
 import { G_M_PER_S2 } from '../joinery/units';
-import { toStabilityRequest } from '../../schemas/stability';
 import type { StabilityRequest } from '../stability/types';
 import { densityOf, type CaseGeometry } from './geometry';
 import type { CaseDesign, CaseShelf } from './types';
@@ -146,17 +145,43 @@ export function stabilityRequestOf(
 				centreFromFront: g.insideCentreXM
 			};
 		});
-	return toStabilityRequest({
-		height: d.height,
-		width: d.width,
-		depth: d.depth,
-		construction: { parts: parts.filter((p) => p.weight > 0) },
-		contents,
-		drawers: d.drawers,
-		doors: d.doors,
-		base: { setback: d.base?.setback },
-		floorTiltDeg: d.floorTiltDeg,
-		anchoring: d.anchoring,
-		seismicRegion: d.seismicRegion
-	});
+	const kg = (n: number) => n / G_M_PER_S2;
+	return {
+		heightM: d.height,
+		widthM: d.width,
+		depthM: d.depth,
+		construction: {
+			parts: parts
+				.filter((p) => p.weight > 0)
+				.map((p) => ({
+					name: p.name,
+					massKg: kg(p.weight),
+					centreHeightM: p.centreHeight,
+					centreFromFrontM: p.centreFromFront
+				}))
+		},
+		contents: contents.map((x) => ({
+			massKg: kg(x.weight),
+			heightM: x.height,
+			itemHeightM: x.itemHeight,
+			centreFromFrontM: x.centreFromFront
+		})),
+		drawers: d.drawers?.map((dr) => ({
+			heightM: dr.height,
+			massKg: kg(dr.weight),
+			contentsKg: dr.contentsWeight === undefined ? undefined : kg(dr.contentsWeight),
+			extensionM: dr.extension
+		})),
+		doors: d.doors?.map((door) => ({
+			massKg: kg(door.weight),
+			widthM: door.width,
+			centreHeightM: door.centreHeight
+		})),
+		base: { setbackM: d.base?.setback ?? 0 },
+		floorTiltDeg: d.floorTiltDeg ?? 0,
+		anchoring: d.anchoring
+			? { kind: d.anchoring.kind, heightM: d.anchoring.height, intoStuds: d.anchoring.intoStuds }
+			: { kind: 'none' },
+		seismicRegion: d.seismicRegion ?? false
+	};
 }

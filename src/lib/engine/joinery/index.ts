@@ -1,4 +1,4 @@
-export { planJoint, planJointSI } from './plan';
+export { planJointSI } from './plan';
 export {
 	screwWithdrawal,
 	screwLateral,

@@ -5,8 +5,7 @@ import type { FastenerPart, PlanContext } from './part';
 import { planPocketScrews, planThroughScrews } from './screws';
 import { planDado, planShelfPins } from './supports';
 import type { FastenerKind, JointKind, JointPlan, JointRequest } from './types';
-import { jointRequestSchema, type JointInput } from '../../schemas/joinery';
-import { JoineryInputError, nonNegative, parseOrThrow, positive } from './validate';
+import { JoineryInputError, nonNegative, positive } from './validate';
 
 const KINDS: JointKind[] = [
 	'shelf-to-side',
@@ -25,15 +24,10 @@ const PLANNERS: Record<FastenerKind, (ctx: PlanContext) => FastenerPart> = {
 };
 
 /**
- * Plan one joint from the same JSON the API takes (quantity strings or SI numbers): the fasteners,
- * where they go, what each holds and what the joint must carry. Throws JoineryInputError naming
- * every bad field. An estimate for planning; every result carries the cautions.
+ * Plan one joint (SI numbers): the fasteners, where they go, what each holds and what the joint
+ * must carry. Throws JoineryInputError naming a bad field. An estimate for planning; every result
+ * carries the cautions.
  */
-export function planJoint(input: JointInput): JointPlan {
-	return planJointSI(parseOrThrow(jointRequestSchema, input));
-}
-
-/** planJoint on a request already in SI numbers (the shape jointRequestSchema yields). */
 export function planJointSI(req: JointRequest): JointPlan {
 	if (!KINDS.includes(req.kind))
 		throw new JoineryInputError('kind', `expected one of ${KINDS.join(', ')}`);

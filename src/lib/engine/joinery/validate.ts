@@ -1,5 +1,3 @@
-import type { z } from 'zod';
-
 export interface InputIssue {
 	path: (string | number)[];
 	message: string;
@@ -19,19 +17,6 @@ export class JoineryInputError extends Error {
 }
 
 const segment = (s: string) => (/^\d+$/.test(s) ? Number(s) : s);
-
-/** Parse a request with its shared schema, or throw one error that lists every issue. */
-export function parseOrThrow<S extends z.ZodType>(schema: S, input: unknown): z.output<S> {
-	const read = schema.safeParse(input);
-	if (read.success) return read.data;
-	const issues = read.error.issues.map((i) => ({
-		path: i.path.filter((p): p is string | number => typeof p !== 'symbol'),
-		message: i.message
-	}));
-	const first = issues[0];
-	const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : '';
-	throw new JoineryInputError(first.path.join('.'), first.message + more, issues);
-}
 
 /** A finite number greater than zero, or a clear error naming the field. */
 export function positive(value: unknown, field: string): number {

@@ -9,8 +9,7 @@ import {
 	F3096_14_PULL_N,
 	F3096_23_PULL_N
 } from '../../../../reference/tipping';
-import { stabilityRequestSchema, type StabilityInput } from '../../schemas/stability';
-import { JoineryInputError, nonNegative, parseOrThrow, positive } from '../joinery/validate';
+import { JoineryInputError, nonNegative, positive } from '../joinery/validate';
 import { anchoringAdvice } from './anchoring';
 import { STABILITY_CAUTIONS } from './cautions';
 import { casePoints, contentsPoints, drawerExtension, frontPoints, rearranged } from './points';
@@ -40,11 +39,6 @@ interface EdgePlace {
  * against the ASTM F2057-23 test weight, EN 14749 forces, and the pull a wall restraint must hold.
  * An estimate for planning; the cautions always come with it.
  */
-export function checkStability(input: StabilityInput): StabilityResult {
-	return checkStabilitySI(parseOrThrow(stabilityRequestSchema, input));
-}
-
-/** checkStability on a request already in SI numbers (the shape stabilityRequestSchema yields). */
 export function checkStabilitySI(req: StabilityRequest): StabilityResult {
 	const heightM = positive(req.heightM, 'heightM');
 	positive(req.widthM, 'widthM');

@@ -1,4 +1,4 @@
-export { checkStability, checkStabilitySI } from './check';
+export { checkStabilitySI } from './check';
 export { STABILITY_CAUTIONS } from './cautions';
 export { restoringMoment, tipForceAtTop, tipAccelerationG } from './statics';
 export type * from './types';

@@ -11,9 +11,9 @@ import { JoineryInputError } from '../joinery/validate';
 import { STABILITY_CAUTIONS } from '../stability/cautions';
 import { checkStabilitySI } from '../stability/check';
 import type { StabilityRequest } from '../stability/types';
-import { STANDARD_GRAVITY } from '../si';
-import type { ShelfRequest } from '../../schemas/shelf';
-import type { ShelfResult } from '../types';
+import { STANDARD_GRAVITY } from '../units/si';
+import type { ShelfInput } from '../shelf/types';
+import type { ShelfResult } from '../shelf/types';
 import { ENGINE_VERSION } from '../version';
 import { asCaseDesign, shelfSpans, wallCaseGeometry, type WallCaseGeometry } from './geometry';
 import { caseParts, partSink } from './parts';
@@ -39,7 +39,7 @@ class WallShelfAnalyses extends ShelfAnalyses {
 	constructor(private spans: Map<string, number[]>) {
 		super();
 	}
-	override run(request: ShelfRequest, path: (string | number)[]): ShelfResult {
+	override run(request: ShelfInput, path: (string | number)[]): ShelfResult {
 		const s = this.spans.get(path.join('.'));
 		if (!s) return super.run(request, path);
 		if (s.length === 1) return super.run({ ...request, span: s[0] }, path);

@@ -3,7 +3,7 @@
  * for the tip-over check and the elevation all start here.
  */
 import { ADJUSTABLE_CLEARANCE_M, densityOf, materialName } from '../case/geometry';
-import { formatLength } from '../length';
+import { formatLength } from '../units/length';
 import { hasGrain, needsBanding, shelfSpans, type WallCaseGeometry } from './geometry';
 import type {
 	DoorOpeningDesign,

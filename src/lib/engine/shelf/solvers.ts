@@ -3,31 +3,19 @@
  * and the largest load that meet the limit. Each runs the whole analysis (bending, shear, creep,
  * self-weight) inside a bracketed root find, so none is a closed-form shortcut.
  */
-import type { z } from 'zod';
-import {
-	maxLoadRequestSchema,
-	maxSpanRequestSchema,
-	minEdgeRequestSchema,
-	minThicknessRequestSchema,
-	type MaxLoadRequest,
-	type MaxSpanRequest,
-	type MinEdgeRequest,
-	type MinThicknessRequest,
-	type ShelfInput
-} from '../schemas/shelf';
 import { maxMoment } from './beam';
-import {
-	analyzeInput,
-	checkSpans,
-	marginOfModel,
-	parseRequest,
-	safely,
-	solveShelf
-} from './analyze';
+import { analyzeInput, checkSpans, marginOfModel, solveShelf } from './analyze';
 import { ShelfInputError } from './errors';
 import { buildModel, relayOut, type ShelfModel } from './model';
 import { partStresses } from './section';
-import type { ShelfResult } from './types';
+import type {
+	MaxLoadInput,
+	MaxSpanInput,
+	MinEdgeInput,
+	MinThicknessInput,
+	ShelfInput,
+	ShelfResult
+} from './types';
 
 const INCH = 0.0254;
 const MAX_SPAN_M = 10;
@@ -104,12 +92,7 @@ export interface MaxSpanResult {
 }
 
 /** The longest span that meets the limit (for several spans: their common scale). */
-export function maxSpan(request: MaxSpanRequest): MaxSpanResult {
-	return maxSpanInput(parseRequest(maxSpanRequestSchema, request));
-}
-
-/** maxSpan of a request already validated by maxSpanRequestSchema. */
-export function maxSpanInput(input: z.output<typeof maxSpanRequestSchema>): MaxSpanResult {
+export function maxSpanInput(input: MaxSpanInput): MaxSpanResult {
 	rejectPositioned(input, 'the longest-span search');
 	const base = typeof input.support === 'object' ? input.support.spans : [1];
 	const baseTotal = base.reduce((a, b) => a + b, 0);
@@ -172,14 +155,7 @@ export interface MinThicknessResult {
 }
 
 /** The thinnest stocked (or given) thickness that meets the limit. */
-export function minThickness(request: MinThicknessRequest): MinThicknessResult {
-	return minThicknessInput(parseRequest(minThicknessRequestSchema, request));
-}
-
-/** minThickness of a request already validated by minThicknessRequestSchema. */
-export function minThicknessInput(
-	input: z.output<typeof minThicknessRequestSchema>
-): MinThicknessResult {
+export function minThicknessInput(input: MinThicknessInput): MinThicknessResult {
 	const lib = buildModel({ ...input, thickness: 0.019 }).panel;
 	const candidates = (
 		input.candidates?.map((t) => ({ thickness: t, label: `${(t * 1000).toFixed(1)} mm` })) ??
@@ -236,12 +212,7 @@ export interface MinEdgeResult {
 }
 
 /** The smallest height of a strip (of given material and thickness) that makes the shelf meet it. */
-export function minEdge(request: MinEdgeRequest): MinEdgeResult {
-	return minEdgeInput(parseRequest(minEdgeRequestSchema, request));
-}
-
-/** minEdge of a request already validated by minEdgeRequestSchema. */
-export function minEdgeInput(input: z.output<typeof minEdgeRequestSchema>): MinEdgeResult {
+export function minEdgeInput(input: MinEdgeInput): MinEdgeResult {
 	const { strip } = input;
 	const others = input.edges.filter((e) => e.side !== strip.side);
 	const withStrip = (h: number): ShelfInput => ({
@@ -284,12 +255,7 @@ export interface MaxLoadResult {
 }
 
 /** The largest magnitude of one load of a given shape that the shelf carries within the limit. */
-export function maxLoad(request: MaxLoadRequest): MaxLoadResult {
-	return maxLoadInput(parseRequest(maxLoadRequestSchema, request));
-}
-
-/** maxLoad of a request already validated by maxLoadRequestSchema. */
-export function maxLoadInput(input: z.output<typeof maxLoadRequestSchema>): MaxLoadResult {
+export function maxLoadInput(input: MaxLoadInput): MaxLoadResult {
 	const shape = input.load;
 	const loadOf = (x: number): ShelfInput['loads'][number] =>
 		shape.kind === 'area'
@@ -354,8 +320,3 @@ export function maxLoadInput(input: z.output<typeof maxLoadRequestSchema>): MaxL
 		analysis
 	};
 }
-
-export const safeMaxSpan = safely(maxSpan);
-export const safeMinThickness = safely(minThickness);
-export const safeMinEdge = safely(minEdge);
-export const safeMaxLoad = safely(maxLoad);

@@ -1,7 +1,7 @@
 /**
  * Deflection limits: how much sag a span may show. Each names where it comes from.
  */
-import type { LimitInput } from '../schemas/shelf';
+import type { LimitInput } from './types';
 
 const INCH = 0.0254;
 const FOOT = 0.3048;

@@ -2,8 +2,7 @@
  * The analysis of one shelf: sags instant and long-term, the checks per span, moments, stress,
  * reactions, the curve and the cautions.
  */
-import { AWS_MAX_LOAD_PER_SHELF_LB } from '../../../reference/materials';
-import { shelfRequestSchema, type ShelfInput, type ShelfRequest } from '../schemas/shelf';
+import { AWS_MAX_LOAD_PER_SHELF_LB } from '../../../../reference/materials';
 import {
 	addSagPieces,
 	breakPoints,
@@ -23,10 +22,17 @@ import {
 } from './beam';
 import { ShelfInputError } from './errors';
 import { buildModel, isStocked, type ShelfModel } from './model';
-import { NEWTONS_PER_LBF } from './si';
+import { NEWTONS_PER_LBF } from '../units/si';
 import { partStresses } from './section';
-import type { SafeResult, ShelfIssue, ShelfResult, ShelfWarning, SpanCheck } from './types';
-import { ENGINE_VERSION } from './version';
+import type {
+	SafeResult,
+	ShelfInput,
+	ShelfIssue,
+	ShelfResult,
+	ShelfWarning,
+	SpanCheck
+} from './types';
+import { ENGINE_VERSION } from '../version';
 
 function merge(a: BeamLoads, b: BeamLoads): BeamLoads {
 	return { points: [...a.points, ...b.points], udls: [...a.udls, ...b.udls] };
@@ -362,36 +368,6 @@ function findNonFinite(value: unknown, path: string): void {
 		for (const [k, v] of Object.entries(value)) findNonFinite(v, `${path}.${k}`);
 }
 
-/** Validate a request with the shared schema; throws ShelfInputError naming each bad field. */
-export function parseRequest<T>(
-	schema: {
-		safeParse(
-			v: unknown
-		):
-			| { success: true; data: T }
-			| { success: false; error: { issues: { path: PropertyKey[]; message: string }[] } };
-	},
-	request: unknown
-): T {
-	const parsed = schema.safeParse(request);
-	if (!parsed.success)
-		throw new ShelfInputError(
-			parsed.error.issues.map((i) => ({
-				path: i.path.filter((p): p is string | number => typeof p !== 'symbol'),
-				message: i.message
-			}))
-		);
-	return parsed.data;
-}
-
-/**
- * Analyse a shelf. Takes the JSON request (quantity strings or SI numbers); throws
- * ShelfInputError with the fields that need attention.
- */
-export function analyzeShelf(request: ShelfRequest): ShelfResult {
-	return analyzeInput(parseRequest(shelfRequestSchema, request));
-}
-
 /** Turn any function of a request into one that never throws: `{ ok, result } | { ok: false, issues }`. */
 export function safely<R, T>(fn: (request: R) => T): (request: R) => SafeResult<T> {
 	return (request) => {
@@ -409,9 +385,6 @@ export function safely<R, T>(fn: (request: R) => T): (request: R) => SafeResult<
 		}
 	};
 }
-
-/** analyzeShelf for the keystroke: never throws. */
-export const safeAnalyzeShelf = safely(analyzeShelf);
 
 /**
  * Span over sag, or null when the shelf does not sag measurably: a sag too small to divide by

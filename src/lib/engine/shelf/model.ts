@@ -8,14 +8,13 @@ import {
 	findMaterial,
 	type ShelfMaterial,
 	type StockThickness
-} from '../../../reference/materials';
-import type { EdgeInput, ShelfInput } from '../schemas/shelf';
+} from '../../../../reference/materials';
 import type { BeamLoads, EndCondition } from './beam';
 import { ShelfInputError } from './errors';
 import { deflectionLimit, type DeflectionLimit } from './limits';
-import { STANDARD_GRAVITY } from './si';
+import { STANDARD_GRAVITY } from '../units/si';
 import { sectionProperties, type SectionPart, type SectionProperties } from './section';
-import type { ShelfIssue, ShelfWarning } from './types';
+import type { EdgeInput, ShelfInput, ShelfIssue, ShelfWarning } from './types';
 
 const SERVICE_CLASS = { dry: 0, humid: 1, wet: 2 } as const;
 /** A thickness within this of a stocked one is taken as that stock (sheet goods vary about so). */

@@ -1,0 +1,58 @@
+/**
+ * Checks on a shelf that need several fields at once (the sum of the spans, one strip per side,
+ * loads that lie on the shelf). The shelf schema reports them while reading a request; the case
+ * check runs them on the shelves it builds. Every issue names its field.
+ */
+import type { ShelfIssue } from './types';
+
+export interface GeometryView {
+	span?: number;
+	support: string | { spans: number[] };
+	loads: (
+		{ kind: 'area' } | { kind: 'line'; from?: number; to?: number } | { kind: 'point'; at: number }
+	)[];
+	edges: { side: string }[];
+}
+
+export function geometryIssues(value: GeometryView, spanNeeded: boolean): ShelfIssue[] {
+	const issues: ShelfIssue[] = [];
+	const spans = typeof value.support === 'object' ? value.support.spans : undefined;
+	const total = spans ? spans.reduce((a, b) => a + b, 0) : value.span;
+	if (spans && value.span !== undefined && Math.abs(value.span - (total ?? 0)) > 0.001)
+		issues.push({
+			path: ['span'],
+			message: 'The span must equal the sum of the spans, or be left out.'
+		});
+	if (spanNeeded && total === undefined)
+		issues.push({ path: ['span'], message: 'Expected the span of the shelf.' });
+	const sides = new Set<string>();
+	value.edges.forEach((edge, i) => {
+		if (sides.has(edge.side))
+			issues.push({
+				path: ['edges', i, 'side'],
+				message: `Only one ${edge.side} strip is allowed.`
+			});
+		sides.add(edge.side);
+	});
+	if (total === undefined) return issues;
+	value.loads.forEach((load, i) => {
+		const inside = (x: number | undefined, key: string) => {
+			if (x !== undefined && x > total + 1e-9)
+				issues.push({
+					path: ['loads', i, key],
+					message: 'Must lie on the shelf: at most the span from the left end.'
+				});
+		};
+		if (load.kind === 'point') inside(load.at, 'at');
+		if (load.kind === 'line') {
+			inside(load.from, 'from');
+			inside(load.to, 'to');
+			if (load.from !== undefined && load.to !== undefined && load.to <= load.from)
+				issues.push({
+					path: ['loads', i, 'to'],
+					message: 'The end of a line load must lie beyond its start.'
+				});
+		}
+	});
+	return issues;
+}
