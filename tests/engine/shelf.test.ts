@@ -237,7 +237,7 @@ describe('limits', () => {
 		expect(at('36"', '1/16in-per-ft')).toBeCloseTo(3 / 16, 10);
 		expect(at('60"', '1/16in-per-ft')).toBeCloseTo(1 / 4, 10);
 	});
-	it('0.02" per foot (common practice, no source), a ratio and a length', () => {
+	it('0.02" per foot (retired: read as L/600, the same sag), a ratio and a length', () => {
 		expect(at('36"', '0.02in-per-ft')).toBeCloseTo(0.06, 10);
 		expect(at('36"', { ratio: 500 })).toBeCloseTo(36 / 500, 10);
 		expect(at('36"', { length: '1/8"' })).toBeCloseTo(1 / 8, 10);

@@ -4,6 +4,7 @@
  * (never a thrown error in the middle of typing).
  */
 import { caseDesignSchema, type CaseDesign, type CaseDesignInput } from '../schemas/case';
+import { cleanPath, fieldIssues } from '../schemas/issues';
 import { checkCaseSI } from '../engine/case/check';
 import type { CaseResult } from '../engine/case/types';
 import { JoineryInputError } from '../engine/joinery/validate';
@@ -21,7 +22,7 @@ type Path = readonly PropertyKey[];
 
 /** The form field an issue's path belongs to: a shelf's loads are one field, its spread load. */
 export function fieldKey(path: Path): string {
-	const parts = path.filter((p): p is string | number => typeof p !== 'symbol');
+	const parts = cleanPath(path);
 	const at = parts.indexOf('loads');
 	if (at >= 0) return [...parts.slice(0, at), 'load'].join('.');
 	return parts.join('.') || 'form';
@@ -32,7 +33,7 @@ export function runCase(input: CaseDesignInput): CaseRun {
 	if (!read.success)
 		return {
 			ok: false,
-			issues: read.error.issues.map((i) => ({ field: fieldKey(i.path), message: i.message }))
+			issues: fieldIssues(read.error).map((i) => ({ field: fieldKey(i.path), message: i.message }))
 		};
 	try {
 		return { ok: true, design: read.data, result: checkCaseSI(read.data) };

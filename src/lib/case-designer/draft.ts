@@ -5,14 +5,26 @@
  * millimetres to a millimetre user (withUnitMark), as in every other field of the product.
  * Stored designs come back through stored.ts.
  */
+import { DEFLECTION_LIMITS } from '../engine/shelf/limits';
+import type { NamedLimit } from '../engine/shelf/types';
 import type { CaseDesignInput } from '../schemas/case';
-import { withUnitMark } from '../components/quantity-input/reading';
+import { withLoadUnit, withUnitMark } from '../components/quantity-input/reading';
 import type { UserLengthUnit } from '../workbench/lengths';
 
 export type JointChoice = 'biscuit' | 'pocket-screw' | 'screw' | 'dado';
 export type AnchorChoice = 'none' | 'strap' | 'bracket' | 'screws-through-back';
-export const LIMITS = ['L/144', 'L/240', 'L/360', '1/16in-per-ft', '0.02in-per-ft'] as const;
-export type CaseLimit = (typeof LIMITS)[number];
+/** The limits offered by name: the engine's one list. */
+export const LIMITS = Object.keys(DEFLECTION_LIMITS) as NamedLimit[];
+/** a named limit, or L/n kept from a stored design (a ratio, or the retired 0.02" per foot) */
+export type CaseLimit = NamedLimit | `L/${number}`;
+
+/** The design's limit: a named one as it is, L/n as a ratio. */
+export function limitOf(l: CaseLimit): CaseDesignInput['limit'] {
+	const ratio = /^L\/(\d+(?:\.\d+)?)$/.exec(l);
+	return (LIMITS as string[]).includes(l) || !ratio
+		? (l as NamedLimit)
+		: { ratio: Number(ratio[1]) };
+}
 
 export interface EndDraft {
 	/** '' = the sides' material / thickness */
@@ -68,6 +80,8 @@ export interface CaseDraft {
 	anchoring: { kind: AnchorChoice; intoStuds: boolean };
 	seismicRegion: boolean;
 	limit: CaseLimit;
+	/** why the limit is not what was stored (a retired preset read as its equal ratio) */
+	limitNote?: string;
 	service: 'dry' | 'humid' | 'wet';
 	/** parts of a stored design this form does not edit (drawers, doors, floor tilt, restraint
 	 * height), written back unchanged so saving never drops them */
@@ -181,7 +195,9 @@ export function toDesign(d: CaseDraft, unit: UserLengthUnit): CaseDesignInput {
 			...(s.jointCount && s.kind === 'fixed' ? { jointCount: s.jointCount } : {}),
 			ends: s.ends,
 			loads: [
-				...(s.load.trim() === '' ? [] : [{ kind: 'area' as const, pressure: s.load }]),
+				...(s.load.trim() === ''
+					? []
+					: [{ kind: 'area' as const, pressure: withLoadUnit(s.load, 'pressure', unit) }]),
 				...(s.otherLoads as NonNullable<CaseDesignInput['shelves']>[number]['loads'] & object)
 			],
 			...(s.nosing.on
@@ -218,7 +234,7 @@ export function toDesign(d: CaseDraft, unit: UserLengthUnit): CaseDesignInput {
 			...(d.kept.anchorHeight !== undefined ? { height: d.kept.anchorHeight } : {})
 		},
 		seismicRegion: d.seismicRegion,
-		limit: d.limit,
+		limit: limitOf(d.limit),
 		service: d.service
 	};
 }

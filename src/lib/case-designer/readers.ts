@@ -3,7 +3,7 @@
  * for the fields the plain length reader does not cover: a length that may be left blank (then it
  * is the sides'), a length that may be zero (a flush base), and a spread load.
  */
-import { readLengthText, type Reading } from '../components/quantity-input/reading';
+import { readLengthText, withLoadUnit, type Reading } from '../components/quantity-input/reading';
 import { formatLength, tryParseLength } from '../engine/units/length';
 import { formatPressure, tryParseQuantity } from '../engine/units/quantity';
 import type { UserLengthUnit } from '../workbench/lengths';
@@ -29,7 +29,7 @@ export function lengthOrZero(unit: UserLengthUnit) {
 export function spreadLoad(unit: UserLengthUnit) {
 	return (text: string): Reading => {
 		if (text.trim() === '') return { ok: true, value: 0, shown: 'none' };
-		const r = tryParseQuantity(text, 'pressure');
+		const r = tryParseQuantity(withLoadUnit(text, 'pressure', unit), 'pressure');
 		if (!r.ok) return { ok: false, message: `Could not read this. Expected ${r.expected}.` };
 		return {
 			ok: true,

@@ -3,9 +3,10 @@
  * form texts, in the reader's unit. Parts the form does not edit are kept aside and written back.
  */
 import type { CaseDesignInput } from '../schemas/case';
-import { formatLength } from '../engine/units/length';
-import { formatPressure } from '../engine/units/quantity';
-import type { UserLengthUnit } from '../workbench/lengths';
+import { formatQuantityExact } from '../engine/units/quantity';
+import { lengthText, type UserLengthUnit } from '../workbench/lengths';
+import { RETIRED_LIMIT_NOTE } from '../workbench/shelf-draft';
+import { RETIRED_PER_FOOT_AS_RATIO, RETIRED_PER_FOOT_LIMIT } from '../schemas/shelf';
 import {
 	defaultCase,
 	LIMITS,
@@ -30,7 +31,7 @@ export function fromDesign(input: unknown, unit: UserLengthUnit): CaseDraft {
 	const s = obj(input);
 	if (!s) return d;
 	const L = (v: unknown, fallback: string) =>
-		typeof v === 'number' ? formatLength(v, { unit }) : typeof v === 'string' ? v : fallback;
+		typeof v === 'number' ? lengthText(v, unit) : typeof v === 'string' ? v : fallback;
 	const M = (v: unknown, fallback: string) => (typeof v === 'string' ? v : fallback);
 	const end = (v: unknown): EndDraft => {
 		const e = obj(v) ?? {};
@@ -110,6 +111,12 @@ export function fromDesign(input: unknown, unit: UserLengthUnit): CaseDraft {
 	};
 	d.seismicRegion = s.seismicRegion === true;
 	if ((LIMITS as readonly unknown[]).includes(s.limit)) d.limit = s.limit as CaseLimit;
+	const ratio = obj(s.limit)?.ratio;
+	if (typeof ratio === 'number') d.limit = `L/${ratio}`;
+	if (s.limit === RETIRED_PER_FOOT_LIMIT) {
+		d.limit = `L/${RETIRED_PER_FOOT_AS_RATIO.ratio}`;
+		d.limitNote = RETIRED_LIMIT_NOTE;
+	}
 	if (s.service === 'humid' || s.service === 'wet') d.service = s.service;
 	else d.service = 'dry';
 	d.kept = {
@@ -128,5 +135,5 @@ export function fromDesign(input: unknown, unit: UserLengthUnit): CaseDraft {
 function pressureText(v: unknown, unit: UserLengthUnit): string {
 	if (typeof v === 'string') return v;
 	if (typeof v !== 'number') return '';
-	return formatPressure(v, { unit: unit === 'mm' ? 'kPa' : 'lbf/ft²' });
+	return formatQuantityExact(v, 'pressure', unit === 'mm' ? 'kPa' : 'lbf/ft²');
 }

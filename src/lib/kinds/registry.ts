@@ -17,6 +17,7 @@ import { caseDesignSchema } from '../schemas/case';
 import { toWallDesign, wallDesignSchema } from '../schemas/wall';
 import { checkWall } from '../engine/wall/check';
 import type { WallResult } from '../engine/wall/types';
+import { fieldIssues } from '../schemas/issues';
 import { jointShape, toJointRequest } from '../schemas/joinery';
 import { shelfRequestSchema } from '../schemas/shelf';
 import { stabilityShape, toStabilityRequest } from '../schemas/stability';
@@ -149,9 +150,6 @@ export type Computation =
 	| { ok: true; input: unknown; result: unknown; pass: boolean | null; engineVersion: string }
 	| { ok: false; issues: Issue[] };
 
-const cleanPath = (path: PropertyKey[]) =>
-	path.filter((p): p is string | number => typeof p !== 'symbol');
-
 /** What the registry does for one kind, with its types closed over (no casts at the call site). */
 interface KindOps {
 	compute(raw: unknown): Computation;
@@ -166,7 +164,7 @@ function opsOf<S extends z.ZodType, R>(spec: KindSpec<S, R>): KindOps {
 			if (!parsed.success)
 				return {
 					ok: false,
-					issues: parsed.error.issues.map((i) => ({ path: cleanPath(i.path), message: i.message }))
+					issues: fieldIssues(parsed.error)
 				};
 			return computeParsed(spec, parsed.data);
 		},

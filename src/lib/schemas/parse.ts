@@ -4,15 +4,9 @@
 import type { z } from 'zod';
 import { ShelfInputError, type ShelfIssue } from '../engine/shelf';
 import { JoineryInputError } from '../engine/joinery';
+import { fieldIssues } from './issues';
 
-/** zod's issue path without symbols, as the engine's issues and the forms name a field. */
-export function cleanPath(path: readonly PropertyKey[]): (string | number)[] {
-	return path.filter((p): p is string | number => typeof p !== 'symbol');
-}
-
-function issuesOf(error: z.ZodError): ShelfIssue[] {
-	return error.issues.map((i) => ({ path: cleanPath(i.path), message: i.message }));
-}
+const issuesOf = (error: z.ZodError): ShelfIssue[] => fieldIssues(error);
 
 /** Validate a shelf request with its schema; throws ShelfInputError naming each bad field. */
 export function parseRequest<S extends z.ZodType>(schema: S, request: unknown): z.output<S> {

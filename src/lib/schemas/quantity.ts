@@ -24,6 +24,22 @@ const SI_NAME: Record<QuantityKind, string> = {
 	moment: 'newton metres'
 };
 
+/** The SI unit a bound is written in: `at most 1e11 Pa`. */
+const SI_SYMBOL: Record<QuantityKind, string> = {
+	length: 'm',
+	force: 'N',
+	pressure: 'Pa',
+	lineLoad: 'N/m',
+	modulus: 'Pa',
+	density: 'kg/m³',
+	moment: 'N·m'
+};
+
+/** 1e11, 3000, 0.3: a bound as short as it is exact. */
+export function boundText(value: number): string {
+	return Math.abs(value) >= 1e5 ? value.toExponential().replace('e+', 'e') : String(value);
+}
+
 const MIN_LENGTH_M = 1e-6;
 
 /** A quantity of the given kind: string or SI number in, SI number out. */
@@ -51,7 +67,7 @@ export function quantityField(kind: QuantityKind, options: QuantityFieldOptions 
 				ctx.addIssue({
 					code: 'custom',
 					input,
-					message: 'Too small: at least 0.001 mm. Check the unit.'
+					message: 'At least 0.001 mm: check the unit.'
 				});
 				return z.NEVER;
 			}
@@ -63,7 +79,7 @@ export function quantityField(kind: QuantityKind, options: QuantityFieldOptions 
 				ctx.addIssue({
 					code: 'custom',
 					input,
-					message: `Too large: at most ${options.max} ${SI_NAME[kind]}. Check the unit.`
+					message: `At most ${boundText(options.max)} ${SI_SYMBOL[kind]} (${SI_NAME[kind]}): check the unit.`
 				});
 				return z.NEVER;
 			}

@@ -4,7 +4,7 @@
  * (src/lib/engine/shelf/types.ts).
  */
 import { z } from 'zod';
-import { NAMED_LIMITS, geometryIssues } from '../engine/shelf';
+import { DEFLECTION_LIMITS, geometryIssues, type NamedLimit } from '../engine/shelf';
 import { lengthField, quantityField } from './quantity';
 
 /** Guards against unit slips (e.g. 900 m meant as 900 mm); no shelf is this large. */
@@ -32,17 +32,25 @@ export const customMaterialSchema = z.object({
 });
 
 /** A library id (see GET /api/v1/materials) or a material given by its figures. */
-export const materialSchema = z.union([z.string().trim().min(1).max(60), customMaterialSchema]);
+export const materialSchema = z.union([z.string().trim().min(1).max(60), customMaterialSchema], {
+	error:
+		'Expected a library material id (GET /api/v1/materials) or { name, modulus, rupture, density }.'
+});
 
-export const supportSchema = z.union([
-	z.enum(['simple', 'fixed', 'cantilever']),
-	z.object({
-		/** lengths of the spans, left to right, between supports (a shelf over dividers) */
-		spans: z.array(positiveLength(MAX_SPAN_M)).min(2).max(12),
-		/** how the two outer ends are held (default: simply supported) */
-		ends: z.enum(['simple', 'fixed']).default('simple')
-	})
-]);
+export const supportSchema = z.union(
+	[
+		z.enum(['simple', 'fixed', 'cantilever']),
+		z.object({
+			/** lengths of the spans, left to right, between supports (a shelf over dividers) */
+			spans: z.array(positiveLength(MAX_SPAN_M)).min(2).max(12),
+			/** how the two outer ends are held (default: simply supported) */
+			ends: z.enum(['simple', 'fixed']).default('simple')
+		})
+	],
+	{
+		error: "Expected 'simple', 'fixed', 'cantilever' or { spans: [two or more lengths], ends }."
+	}
+);
 
 export const areaLoadSchema = z.object({
 	kind: z.literal('area'),
@@ -77,12 +85,32 @@ export const edgeSchema = z.object({
 	thickness: positiveLength(0.3)
 });
 
-export const namedLimits = NAMED_LIMITS;
-export const limitSchema = z.union([
-	z.enum(namedLimits),
-	z.object({ ratio: z.number().min(10).max(10000) }),
-	z.object({ length: positiveLength(1) })
-]);
+/** The limits offered by name: the engine's one list (engine/shelf/limits.ts). */
+export const namedLimits = Object.keys(DEFLECTION_LIMITS) as [NamedLimit, ...NamedLimit[]];
+
+/**
+ * "0.02in-per-ft" was offered until it was found to have no publisher. Analyses saved with it
+ * still open: 0.02" per foot is exactly L/600 (0.02 / 12 = 1/600), so they are read as L/600 and
+ * the result's limit source says why.
+ */
+export const RETIRED_PER_FOOT_LIMIT = '0.02in-per-ft';
+export const RETIRED_PER_FOOT_AS_RATIO = {
+	ratio: 600,
+	source:
+		'L/600, the same sag as 0.02" per foot, the limit this analysis was saved with; that preset is no longer offered because it has no published source'
+};
+
+export const limitSchema = z.union(
+	[
+		z.enum(namedLimits),
+		z.literal(RETIRED_PER_FOOT_LIMIT).transform(() => ({ ...RETIRED_PER_FOOT_AS_RATIO })),
+		z.object({ ratio: z.number().min(10).max(10000) }),
+		z.object({ length: positiveLength(1) })
+	],
+	{
+		error: `Expected ${Object.keys(DEFLECTION_LIMITS).join(', ')}, { ratio: n } for L/n, or { length }.`
+	}
+);
 
 export const optionsSchema = z.object({
 	/** add shear deflection to bending (default true) */

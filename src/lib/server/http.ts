@@ -1,5 +1,6 @@
 import { isHttpError, json } from '@sveltejs/kit';
 import type { z } from 'zod';
+import { fieldIssues } from '$lib/schemas/issues';
 
 /** One issue with one field of a request: where it is and what was expected. */
 export interface ProblemIssue {
@@ -13,10 +14,7 @@ export function problem(status: number, error: string, issues: ProblemIssue[] = 
 }
 
 export function zodIssues(err: z.ZodError): ProblemIssue[] {
-	return err.issues.map((i) => ({
-		path: i.path.filter((p): p is string | number => typeof p !== 'symbol'),
-		message: i.message
-	}));
+	return fieldIssues(err);
 }
 
 const MAX_BODY_BYTES = 256 * 1024;

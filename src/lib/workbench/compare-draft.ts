@@ -7,7 +7,7 @@ import type { ComparisonRequest } from '../schemas/analysis';
 import { findMaterial } from '../engine/index';
 import { METRES_PER_INCH, formatLength, tryParseLength } from '../engine/units/length';
 import { withUnitMark } from '../components/quantity-input/reading';
-import type { UserLengthUnit } from './lengths';
+import { lengthText, type UserLengthUnit } from './lengths';
 import { defaultDraft, fromInput, toRequest, type ShelfDraft } from './shelf-draft';
 
 export interface CandidateDraft {
@@ -86,7 +86,7 @@ export function fromComparisonInput(input: unknown, unit: UserLengthUnit): Compa
 	if (!input || typeof input !== 'object') return d;
 	const s = input as { shelf?: unknown; candidates?: unknown };
 	const L = (v: unknown, fallback: string) =>
-		typeof v === 'number' ? formatLength(v, { unit }) : typeof v === 'string' ? v : fallback;
+		typeof v === 'number' ? lengthText(v, unit) : typeof v === 'string' ? v : fallback;
 	d.shelf = fromInput({ ...(s.shelf as object), edges: [] }, unit);
 	if (Array.isArray(s.candidates))
 		d.candidates = s.candidates.map((raw) => {

@@ -2,7 +2,7 @@
  * Lengths on the user's own grid: the step of their unit (1/16", 1/32", 1/64", 0.001", 1 mm) and
  * rounding to it in the safe direction, so a suggested span that is written down still passes.
  */
-import { METRES_PER_INCH, formatLength, type LengthUnit } from '../engine/units/length';
+import { METRES_PER_INCH, formatLengthExact, type LengthUnit } from '../engine/units/length';
 
 /** The unit people choose in their preferences (src/lib/schemas/preferences.ts). */
 export type UserLengthUnit = Exclude<LengthUnit, 'm'>;
@@ -36,9 +36,12 @@ export function ceilTo(metres: number, stepM: number): number {
 	return Math.ceil(metres / stepM - GRID_TOLERANCE) * stepM;
 }
 
-/** A length in the user's unit, for a field they can edit (feet are not used in fields). */
+/**
+ * A length for a field the user can edit: exact, so that reading the text back gives the same
+ * metres (23/32" stays 23/32" at a 1/16" display precision; feet are not used in fields).
+ */
 export function lengthText(metres: number, unit: UserLengthUnit): string {
-	return formatLength(metres, { unit });
+	return formatLengthExact(metres, unit);
 }
 
 /** The pressure, line load and force units that go with the chosen length unit. */

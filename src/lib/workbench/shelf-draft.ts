@@ -1,18 +1,29 @@
 /**
  * The shelf check form as the user types it (texts, choices) and its translation to the engine's
  * shelf request, and back from a stored input (SI numbers) to texts in the user's unit.
- * Bare numbers are inches to an inch user and millimetres to a millimetre user (withUnitMark).
+ * Bare numbers are inches to an inch user and millimetres to a millimetre user (withUnitMark); a
+ * bare load is lbf/ft², lbf/ft or lbf to an inch user and kPa, N/m or N to a metric one (withLoadUnit).
  */
-import type { ShelfRequest } from '../schemas/shelf';
-import { formatLength, parseLength } from '../engine/units/length';
-import { formatForce, formatLineLoad, formatPressure } from '../engine/units/quantity';
-import { withUnitMark } from '../components/quantity-input/reading';
-import { loadUnitsFor, type UserLengthUnit } from './lengths';
+import { DEFLECTION_LIMITS, type NamedLimit } from '../engine/shelf';
+import {
+	RETIRED_PER_FOOT_AS_RATIO,
+	RETIRED_PER_FOOT_LIMIT,
+	type ShelfRequest
+} from '../schemas/shelf';
+import { parseLength } from '../engine/units/length';
+import { formatQuantityExact } from '../engine/units/quantity';
+import { withLoadUnit, withUnitMark } from '../components/quantity-input/reading';
+import { lengthText, loadUnitsFor, type UserLengthUnit } from './lengths';
 
 export type SupportChoice = 'simple' | 'fixed' | 'cantilever' | 'continuous';
 export type LoadKind = 'area' | 'line' | 'point';
-export const LIMIT_CHOICES = ['L/144', 'L/240', 'L/360', '1/16in-per-ft', '0.02in-per-ft'] as const;
-export type LimitChoice = (typeof LIMIT_CHOICES)[number] | 'ratio';
+/** The limits offered by name: the engine's one list. */
+export const LIMIT_CHOICES = Object.keys(DEFLECTION_LIMITS) as NamedLimit[];
+export type LimitChoice = NamedLimit | 'ratio';
+
+/** Said beside the limit of an analysis saved with the retired 0.02" per foot preset. */
+export const RETIRED_LIMIT_NOTE =
+	'This analysis was saved with the 0.02" per foot limit, which is no longer offered because it has no published source. It is read as L/600, which allows exactly the same sag.';
 
 export interface StripDraft {
 	on: boolean;
@@ -43,6 +54,8 @@ export interface ShelfDraft {
 	limit: LimitChoice;
 	/** the n of a custom L/n */
 	limitRatio: string;
+	/** why the limit is not what was stored (a retired preset read as its equal ratio) */
+	limitNote?: string;
 }
 
 /** A first shelf: a 3/4" shelf of veneer-core hardwood plywood on pins, 40 lbf/ft² (AWS §1.2.21). */
@@ -98,10 +111,14 @@ export function toRequest(d: ShelfDraft, unit: UserLengthUnit): ShelfRequest {
 		support = { spans: Array.from({ length: d.bays }, () => spanM / d.bays), ends: 'simple' };
 	const load =
 		d.loadKind === 'area'
-			? ({ kind: 'area', pressure: d.load } as const)
+			? ({ kind: 'area', pressure: withLoadUnit(d.load, 'pressure', unit) } as const)
 			: d.loadKind === 'line'
-				? ({ kind: 'line', intensity: d.load } as const)
-				: ({ kind: 'point', force: d.load, at: len(d.pointAt, unit) } as const);
+				? ({ kind: 'line', intensity: withLoadUnit(d.load, 'lineLoad', unit) } as const)
+				: ({
+						kind: 'point',
+						force: withLoadUnit(d.load, 'force', unit),
+						at: len(d.pointAt, unit)
+					} as const);
 	const strip = (side: 'front' | 'below', s: StripDraft) => ({
 		side,
 		material: s.material,
@@ -136,16 +153,16 @@ export function fromInput(input: unknown, unit: UserLengthUnit): ShelfDraft {
 	if (!input || typeof input !== 'object') return d;
 	const s = input as Stored;
 	const L = (v: unknown, fallback: string) =>
-		typeof v === 'number' ? formatLength(v, { unit }) : typeof v === 'string' ? v : fallback;
+		typeof v === 'number' ? lengthText(v, unit) : typeof v === 'string' ? v : fallback;
 	const units = loadUnitsFor(unit);
 	const support = s.support as ShelfRequest['support'];
 	if (typeof support === 'object' && support && 'spans' in support) {
 		const spans = support.spans.map((x) => (typeof x === 'number' ? x : parseLength(x)));
 		d.support = 'continuous';
 		d.bays = spans.length;
-		d.span = formatLength(
+		d.span = lengthText(
 			spans.reduce((a, b) => a + b, 0),
-			{ unit }
+			unit
 		);
 	} else {
 		if (typeof support === 'string') d.support = support;
@@ -158,11 +175,11 @@ export function fromInput(input: unknown, unit: UserLengthUnit): ShelfDraft {
 	const load = (Array.isArray(s.loads) ? s.loads[0] : undefined) as Stored | undefined;
 	d.load = '';
 	if (load?.kind === 'area')
-		d.load = numberOr(load.pressure, (v) => formatPressure(v, { unit: units.pressure }));
+		d.load = numberOr(load.pressure, (v) => formatQuantityExact(v, 'pressure', units.pressure));
 	if (load?.kind === 'line')
-		d.load = numberOr(load.intensity, (v) => formatLineLoad(v, { unit: units.lineLoad }));
+		d.load = numberOr(load.intensity, (v) => formatQuantityExact(v, 'lineLoad', units.lineLoad));
 	if (load?.kind === 'point') {
-		d.load = numberOr(load.force, (v) => formatForce(v, { unit: units.force }));
+		d.load = numberOr(load.force, (v) => formatQuantityExact(v, 'force', units.force));
 		d.pointAt = L(load.at, d.pointAt);
 	}
 	if (load?.kind === 'area' || load?.kind === 'line' || load?.kind === 'point')
@@ -181,6 +198,11 @@ export function fromInput(input: unknown, unit: UserLengthUnit): ShelfDraft {
 	if (s.service === 'dry' || s.service === 'humid' || s.service === 'wet') d.service = s.service;
 	if (typeof s.limit === 'string' && (LIMIT_CHOICES as readonly string[]).includes(s.limit))
 		d.limit = s.limit as LimitChoice;
+	if (s.limit === RETIRED_PER_FOOT_LIMIT) {
+		d.limit = 'ratio';
+		d.limitRatio = String(RETIRED_PER_FOOT_AS_RATIO.ratio);
+		d.limitNote = RETIRED_LIMIT_NOTE;
+	}
 	if (s.limit && typeof s.limit === 'object' && 'ratio' in s.limit) {
 		d.limit = 'ratio';
 		d.limitRatio = String((s.limit as { ratio: number }).ratio);

@@ -36,7 +36,9 @@ describe('the case form and the design it stands for', () => {
 		expect(draft.shelves[3].height).toBe('58"');
 		expect(draft.shelves[0].load).toBe('40 lbf/ft²');
 		expect(caseDesignSchema.parse(toDesign(draft, 'frac16'))).toEqual(stored);
-		expect(fromDesign(stored, 'mm').width).toBe('914 mm');
+		// exact in the reader's unit: 36" is 914.4 mm, never the 914 mm of a whole-millimetre display
+		// (issue 15 item 1: display precision never becomes input)
+		expect(fromDesign(stored, 'mm').width).toBe('914.4 mm');
 	});
 
 	it('keeps what the form does not edit (drawers) when it writes the design back', () => {

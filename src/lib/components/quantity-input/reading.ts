@@ -30,3 +30,27 @@ export function withUnitMark(text: string, unit: string): string {
 	if (unit === 'mm') return t.includes('/') ? `${t}"` : `${t} mm`;
 	return `${t}"`;
 }
+
+/** The load kinds a field can hold, and the unit a bare number means in each unit system. */
+export type LoadQuantity = 'pressure' | 'lineLoad' | 'force';
+const BARE_LOAD_UNIT: Record<'inch' | 'metric', Record<LoadQuantity, string>> = {
+	inch: { pressure: 'lbf/ft²', lineLoad: 'lbf/ft', force: 'lbf' },
+	metric: { pressure: 'kPa', lineLoad: 'N/m', force: 'N' }
+};
+
+/** The units a bare load number is read in for the user's length unit (mm users are metric). */
+export function bareLoadUnits(unit: string): Record<LoadQuantity, string> {
+	return BARE_LOAD_UNIT[unit === 'mm' || unit === 'm' ? 'metric' : 'inch'];
+}
+
+const BARE_NUMBER = /^(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
+
+/**
+ * A bare number in a load field means the user's own unit system, never SI: `40` over the shelf is
+ * 40 lbf/ft² to an inch user and 40 kPa to a metric one; `50` at a point is 50 lbf or 50 N. Text
+ * with a unit is left as typed.
+ */
+export function withLoadUnit(text: string, kind: LoadQuantity, unit: string): string {
+	const t = text.trim();
+	return BARE_NUMBER.test(t) ? `${t} ${bareLoadUnits(unit)[kind]}` : t;
+}

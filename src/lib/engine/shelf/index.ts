@@ -1,6 +1,11 @@
 export { analyzeInput, safely, spanOverSag } from './analyze';
 export { ShelfInputError } from './errors';
-export { deflectionLimit, type DeflectionLimit } from './limits';
+export {
+	DEFLECTION_LIMITS,
+	deflectionLimit,
+	type DeflectionLimit,
+	type NamedDeflectionLimit
+} from './limits';
 export {
 	maxSpanInput,
 	minThicknessInput,
@@ -13,6 +18,6 @@ export {
 	type MaxLoadResult,
 	type ThicknessTrial
 } from './solvers';
-export { NAMED_LIMITS, DEFAULT_SHELF_OPTIONS } from './types';
+export { DEFAULT_SHELF_OPTIONS } from './types';
 export type * from './types';
 export { geometryIssues, type GeometryView } from './validate';

@@ -51,10 +51,10 @@ export interface EdgeInput {
 	thickness: number;
 }
 
-/** The deflection limits offered by name (limits.ts says where each comes from). */
-export const NAMED_LIMITS = ['L/144', 'L/240', 'L/360', '1/16in-per-ft', '0.02in-per-ft'] as const;
-export type NamedLimit = (typeof NAMED_LIMITS)[number];
-export type LimitInput = NamedLimit | { ratio: number } | { length: number };
+/** The deflection limits offered by name (limits.ts has the one list, with each one's source). */
+export type NamedLimit = 'L/144' | '1/16in-per-ft' | 'L/240' | 'L/360';
+/** a named limit, L/n (with where it comes from when it is not the user's choice), or a length */
+export type LimitInput = NamedLimit | { ratio: number; source?: string } | { length: number };
 
 export interface ShelfOptions {
 	/** add shear deflection to bending */

@@ -163,3 +163,41 @@ export function formatLength(metres: number, format: LengthFormat = {}): string 
 	}
 	return `${sign}${fractionalInches(inches, denominator)}"`;
 }
+
+const EXACT_DENOMINATORS = [1, 2, 4, 8, 16, 32, 64, 128];
+
+/**
+ * A length written so that reading it back gives exactly the same metres, for a field the user
+ * edits: display precision never becomes input. Inch users get the exact fraction where there is
+ * one (23/32" at any precision), else a short decimal, else millimetres if those are exact (a metric
+ * sheet stays `18 mm`); millimetre users get millimetres where a few decimals are exact, else the
+ * exact fraction of an inch. Whatever has neither is written in full decimals.
+ */
+export function formatLengthExact(metres: number, unit: LengthUnit = 'frac16'): string {
+	if (!Number.isFinite(metres) || metres < 0) return formatLength(metres, { unit });
+	const exact = (text: string) => readLength(text) === metres;
+	const inches = metres / METRES_PER_INCH;
+	const fraction = () => {
+		for (const d of EXACT_DENOMINATORS) {
+			const text = `${fractionalInches(inches, d)}"`;
+			if (Math.abs(Math.round(inches * d) - inches * d) < 1e-6 && exact(text)) return text;
+		}
+		return undefined;
+	};
+	const decimals = (scaled: number, suffix: string, from: number, to: number) => {
+		for (let digits = from; digits <= to; digits++) {
+			const text = `${trimZeros(scaled.toFixed(digits))}${suffix}`;
+			if (exact(text)) return text;
+		}
+		return undefined;
+	};
+	const mm = metres * 1000;
+	const found =
+		unit === 'mm' || unit === 'm'
+			? (decimals(mm, ' mm', 0, 3) ?? fraction() ?? decimals(mm, ' mm', 4, 12))
+			: (fraction() ??
+				decimals(inches, '"', 0, 4) ??
+				decimals(mm, ' mm', 0, 3) ??
+				decimals(inches, '"', 5, 15));
+	return found ?? `${metres} m`;
+}

@@ -76,18 +76,23 @@ export function expectedFor(kind: QuantityKind): string {
 
 /** Trade shorthands mathjs does not know, and typographic marks. */
 export function normalise(text: string): string {
-	return text
-		.trim()
-		.replace(/²/g, '^2')
-		.replace(/³/g, '^3')
-		.replace(/[·×*]/g, ' ')
-		.replace(/(\d),(\d{3})/g, '$1$2')
-		.replace(/\bpsf\b/g, 'lbf/ft^2')
-		.replace(/\bplf\b/g, 'lbf/ft')
-		.replace(/\bpcf\b/g, 'lb/ft^3')
-		.replace(/\bksi\b/g, 'kip/in^2')
-		.replace(/\blbs\b/g, 'lb')
-		.replace(/\bpounds?\b/g, 'lb');
+	return (
+		text
+			.trim()
+			.replace(/²/g, '^2')
+			.replace(/³/g, '^3')
+			.replace(/[·×*]/g, ' ')
+			.replace(/(\d),(\d{3})/g, '$1$2')
+			.replace(/\bpsf\b/g, 'lbf/ft^2')
+			.replace(/\bplf\b/g, 'lbf/ft')
+			.replace(/\bpcf\b/g, 'lb/ft^3')
+			.replace(/\bksi\b/g, 'kip/in^2')
+			.replace(/\blbs\b/g, 'lb')
+			.replace(/\bpounds?\b/g, 'lb')
+			// the shop's `50#` is 50 lb; `lb/ft2` is lb/ft²
+			.replace(/(\d)\s*#/g, '$1 lb')
+			.replace(/\b(ft|in|m|mm|cm)([23])\b/g, '$1^$2')
+	);
 }
 
 /**
@@ -189,4 +194,31 @@ export function formatMoment(newtonMetres: number, f: Format<MomentUnit> = {}): 
 export function formatDensity(kgPerM3: number, f: Format<DensityUnit> = {}): string {
 	const unit = f.unit ?? 'kg/m³';
 	return formatIn(kgPerM3, DENSITY_UNITS[unit], unit, f.digits);
+}
+
+const FIELD_UNITS = {
+	force: FORCE_UNITS,
+	pressure: PRESSURE_UNITS,
+	lineLoad: LINE_LOAD_UNITS
+} as const;
+const SI_SYMBOL = { force: 'N', pressure: 'Pa', lineLoad: 'N/m' } as const;
+
+/**
+ * A force, area load or line load written for a field the user edits: in their unit, with the
+ * fewest significant digits (three at least) that read back as exactly the same SI value, so
+ * display precision never becomes input. Falls back to the SI unit when no decimal in theirs is
+ * exact.
+ */
+export function formatQuantityExact<K extends keyof typeof FIELD_UNITS>(
+	si: number,
+	kind: K,
+	unit: keyof (typeof FIELD_UNITS)[K]
+): string {
+	if (!Number.isFinite(si)) return '—';
+	const factor = (FIELD_UNITS[kind] as Record<string, number>)[unit as string];
+	for (let digits = 3; digits <= 17; digits++) {
+		const text = formatIn(si, factor, unit as string, digits);
+		if (tryParseQuantity(text, kind).ok && parseQuantity(text, kind) === si) return text;
+	}
+	return `${si} ${SI_SYMBOL[kind]}`;
 }

@@ -7,11 +7,9 @@ import { AnalysisProblem, createAnalysis, getAnalysis, updateAnalysis } from '$l
 import type { AnalysisKind } from '$lib/server/db/schema';
 import { analysisFormSchema } from '$lib/schemas/analysis-form';
 import { readForm } from '$lib/server/form-body';
+import { fieldIssues } from '$lib/schemas/issues';
 
 type Issue = { path: (string | number)[]; message: string };
-
-const clean = (path: PropertyKey[]) =>
-	path.filter((p): p is string | number => typeof p !== 'symbol');
 
 export async function saveAnalysis(
 	event: RequestEvent,
@@ -24,16 +22,13 @@ export async function saveAnalysis(
 	const projectId = event.params.id!;
 	const form = analysisFormSchema.safeParse(Object.fromEntries(await readForm(event.request)));
 	if (!form.success) {
-		const issues: Issue[] = form.error.issues.map((i) => ({
-			path: clean(i.path),
-			message: i.message
-		}));
+		const issues: Issue[] = fieldIssues(form.error);
 		return fail(400, { message: issues[0]?.message ?? 'Check the form.', issues });
 	}
 	const input = inputSchema.safeParse(form.data.input);
 	if (!input.success) {
-		const issues = input.error.issues.map((i) => ({
-			path: ['input', ...clean(i.path)],
+		const issues = fieldIssues(input.error).map((i) => ({
+			path: ['input', ...i.path],
 			message: i.message
 		}));
 		return fail(400, { message: 'Some fields need attention before saving.', issues });
