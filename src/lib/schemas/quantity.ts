@@ -67,7 +67,7 @@ export function quantityField(kind: QuantityKind, options: QuantityFieldOptions 
 				ctx.addIssue({
 					code: 'custom',
 					input,
-					message: 'At least 0.001 mm: check the unit.'
+					message: 'Too small: at least 0.001 mm. Check the unit.'
 				});
 				return z.NEVER;
 			}
