@@ -18,7 +18,7 @@ const modules = import.meta.glob<{ actions?: Record<string, Action> }>(
 );
 
 /** Actions that never read a body (a button that is its own confirmation, or sign-out). */
-const BODYLESS = new Set(['/signout default', '/invite/[token] accept', '/(app)/workshop delete']);
+const BODYLESS = new Set(['/signout default', '/invite/[token] accept']);
 
 const BAD_BODIES = [
 	{ type: 'text/plain', body: 'name=Pantry', expect: 415 },

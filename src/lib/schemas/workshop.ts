@@ -18,3 +18,8 @@ export const memberRoleSchema = z.object({
 });
 
 export const memberRemoveSchema = z.object({ userId: z.string().min(1) });
+
+export const invitationRevokeSchema = z.object({ id: z.string().min(1, 'Choose an invitation.') });
+
+/** Deleting the workshop: sent again with confirm=yes once the owner has said so. */
+export const confirmSchema = z.object({ confirm: z.literal('yes').optional().catch(undefined) });

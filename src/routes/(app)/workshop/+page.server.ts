@@ -1,25 +1,14 @@
-import { error, fail, redirect } from '@sveltejs/kit';
+import { fail, redirect } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireActor } from '$lib/server/access';
 import { sendInvitation } from '$lib/server/invitation-mail';
 import { linkOrigin, MAIL_UNAVAILABLE_MESSAGE } from '$lib/server/mail';
 import * as workshops from '$lib/server/workshops';
-import {
-	invitationSchema,
-	memberRemoveSchema,
-	memberRoleSchema,
-	workshopNameSchema
-} from '$lib/schemas/workshop';
+import { confirmSchema, invitationSchema, workshopNameSchema } from '$lib/schemas/workshop';
+import { current, memberActions } from './member-actions.server';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/form-body';
-
-function current(locals: App.Locals) {
-	const actor = requireActor(locals.actor);
-	const ws = workshops.currentWorkshop(actor);
-	if (!ws) error(404, 'You belong to no workshop yet.');
-	return { actor, ws };
-}
 
 export const load: PageServerLoad = async ({ locals }) => {
 	const { actor, ws } = current(locals);
@@ -83,27 +72,12 @@ export const actions: Actions = {
 		}
 		return message(form, `Invitation sent to ${form.data.email}.`);
 	},
-	role: async ({ locals, request }) => {
+	...memberActions,
+	// without JavaScript the first press asks again on the page (the dialog does it in the browser)
+	delete: async ({ locals, request }) => {
 		const { actor, ws } = current(locals);
-		const parsed = memberRoleSchema.safeParse(Object.fromEntries(await readForm(request)));
-		if (!parsed.success) return fail(400, { memberError: 'Choose a role.' });
-		workshops.changeMemberRole(actor, ws.id, parsed.data.userId, parsed.data.role);
-		return { memberMessage: 'Role changed.' };
-	},
-	remove: async ({ locals, request }) => {
-		const { actor, ws } = current(locals);
-		const parsed = memberRemoveSchema.safeParse(Object.fromEntries(await readForm(request)));
-		if (!parsed.success) return fail(400, { memberError: 'Choose a member.' });
-		workshops.removeMember(actor, ws.id, parsed.data.userId);
-		return { memberMessage: 'Member removed.' };
-	},
-	revoke: async ({ locals, request }) => {
-		const { actor, ws } = current(locals);
-		workshops.revokeInvitation(actor, ws.id, String((await readForm(request)).get('id') ?? ''));
-		return { memberMessage: 'Invitation withdrawn.' };
-	},
-	delete: async ({ locals }) => {
-		const { actor, ws } = current(locals);
+		const form = await superValidate(await readForm(request), zod4(confirmSchema));
+		if (form.data.confirm !== 'yes') return { confirmDelete: true };
 		workshops.deleteWorkshop(actor, ws.id);
 		redirect(303, '/projects');
 	}

@@ -1,5 +1,7 @@
 import { error, fail, redirect } from '@sveltejs/kit';
 import { z } from 'zod';
+import { superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireActor } from '$lib/server/access';
 import {
 	AnalysisProblem,
@@ -12,6 +14,8 @@ import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/form-body';
 
 const versionSchema = z.coerce.number().int().min(1);
+/** Restore: the version to bring back, and the version the page showed as current. */
+const restoreSchema = z.object({ version: versionSchema, current: versionSchema });
 
 export const load: PageServerLoad = ({ locals, params, url }) => {
 	const actor = requireActor(locals.actor);
@@ -50,13 +54,10 @@ export const load: PageServerLoad = ({ locals, params, url }) => {
 export const actions: Actions = {
 	restore: async ({ locals, params, request }) => {
 		const actor = requireActor(locals.actor);
-		const form = await readForm(request);
-		const version = versionSchema.safeParse(form.get('version'));
-		const base = versionSchema.safeParse(form.get('current'));
-		if (!version.success || !base.success)
-			return fail(400, { problem: 'Pick a version to restore.' });
+		const form = await superValidate(await readForm(request), zod4(restoreSchema));
+		if (!form.valid) return fail(400, { problem: 'Pick a version to restore.' });
 		try {
-			restoreRevision(actor, params.analysisId, version.data, base.data);
+			restoreRevision(actor, params.analysisId, form.data.version, form.data.current);
 		} catch (e) {
 			if (e instanceof AnalysisProblem) return fail(e.status, { problem: e.message });
 			throw e;
