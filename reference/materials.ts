@@ -21,14 +21,21 @@ export interface StockThickness {
 	/** effective modulus for this thickness (plywood layups), Pa; else the material's */
 	modulusAlongPa?: number;
 	modulusAcrossPa?: number;
+	/** plywood: the published stiffness across the strength axis for each construction, Pa; the
+	 * engine does not know the ply count, so `modulusAcrossPa` is the lowest of these */
+	modulusAcrossByPliesPa?: { plies: 3 | 4 | 5; pa: number }[];
 }
 
 export interface ShelfMaterial {
 	id: string;
 	name: string;
 	kind: 'solid' | 'panel';
-	/** modulus of elasticity in bending with the (face) grain along the span, Pa */
+	/** modulus of elasticity in bending with the (face) grain along the span, Pa, as published */
 	modulusAlongPa: number;
+	/** the same free of shear deflection, Pa: what a model that adds shear deflection itself starts
+	 * from. Clear-wood figures from a centre-loaded bending test include shear (Wood Handbook Table
+	 * 5-3a footnote: about 10% higher without it); panel figures are used as published. */
+	bendingOnlyModulusAlongPa: number;
 	/** with the (face) grain across the span, Pa; null for solid wood (a board is not used so) */
 	modulusAcrossPa: number | null;
 	/** modulus of rupture along / across, Pa */
@@ -41,6 +48,8 @@ export interface ShelfMaterial {
 	/** source of each figure, in the same words as the comments */
 	sources: {
 		modulus: string;
+		/** how the bending-only modulus was found */
+		bendingOnlyModulus: string;
 		rupture: string;
 		density: string;
 		shearModulus: string;
@@ -57,6 +66,19 @@ const WOOD_HANDBOOK =
 const DENSITY_FROM_SG =
 	'derived: specific gravity (Wood Handbook Table 5-3a, 12% MC; from memory where marked) × 1.12 × 1000 kg/m³ (oven-dry weight plus 12% water)';
 const SHEAR_RULE = 'G ≈ E/16, a common assumption for wood products (see REFERENCES.md)';
+
+/** Wood Handbook Table 5-3a, footnote to the modulus of elasticity: measured on a simply supported,
+ * centre-loaded beam at a span–depth ratio of 14, so the figure includes shear deflection; the modulus
+ * free of shear is about 10% higher (footnote wording as quoted in REFERENCES.md and issue 15; no
+ * stored copy of the footnote was found, so "from memory"). */
+export const HANDBOOK_SHEAR_FREE_FACTOR = 1.1;
+const SHEAR_FREE_SOURCE =
+	'Wood Handbook Table 5-3a footnote: the tabulated modulus includes shear deflection (centre-loaded beam, span–depth ratio 14); free of shear it is about 10% higher (from memory), so × 1.10';
+/** Panels: the figure is used as published, and the engine adds shear deflection on top of it (an
+ * overestimate of the sag where the published figure already includes shear: on the safe side). */
+const PANEL_AS_PUBLISHED =
+	'as published: no shear correction applied to a panel figure (errs on the safe side when the engine adds shear)';
+
 const EC5 =
 	'Eurocode 5 (EN 1995-1-1) Table 3.2, k_def; long-term sag = instant × (1 + k_def) (§2.3.2.2)';
 const SOLID_STOCK =
@@ -108,6 +130,7 @@ function solid(
 		name,
 		kind: 'solid',
 		modulusAlongPa: modulusMPa * MPa,
+		bendingOnlyModulusAlongPa: modulusMPa * MPa * HANDBOOK_SHEAR_FREE_FACTOR,
 		modulusAcrossPa: null,
 		ruptureAlongPa: ruptureKPa * 1000,
 		ruptureAcrossPa: null,
@@ -117,6 +140,7 @@ function solid(
 		thicknesses,
 		sources: {
 			...sources,
+			bendingOnlyModulus: SHEAR_FREE_SOURCE,
 			shearModulus: SHEAR_RULE,
 			creep: `${EC5}: solid timber 0.60 / 0.80 / 2.00`,
 			thicknesses: SOLID_STOCK
@@ -188,43 +212,124 @@ function modulusFromEIPerFoot(eiLbIn2PerFt: number, thicknessIn: number): number
 	return (eiLbIn2PerFt / thicknessIn ** 3) * PSI;
 }
 
-// AWC ASD/LRFD Manual Table M9.2-1 (same data as the APA Panel Design Specification), EI per foot
-// of width, strength axis parallel: 32/16 = 125,000; 40/20 = 250,000; 48/24 = 440,000 lb·in²/ft.
-// Span ratings matched to 15/32", 19/32", 23/32" (from memory).
-// Perpendicular, 48/24 5-ply: 91,500 lb·in²/ft (same table). For 32/16 and 40/20 the perpendicular
-// value is derived from the parallel one by the APA Plyform Class I ratio of I (perpendicular /
-// parallel: 1/2" 0.024/0.077, 5/8" 0.038/0.130; Peurifoy & Oberlender, Formwork for Concrete Structures).
-const PLY_15_32 = 15 / 32;
-const PLY_19_32 = 19 / 32;
-const PLY_23_32 = 23 / 32;
-const SOFTWOOD_PLY_THICKNESSES: StockThickness[] = [
-	{
-		label: '1/2" (15/32")',
-		actualM: inches(PLY_15_32),
-		modulusAlongPa: modulusFromEIPerFoot(125000, PLY_15_32),
-		modulusAcrossPa: modulusFromEIPerFoot((125000 * 0.024) / 0.077, PLY_15_32)
-	},
+/**
+ * Softwood plywood bending stiffness EI, lb·in²/ft of width, by span rating: AWC ASD/LRFD Manual
+ * Table M9.2-1 (the same data as the APA Panel Design Specification's plywood stiffness table).
+ * Parallel to the strength axis one figure; perpendicular to it one figure per construction, because
+ * a 3-ply panel has far less wood across the strength axis than a 5-ply one. The APA table's footnote
+ * (read in a stored summary of the design capacities): "5-ply applies to plywood with 5 or more
+ * layers; for 5-ply/3-layer plywood, use values for 4-ply plywood".
+ * The 48/24 row (440,000; 29,500 / 65,000 / 91,500) is the one REFERENCES.md read from a stored copy.
+ * The 32/16 and 40/20 perpendicular figures are recalled (from memory); as a check, each 3-ply figure
+ * is also worked out from its parallel figure with the 48/24 row's 3-ply share (29,500 / 440,000) and
+ * the lower of the two is used. Span ratings matched to 15/32", 19/32", 23/32" (from memory).
+ */
+const PLY_ROWS = [
+	{ label: '1/2" (15/32")', tIn: 15 / 32, parallel: 125000, perp: { 3: 8100, 4: 18000, 5: 25000 } },
 	{
 		label: '5/8" (19/32")',
-		actualM: inches(PLY_19_32),
-		modulusAlongPa: modulusFromEIPerFoot(250000, PLY_19_32),
-		modulusAcrossPa: modulusFromEIPerFoot((250000 * 0.038) / 0.13, PLY_19_32)
+		tIn: 19 / 32,
+		parallel: 250000,
+		perp: { 3: 18000, 4: 39500, 5: 56000 }
 	},
-	{
-		label: '3/4" (23/32")',
-		actualM: inches(PLY_23_32),
-		modulusAlongPa: modulusFromEIPerFoot(440000, PLY_23_32),
-		modulusAcrossPa: modulusFromEIPerFoot(91500, PLY_23_32)
-	}
-];
+	{ label: '3/4" (23/32")', tIn: 23 / 32, parallel: 440000, perp: { 3: 29500, 4: 65000, 5: 91500 } }
+] as const;
+/** 3-ply share of the parallel stiffness in the 48/24 row of Table M9.2-1 (29,500 / 440,000). */
+export const PLY_THREE_PLY_SHARE_48_24 = 29500 / 440000;
+
+const SOFTWOOD_PLY_THICKNESSES: StockThickness[] = PLY_ROWS.map((r) => {
+	const threePly = Math.min(r.perp[3], r.parallel * PLY_THREE_PLY_SHARE_48_24);
+	const byPlies = [
+		{ plies: 3 as const, pa: modulusFromEIPerFoot(threePly, r.tIn) },
+		{ plies: 4 as const, pa: modulusFromEIPerFoot(r.perp[4], r.tIn) },
+		{ plies: 5 as const, pa: modulusFromEIPerFoot(r.perp[5], r.tIn) }
+	];
+	return {
+		label: r.label,
+		actualM: inches(r.tIn),
+		modulusAlongPa: modulusFromEIPerFoot(r.parallel, r.tIn),
+		// the ply count is not known: the lowest published construction (3-ply)
+		modulusAcrossPa: Math.min(...byPlies.map((b) => b.pa)),
+		modulusAcrossByPliesPa: byPlies
+	};
+});
+/** Panel figures for a thickness off the stock list: the lowest of the stocked ones each way. */
 const SOFTWOOD_PLY_MODULUS = {
-	along: SOFTWOOD_PLY_THICKNESSES[2].modulusAlongPa!,
-	across: SOFTWOOD_PLY_THICKNESSES[2].modulusAcrossPa!
+	along: Math.min(...SOFTWOOD_PLY_THICKNESSES.map((t) => t.modulusAlongPa!)),
+	across: Math.min(...SOFTWOOD_PLY_THICKNESSES.map((t) => t.modulusAcrossPa!))
 };
 const PLY_STIFFNESS_SOURCE =
-	'AWC ASD/LRFD Manual Table M9.2-1, EI per foot of width (32/16, 40/20, 48/24), divided by t³; perpendicular 1/2" and 5/8" derived with the APA Plyform Class I ratio of I';
+	'AWC ASD/LRFD Manual Table M9.2-1 (APA Panel Design Specification data), EI per foot of width for span ratings 32/16, 40/20, 48/24, divided by t³; across the strength axis the 3-ply figure (the lowest construction: the ply count is not known); 48/24 row read from a stored copy, the 32/16 and 40/20 perpendicular figures from memory, checked against the 48/24 3-ply share and the lower used';
 const PLY_RUPTURE_SOURCE =
 	'from memory: about 40 MPa along and 20 MPa across for sheathing-grade softwood plywood (approximate)';
+
+/**
+ * Hardwood plywood, veneer core: a panel figure worked out here by the transformed section of its
+ * plies, because the figure the Architectural Woodwork Standards give is not a panel property.
+ *
+ * What the standard says (re-read in a stored copy of AWS 1st ed. 2009, §4.4.14.10.12): "Veneer
+ * core, (Douglas Fir) plywood, 1,800,000 MOE, with hardwood veneer on two sides" — the modulus of
+ * clear wood along the grain (its §4.4.14.10.13 gives solid red oak 1,820,000), while §4.4.14.10.11
+ * gives the same core without the hardwood faces 950,000. Two veneers under 1 mm thick cannot double
+ * a panel's stiffness, and in a cross-banded panel the plies across the span carry next to nothing,
+ * so the standard's figure is not used.
+ *
+ * Method (USDA FPL Research Note FPL-059, "Bending strength and stiffness of plywood", 1964: the
+ * panel's stiffness is the sum of each ply's E·I about the panel's centre; a ply across the span
+ * is given E = 0 here, a little below the Wood Handbook's E_T/E_L of about 0.05, from memory).
+ * Plies along the span: Douglas-fir, the core named by the standard, 13,400 MPa (Wood Handbook
+ * Table 5-3a, as published: shear is added by the engine on top, on the safe side).
+ * Constructions considered, both 23/32" (the ply count of a panel is not known):
+ *  - 7 plies: faces 1/42" (about 0.6 mm, from memory), five inner plies of equal thickness;
+ *  - 5 plies of equal thickness.
+ * Each way the lower of the two is used (7-ply along, 5-ply across).
+ */
+export interface Ply {
+	/** thickness, in any unit shared by the stack */
+	t: number;
+	/** true where the ply's grain runs along the span */
+	along: boolean;
+}
+/** Share of a solid panel's stiffness that a stack of plies keeps when only the plies along the
+ * span carry bending (FPL-059 method with E = 0 across): Σ I of the along plies / (t³/12). */
+export function plyStackStiffnessShare(plies: readonly Ply[]): number {
+	const total = plies.reduce((a, p) => a + p.t, 0);
+	let z = -total / 2;
+	let sum = 0;
+	for (const p of plies) {
+		const top = z;
+		const bottom = z + p.t;
+		if (p.along) sum += (bottom ** 3 - top ** 3) / 3;
+		z = bottom;
+	}
+	return sum / (total ** 3 / 12);
+}
+const flip = (plies: readonly Ply[]): Ply[] => plies.map((p) => ({ ...p, along: !p.along }));
+const VENEER_CORE_T_IN = 23 / 32;
+const FACE_IN = 1 / 42;
+const innerSeven = (VENEER_CORE_T_IN - 2 * FACE_IN) / 5;
+/** 7 plies: face, then alternating across / along, face. */
+export const VENEER_CORE_SEVEN_PLY: Ply[] = [
+	{ t: FACE_IN, along: true },
+	...[false, true, false, true, false].map((along) => ({ t: innerSeven, along })),
+	{ t: FACE_IN, along: true }
+];
+/** 5 equal plies: along, across, along, across, along. */
+export const VENEER_CORE_FIVE_PLY: Ply[] = [true, false, true, false, true].map((along) => ({
+	t: VENEER_CORE_T_IN / 5,
+	along
+}));
+const VENEER_CORE_PLY_MODULUS = 13400 * MPa; // Wood Handbook Table 5-3a, coast Douglas-fir
+export const VENEER_CORE_SHARE = {
+	along: Math.min(
+		plyStackStiffnessShare(VENEER_CORE_SEVEN_PLY),
+		plyStackStiffnessShare(VENEER_CORE_FIVE_PLY)
+	),
+	across: Math.min(
+		plyStackStiffnessShare(flip(VENEER_CORE_SEVEN_PLY)),
+		plyStackStiffnessShare(flip(VENEER_CORE_FIVE_PLY))
+	)
+};
 
 export const plywoods: ShelfMaterial[] = [
 	{
@@ -232,6 +337,7 @@ export const plywoods: ShelfMaterial[] = [
 		name: 'Softwood plywood (sheathing grade)',
 		kind: 'panel',
 		modulusAlongPa: SOFTWOOD_PLY_MODULUS.along,
+		bendingOnlyModulusAlongPa: SOFTWOOD_PLY_MODULUS.along,
 		modulusAcrossPa: SOFTWOOD_PLY_MODULUS.across,
 		ruptureAlongPa: 40 * MPa, // from memory, approximate
 		ruptureAcrossPa: 20 * MPa, // from memory, approximate
@@ -241,6 +347,8 @@ export const plywoods: ShelfMaterial[] = [
 		thicknesses: SOFTWOOD_PLY_THICKNESSES,
 		sources: {
 			modulus: PLY_STIFFNESS_SOURCE,
+			bendingOnlyModulus:
+				'AWC / APA panel EI is a bending stiffness; shear deflection is computed separately, as the engine does',
 			rupture: PLY_RUPTURE_SOURCE,
 			density: 'from memory: about 500 kg/m³ (31 lb/ft³)',
 			shearModulus: SHEAR_RULE,
@@ -254,6 +362,7 @@ export const plywoods: ShelfMaterial[] = [
 		name: 'MDO (medium density overlay plywood)',
 		kind: 'panel',
 		modulusAlongPa: SOFTWOOD_PLY_MODULUS.along,
+		bendingOnlyModulusAlongPa: SOFTWOOD_PLY_MODULUS.along,
 		modulusAcrossPa: SOFTWOOD_PLY_MODULUS.across,
 		ruptureAlongPa: 40 * MPa, // from memory, approximate (as softwood plywood)
 		ruptureAcrossPa: 20 * MPa, // from memory, approximate
@@ -263,6 +372,7 @@ export const plywoods: ShelfMaterial[] = [
 		thicknesses: SOFTWOOD_PLY_THICKNESSES,
 		sources: {
 			modulus: `no separate table was found: treated as softwood plywood of the same construction (${PLY_STIFFNESS_SOURCE})`,
+			bendingOnlyModulus: 'as softwood plywood: a bending stiffness, shear computed separately',
 			rupture: PLY_RUPTURE_SOURCE,
 			density: 'from memory: about 560 kg/m³',
 			shearModulus: SHEAR_RULE,
@@ -272,16 +382,14 @@ export const plywoods: ShelfMaterial[] = [
 		note: 'The overlay adds little stiffness; the panel is computed as plywood of its construction.'
 	},
 	(() => {
-		// Architectural Woodwork Standards (2009) §4.4.14.10.12: veneer-core (Douglas-fir) plywood
-		// with hardwood veneer on two sides, MOE 1,800,000 psi.
-		const along = 1.8e6 * PSI;
-		// derived: across = along × APA Plyform Class I I-ratio for 3/4" (0.092 / 0.199)
-		const across = (along * 0.092) / 0.199;
+		const along = VENEER_CORE_PLY_MODULUS * VENEER_CORE_SHARE.along;
+		const across = VENEER_CORE_PLY_MODULUS * VENEER_CORE_SHARE.across;
 		return {
 			id: 'hardwood-plywood-veneer-core',
 			name: 'Hardwood plywood, veneer core',
 			kind: 'panel',
 			modulusAlongPa: along,
+			bendingOnlyModulusAlongPa: along,
 			modulusAcrossPa: across,
 			ruptureAlongPa: 45 * MPa, // from memory, approximate
 			ruptureAcrossPa: 25 * MPa, // from memory, approximate
@@ -296,8 +404,8 @@ export const plywoods: ShelfMaterial[] = [
 				stock('1"', 1)
 			],
 			sources: {
-				modulus:
-					'Architectural Woodwork Standards (AWI/AWMAC/WI, 2009) §4.4.14.10.12: 1,800,000 psi; across derived with the APA Plyform Class I ratio of I for 3/4" (0.092/0.199)',
+				modulus: `derived: transformed section of the plies (USDA FPL Research Note FPL-059 method), plies along the span Douglas-fir 13,400 MPa (Wood Handbook Table 5-3a), plies across taken as carrying nothing; the lower of a 7-ply (1/42" faces) and a 5-ply (equal plies) 23/32" panel each way: ${(100 * VENEER_CORE_SHARE.along).toFixed(0)}% along, ${(100 * VENEER_CORE_SHARE.across).toFixed(0)}% across. The Architectural Woodwork Standards (2009) §4.4.14.10.12 figure of 1,800,000 psi is the clear-wood modulus, not a panel figure, and is not used`,
+				bendingOnlyModulus: PANEL_AS_PUBLISHED,
 				rupture: 'from memory: about 45 MPa along, 25 MPa across (approximate)',
 				density: 'from memory: about 600 kg/m³',
 				shearModulus: SHEAR_RULE,
@@ -323,6 +431,7 @@ export const plywoods: ShelfMaterial[] = [
 			name: 'Hardwood plywood, MDF core',
 			kind: 'panel',
 			modulusAlongPa: along,
+			bendingOnlyModulusAlongPa: along,
 			modulusAcrossPa: across,
 			ruptureAlongPa: 34.5 * MPa, // the core's (ANSI A208.2 grade 155, from memory); faces ignored
 			ruptureAcrossPa: 34.5 * MPa,
@@ -333,6 +442,7 @@ export const plywoods: ShelfMaterial[] = [
 			sources: {
 				modulus:
 					'derived: transformed section of an MDF core (ANSI A208.2 grade 155, 3,450 MPa, from memory) and two 0.6 mm red oak faces (Wood Handbook Table 5-3a; E_T/E_L 0.082 from Table 5-1, from memory)',
+				bendingOnlyModulus: PANEL_AS_PUBLISHED,
 				rupture: 'the MDF core alone: ANSI A208.2 grade 155, 34.5 MPa (from memory)',
 				density: 'from memory: as MDF, about 750 kg/m³',
 				shearModulus: `${SHEAR_RULE}, of the core`,
@@ -346,6 +456,7 @@ export const plywoods: ShelfMaterial[] = [
 		name: 'Birch multi-ply (all-birch plywood, many thin plies)',
 		kind: 'panel',
 		modulusAlongPa: 8600 * MPa, // from memory: 18 mm, 13 plies, bending with the face grain
+		bendingOnlyModulusAlongPa: 8600 * MPa,
 		modulusAcrossPa: 6200 * MPa, // from memory: same panel across the face grain
 		ruptureAlongPa: 60 * MPa, // from memory, approximate
 		ruptureAcrossPa: 45 * MPa, // from memory, approximate
@@ -355,6 +466,7 @@ export const plywoods: ShelfMaterial[] = [
 		thicknesses: [stock('12 mm', 12 / 25.4), stock('15 mm', 15 / 25.4), stock('18 mm', 18 / 25.4)],
 		sources: {
 			modulus: 'from memory: about 8,600 MPa along and 6,200 MPa across for 18 mm (13 plies)',
+			bendingOnlyModulus: PANEL_AS_PUBLISHED,
 			rupture: 'from memory: about 60 MPa along, 45 MPa across (approximate)',
 			density: 'from memory: about 680 kg/m³',
 			shearModulus: SHEAR_RULE,
@@ -367,14 +479,23 @@ export const plywoods: ShelfMaterial[] = [
 // --- fibre and particle panels ---------------------------------------------------------------
 
 function isotropicPanel(
-	m: Omit<ShelfMaterial, 'kind' | 'modulusAcrossPa' | 'ruptureAcrossPa' | 'shearModulusPa'> & {
-		shearSource?: string;
+	m: Omit<
+		ShelfMaterial,
+		| 'kind'
+		| 'modulusAcrossPa'
+		| 'ruptureAcrossPa'
+		| 'shearModulusPa'
+		| 'bendingOnlyModulusAlongPa'
+		| 'sources'
+	> & {
+		sources: Omit<ShelfMaterial['sources'], 'bendingOnlyModulus'>;
 	}
 ): ShelfMaterial {
-	const { shearSource: _s, ...rest } = m;
 	return {
-		...rest,
+		...m,
+		sources: { ...m.sources, bendingOnlyModulus: PANEL_AS_PUBLISHED },
 		kind: 'panel',
+		bendingOnlyModulusAlongPa: m.modulusAlongPa,
 		modulusAcrossPa: m.modulusAlongPa, // no grain: the same both ways
 		ruptureAcrossPa: m.ruptureAlongPa,
 		shearModulusPa: m.modulusAlongPa / 16 // G ≈ E/16, common assumption

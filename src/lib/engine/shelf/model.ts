@@ -25,6 +25,8 @@ export interface ResolvedMaterial {
 	name: string;
 	kind: 'solid' | 'panel' | 'custom';
 	modulusAlongPa: number;
+	/** free of shear deflection: the start when the engine adds shear itself (see reference/materials) */
+	bendingOnlyModulusAlongPa: number;
 	modulusAcrossPa: number | null;
 	ruptureAlongPa: number;
 	ruptureAcrossPa: number | null;
@@ -76,6 +78,8 @@ export function resolveMaterial(
 		name: material.name,
 		kind: 'custom',
 		modulusAlongPa: material.modulus,
+		// a user's own figure is taken as given, with or without shear added
+		bendingOnlyModulusAlongPa: material.modulus,
 		modulusAcrossPa: material.modulusAcross ?? material.modulus,
 		ruptureAlongPa: material.rupture,
 		ruptureAcrossPa: material.rupture,
@@ -109,6 +113,16 @@ function kdefFor(
 	return Math.max(...known);
 }
 
+/**
+ * The modulus along the grain the section is built with. When the engine adds shear deflection
+ * itself it starts from the bending-only modulus (clear-wood figures of the Wood Handbook's Table
+ * 5-3a include shear: counting it again would count it twice); without shear it uses the
+ * published figure, which already carries it.
+ */
+function alongModulus(m: ResolvedMaterial, input: ShelfInput): number {
+	return input.options.shearDeflection ? m.bendingOnlyModulusAlongPa : m.modulusAlongPa;
+}
+
 function edgePart(
 	edge: EdgeInput,
 	index: number,
@@ -126,7 +140,7 @@ function edgePart(
 		height: edge.height,
 		top,
 		// strips run with their grain along the shelf
-		modulusPa: m.modulusAlongPa,
+		modulusPa: alongModulus(m, input),
 		shearModulusPa: m.shearModulusPa,
 		densityKgM3: m.densityKgM3,
 		rupturePa: m.ruptureAlongPa,
@@ -150,7 +164,7 @@ export function buildModel(input: ShelfInput): ShelfModel {
 	const along = input.grain === 'along';
 	const stock = stockAt(panel, input.thickness);
 	const modulus = along
-		? (stock?.modulusAlongPa ?? panel.modulusAlongPa)
+		? (stock?.modulusAlongPa ?? alongModulus(panel, input))
 		: (stock?.modulusAcrossPa ?? panel.modulusAcrossPa!);
 	const panelPart: SectionPart = {
 		name: 'panel',

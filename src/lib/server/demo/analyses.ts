@@ -7,6 +7,7 @@ import { defaultWall, toInput } from '../../wall-designer/draft';
 
 const books = [{ kind: 'area', pressure: '40 lbf/ft^2' }];
 const oakNosing = { side: 'front', material: 'red-oak', height: '1 1/2"', thickness: '3/4"' };
+const caseNosing = { material: 'red-oak', height: '1 1/2"', thickness: '3/4"' };
 
 const libraryShelf = {
 	span: '35 1/2"',
@@ -47,10 +48,11 @@ const teacherCabinet = {
 	depth: '16"',
 	sides: { material: 'hardwood-plywood-veneer-core', thickness: '3/4"' },
 	back: { material: 'hardwood-plywood-veneer-core', thickness: '1/4"' },
+	// oak nosings: a bare 3/4" veneer-core plywood shelf over the 34 1/2" opening sags past L/144
 	shelves: [
-		{ height: '16"', kind: 'fixed', joint: 'pocket-screw', loads: books },
-		{ height: '36"', kind: 'adjustable', loads: books },
-		{ height: '56"', kind: 'adjustable', loads: books }
+		{ height: '16"', kind: 'fixed', joint: 'pocket-screw', loads: books, nosing: caseNosing },
+		{ height: '36"', kind: 'adjustable', loads: books, nosing: caseNosing },
+		{ height: '56"', kind: 'adjustable', loads: books, nosing: caseNosing }
 	],
 	anchoring: { kind: 'bracket', intoStuds: true }
 };
