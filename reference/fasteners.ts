@@ -109,6 +109,22 @@ export const POCKET_FIRST_HOLE_M = 0.0508;
 export const POCKET_MAX_SPACING_M = 0.1524;
 export const POCKET_SCREW_GAUGE = 8;
 
+/** Diameter of a pocket's bore (the step drill's larger part), 3/8" (common practice, no source).
+ * Two pockets closer than this, centre to centre, would run into each other. */
+export const POCKET_BORE_DIAMETER_M = 0.375 * 0.0254;
+
+/**
+ * Least spacing of laterally loaded screws of outer diameter d, along the grain, without
+ * predrilled holes: d < 5 mm (5 + 5|cos α|)·d, so 10·d at α = 0; d ≥ 5 mm (5 + 7|cos α|)·d, so
+ * 12·d. EN 1995-1-1:2004 (Eurocode 5) Table 8.2, nails (§8.7.1: screws of d ≤ 6 mm follow the nail
+ * rules), read in a stored copy of LVL Handbook Europe (2025) Table 5.1, which reproduces it. The
+ * largest spacing of the table's rows for these sizes is used (cautious: it holds whatever the grain
+ * direction; predrilled holes allow less). Axially loaded screws need 7·d (EC5 Table 8.6, same copy).
+ */
+export function screwMinSpacingM(diameterM: number): number {
+	return (diameterM < 0.005 ? 10 : 12) * diameterM;
+}
+
 /** Pocket screw length by stock thickness (common practice, no source): 1-1/4" in 3/4" stock is the
  * usual pairing (REFERENCES.md). Rows: stock up to `maxStockIn` takes `screwIn`. */
 export const POCKET_SCREW_LENGTHS = [

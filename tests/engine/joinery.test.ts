@@ -115,7 +115,7 @@ describe('biscuits (joiner guidance and the published joint tests)', () => {
 			expect.closeTo(235.75, 6)
 		]);
 		expect(p.description).toContain('#20');
-		const long = spacedAlong(1.2, 0.05, 0.15);
+		const long = spacedAlong(1.2, 0.05, 0.15, 0.062);
 		for (let i = 1; i < long.length; i++)
 			expect(long[i] - long[i - 1]).toBeLessThanOrEqual(0.15 + 1e-12);
 		expect(long[0]).toBeCloseTo(0.05, 12);
@@ -272,5 +272,68 @@ describe('requests and errors', () => {
 			expect(paths).toContain('endPiece.material');
 		}
 		expect(() => planJointSI(shelfJoint({ lengthM: -1 }))).toThrow(/lengthM/);
+	});
+});
+
+describe('fasteners that fit the joint (issue 15 item 9)', () => {
+	it('a 5-1/2" rail takes one #20 biscuit in the middle: two would overlap', () => {
+		// 5-1/2" = 139.7 mm. Ends at 50 mm (Turk J Agric For 28(5), 2004) leave 39.7 mm between them,
+		// less than a #20 slot (56 mm biscuit + 6 mm overrun = 62 mm): one biscuit at 69.85 mm.
+		const p = planJointSI(shelfJoint({ lengthM: 5.5 * IN }));
+		expect(p.count).toBe(1);
+		expect(p.positions[0].alongM * 1000).toBeCloseTo(69.85, 6);
+		expect(p.spec.minSpacingM).toBeCloseTo(0.062, 12);
+		// two fit from 2·50 + 62 = 162 mm on, 62 mm apart
+		const two = planJointSI(shelfJoint({ lengthM: 0.162 }));
+		expect(two.positions.map((x) => x.alongM * 1000)).toEqual([
+			expect.closeTo(50, 6),
+			expect.closeTo(112, 6)
+		]);
+	});
+
+	it('capacity does not double for a hundredth of a millimetre more joint', () => {
+		// just past 2 × 50 mm the joint still takes one biscuit, so the tested moment is one biscuit's
+		const at = (l: number) => planJointSI(shelfJoint({ lengthM: l, demand: { momentNM: 1 } }));
+		expect(at(0.1).count).toBe(1);
+		expect(at(0.10001).count).toBe(1);
+		expect(at(0.10001).checks[0].design).toBeCloseTo(at(0.1).checks[0].design, 12);
+	});
+
+	it('pocket screws in a joint just over 4" sit a quarter in from each end, not 1/16" apart', () => {
+		// 4-1/16": the old rule put them 2" from each end, 1/16" apart; now L/4 = 1.015625" and
+		// 3L/4 = 3.046875", 2.03" apart. From 8" on the first hole is 2" in (common practice).
+		expect(pocketPlaces(4.0625 * IN).map((x) => x / IN)).toEqual([
+			expect.closeTo(1.015625, 9),
+			expect.closeTo(3.046875, 9)
+		]);
+		expect(pocketPlaces(8 * IN).map((x) => x / IN)).toEqual([
+			expect.closeTo(2, 9),
+			expect.closeTo(6, 9)
+		]);
+	});
+
+	it('through screws keep 10·d apart (EN 1995-1-1 Table 8.2): one in the middle when two do not fit', () => {
+		// #8, d = 0.164" (4.17 mm < 5 mm): least spacing 10·d = 1.64". Into solid wood the first screw
+		// is 2" in, so two need 2 + 2 + 1.64 = 5.64"; a 5" rail gets one, at 2-1/2".
+		const screw = (l: number) =>
+			planJointSI(
+				shelfJoint({
+					fastener: 'screw',
+					lengthM: l * IN,
+					endPiece: { material: 'red-oak', thicknessM: 0.75 * IN }
+				})
+			);
+		expect(screw(5).positions.map((x) => x.alongM / IN)).toEqual([expect.closeTo(2.5, 9)]);
+		expect(screw(5.64 + 1e-6).count).toBe(2);
+		expect(Number(screw(5).spec.minSpacingM) / IN).toBeCloseTo(1.64, 9);
+	});
+
+	it('a count asked for is cut to what fits, and says so', () => {
+		// 4" of joint holds floor(101.6 / 62) = 1 #20 slot
+		const p = planJointSI(shelfJoint({ lengthM: 4 * IN, options: { count: 3 } }));
+		expect(p.count).toBe(1);
+		expect(p.warnings.join(' ')).toContain(
+			'3 biscuit slots were asked for, but only one biscuit slot fits this joint without overlapping: 1 planned.'
+		);
 	});
 });

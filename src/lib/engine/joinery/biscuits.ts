@@ -12,7 +12,7 @@ import {
 } from '../../../../reference/fasteners';
 import type { ResolvedStock } from './capacity';
 import { capacityCheck } from './checks';
-import { evenlyAlong, spacedAlong } from './layout';
+import { cappedCountWarning, countThatFits, evenlyAlong, spacedAlong } from './layout';
 import type { FastenerPart, PlanContext } from './part';
 import type { FastenerPosition } from './types';
 import { inches, metres } from './units';
@@ -82,11 +82,17 @@ export function planBiscuits(ctx: PlanContext): FastenerPart {
 	if (rows === 2)
 		notes.push('Thick stock: two rows of biscuits, at a third and two thirds of the thickness.');
 
+	// slots never overlap: centres at least one slot length apart
+	const slotM = b.lengthMm * MM + SLOT_OVERRUN_M;
+	const asked = req.options?.count;
+	const fixed = asked ? countThatFits(req.lengthM, asked, slotM) : 0;
+	if (fits && asked)
+		warnings.push(...cappedCountWarning(asked, fixed, 'biscuit slot', 'biscuit slots'));
 	const along = !fits
 		? []
-		: req.options?.count
-			? evenlyAlong(req.lengthM, req.options.count)
-			: spacedAlong(req.lengthM, BISCUIT_END_DISTANCE_M, BISCUIT_MAX_SPACING_M);
+		: asked
+			? evenlyAlong(req.lengthM, fixed)
+			: spacedAlong(req.lengthM, BISCUIT_END_DISTANCE_M, BISCUIT_MAX_SPACING_M, slotM);
 	const positions: FastenerPosition[] = along.flatMap((alongM) =>
 		across.map((acrossM, row) => ({ alongM, acrossM, row }))
 	);
@@ -120,7 +126,8 @@ export function planBiscuits(ctx: PlanContext): FastenerPart {
 			slotDepthM: slotDepthM(b.widthMm),
 			rows,
 			endDistanceM: BISCUIT_END_DISTANCE_M,
-			maxSpacingM: BISCUIT_MAX_SPACING_M
+			maxSpacingM: BISCUIT_MAX_SPACING_M,
+			minSpacingM: slotM
 		},
 		perFastener: { withdrawalN: null, lateralN: null, momentNM: count ? design / count : 0 },
 		checks,

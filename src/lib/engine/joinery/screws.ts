@@ -1,5 +1,6 @@
 import {
 	PANEL_EDGE_SCREW_CORNER_DISTANCE_M,
+	POCKET_BORE_DIAMETER_M,
 	POCKET_FIRST_HOLE_M,
 	POCKET_IN_PIECE_PER_STOCK,
 	POCKET_MAX_SPACING_M,
@@ -9,21 +10,25 @@ import {
 	THROUGH_SCREW_GAUGE,
 	END_GRAIN_LATERAL_FACTOR,
 	screwBendingYieldPsi,
+	screwMinSpacingM,
 	screwShankDiameterIn
 } from '../../../../reference/fasteners';
 import { screwLateral, screwWithdrawal, type Grain, type ResolvedStock } from './capacity';
 import { capacityCheck } from './checks';
-import { evenlyAlong, spacedAlong } from './layout';
+import { cappedCountWarning, countThatFits, evenlyAlong, spacedAlong } from './layout';
 import { inchLabel, midRow, momentArmM, type FastenerPart, type PlanContext } from './part';
 import type { CapacityCheck } from './types';
 import { inches, metres } from './units';
 
 /** Common practice, no source: first pocket 2" from each edge, then every 6" at most; a joint under
- * 2-1/2" takes one screw, up to 4" two. The count never falls as the joint gets longer. */
+ * 2-1/2" takes one screw. Between 2-1/2" and 8" the two pockets sit a quarter of the joint in from
+ * each end (so they move apart smoothly as the joint grows, never 2" from ends that nearly meet);
+ * from 8" on, 2" in. No two pockets closer than a pocket's bore. The count never falls as the joint
+ * gets longer. */
 export function pocketPlaces(lengthM: number): number[] {
 	if (lengthM < metres(2.5)) return [lengthM / 2];
-	if (lengthM <= 2 * POCKET_FIRST_HOLE_M) return [lengthM / 4, (3 * lengthM) / 4];
-	return spacedAlong(lengthM, POCKET_FIRST_HOLE_M, POCKET_MAX_SPACING_M);
+	const endM = Math.min(POCKET_FIRST_HOLE_M, lengthM / 4);
+	return spacedAlong(lengthM, endM, POCKET_MAX_SPACING_M, POCKET_BORE_DIAMETER_M);
 }
 
 /** Screw length for the pocketed stock (common practice, no source). */
@@ -80,9 +85,10 @@ export function planPocketScrews(ctx: PlanContext): FastenerPart {
 	if (penetrationM < metres(0.375))
 		warnings.push('Less than 3/8" of thread bites the receiving piece.');
 
-	const along = req.options?.count
-		? evenlyAlong(req.lengthM, req.options.count)
-		: pocketPlaces(req.lengthM);
+	const asked = req.options?.count;
+	const fixed = asked ? countThatFits(req.lengthM, asked, POCKET_BORE_DIAMETER_M) : 0;
+	if (asked) warnings.push(...cappedCountWarning(asked, fixed, 'pocket', 'pockets'));
+	const along = asked ? evenlyAlong(req.lengthM, fixed) : pocketPlaces(req.lengthM);
 	const count = along.length;
 	const grain: Grain = solidGrain(face, 'side', intoEdge ? 'panel-edge' : 'panel-face');
 	const w = screwWithdrawal(face, grain, diameterM, penetrationM);
@@ -113,7 +119,8 @@ export function planPocketScrews(ctx: PlanContext): FastenerPart {
 			thread,
 			penetrationM,
 			firstHoleM: POCKET_FIRST_HOLE_M,
-			maxSpacingM: POCKET_MAX_SPACING_M
+			maxSpacingM: POCKET_MAX_SPACING_M,
+			minSpacingM: POCKET_BORE_DIAMETER_M
 		},
 		perFastener: { withdrawalN: w.designN, lateralN: lat.designN, momentNM: null },
 		checks: screwChecks(ctx, count, w, lat),
@@ -132,9 +139,13 @@ export function planThroughScrews(ctx: PlanContext): FastenerPart {
 		req.options?.screwLengthM ?? req.facePiece.thicknessM + metres(THROUGH_SCREW_EMBED_IN);
 	const penetrationM = Math.max(0, lengthM - req.facePiece.thicknessM);
 	const firstM = end.isPanel ? PANEL_EDGE_SCREW_CORNER_DISTANCE_M : POCKET_FIRST_HOLE_M;
-	const along = req.options?.count
-		? evenlyAlong(req.lengthM, req.options.count)
-		: spacedAlong(req.lengthM, firstM, POCKET_MAX_SPACING_M);
+	const minM = screwMinSpacingM(diameterM); // EN 1995-1-1 Table 8.2
+	const asked = req.options?.count;
+	const fixed = asked ? countThatFits(req.lengthM, asked, minM) : 0;
+	if (asked) warnings.push(...cappedCountWarning(asked, fixed, 'screw', 'screws'));
+	const along = asked
+		? evenlyAlong(req.lengthM, fixed)
+		: spacedAlong(req.lengthM, firstM, POCKET_MAX_SPACING_M, minM);
 	const count = along.length;
 	const grain: Grain = solidGrain(end, 'end', 'panel-edge');
 	const w = screwWithdrawal(end, grain, diameterM, penetrationM);
@@ -160,7 +171,15 @@ export function planThroughScrews(ctx: PlanContext): FastenerPart {
 		description: `screw #${gauge} × ${inchLabel(inches(lengthM))} through the side`,
 		count,
 		positions: midRow(along, req.endPiece.thicknessM),
-		spec: { gauge, diameterM, lengthM, penetrationM, firstM, maxSpacingM: POCKET_MAX_SPACING_M },
+		spec: {
+			gauge,
+			diameterM,
+			lengthM,
+			penetrationM,
+			firstM,
+			maxSpacingM: POCKET_MAX_SPACING_M,
+			minSpacingM: minM
+		},
 		perFastener: { withdrawalN: w.designN, lateralN: lat.designN, momentNM: null },
 		checks: screwChecks(ctx, count, w, lat),
 		notes: [],

@@ -19,20 +19,26 @@ const PIN_INSET_M = 0.037;
 export function planShelfPins(ctx: PlanContext): FastenerPart {
 	const { req, face } = ctx;
 	const d = req.options?.pinDiameterM ?? SHELF_PIN_DIAMETER_M;
-	const count = req.options?.count ?? SHELF_PINS_PER_END;
+	const asked = req.options?.count ?? SHELF_PINS_PER_END;
+	// in a shelf too shallow for the usual inset the pins sit a quarter of its depth in; no two
+	// holes closer than a hole's diameter (they would run into each other)
+	const inset = Math.min(PIN_INSET_M, req.lengthM / 4);
+	const inner = req.lengthM - 2 * inset;
+	const count = asked === 1 ? 1 : Math.max(1, Math.min(asked, 1 + Math.floor(inner / d)));
 	const along =
 		count === 1
 			? [req.lengthM / 2]
-			: Array.from(
-					{ length: count },
-					(_, i) => PIN_INSET_M + (i * (req.lengthM - 2 * PIN_INSET_M)) / (count - 1)
-				);
+			: Array.from({ length: count }, (_, i) => inset + (i * inner) / (count - 1));
 	const embedM = Math.min(SHELF_PIN_EMBED_M, req.facePiece.thicknessM * 0.6);
 	const rd = reductionTermRd(inches(d));
 	const perPinLb = (dowelBearingPsi(face.specificGravity) * inches(d) * inches(embedM)) / rd;
 	const perPinN = perPinLb * N_PER_LBF * LOAD_DURATION_PERMANENT;
 	const loadPerPinN = ctx.shearN / count;
 	const warnings: string[] = [];
+	if (count < asked)
+		warnings.push(
+			`${asked} pins were asked for, but only ${count} holes fit this depth without running into each other.`
+		);
 	if (req.lengthM < 2 * PIN_INSET_M + 0.05)
 		warnings.push('The shelf is too shallow for two pins at the usual inset.');
 	return {
