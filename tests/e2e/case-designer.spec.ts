@@ -8,8 +8,8 @@ import { signIn } from './support/auth';
 
 const EDITOR = 'tomas@quillfeather.test';
 const VIEWER = 'dana@whitlock-home.test';
-// 3/4" in metres: 0.75 × 0.0254 m (the inch is exactly 25.4 mm by definition)
-const THREE_QUARTERS_M = 0.01905;
+// 1" in metres (the inch is exactly 25.4 mm by definition)
+const ONE_INCH_M = 0.0254;
 
 async function firstProject(page: Page) {
 	await page.goto('/projects');
@@ -36,18 +36,22 @@ test('a case with a failing shelf is fixed by a suggestion, saved and reloaded',
 	await signIn(page, EDITOR);
 	const project = await firstProject(page);
 	await page.goto(`${project}/case/new`);
-	await expect(elevation(page)).toContainText('shelf 3: passes');
+	// bare 3/4" veneer-core hardwood plywood over the 34 1/2" openings sags past L/144 under
+	// 40 lbf/ft² with the ply-by-ply panel figure of reference/materials.ts. Worked out from the
+	// 36" shelf of tests/unit/workbench/shelf-form.test.ts (1.92 × the allowed sag): sag over
+	// allowed goes as span³ for the same stock and pressure, 1.92 × (34.5 / 36)³ = 1.69, 69% over
+	await expect(elevation(page)).toContainText('shelf 3: fails, over by 69%');
 
-	// a 1/2" shelf over the 34 1/2" opening sags past L/144 under 40 lbf/ft²
+	// a 1/2" shelf over the 34 1/2" opening sags further past L/144
 	await shelfThickness(page, 3).fill('1/2');
 	await expect(elevation(page)).toContainText(/shelf 3: fails, over by \d+%/);
 	await expect(page.getByRole('status').filter({ hasText: 'checks fail' })).toBeVisible();
 
-	// the engine's first fix for it: stock that is sold thicker
+	// the engine's fix for that shelf: stock that is sold thicker (1", the next that passes)
 	await page.getByRole('button', { name: /^Make shelf 3 .* thick$/ }).click();
 	await expect(elevation(page)).toContainText(/shelf 3: passes, \d+% to spare/);
-	await expect(elevation(page)).not.toContainText('fails');
-	await expect(shelfThickness(page, 3)).toHaveValue('3/4"');
+	await expect(elevation(page)).toContainText('shelf 1: fails, over by 69%');
+	await expect(shelfThickness(page, 3)).toHaveValue('1"');
 
 	await page.locator('#analysis-name').fill('Library bookcase, left');
 	await page.getByRole('button', { name: 'Save in the project' }).click();
@@ -56,7 +60,7 @@ test('a case with a failing shelf is fixed by a suggestion, saved and reloaded',
 
 	await page.reload();
 	await expect(page.getByRole('heading', { level: 1 })).toHaveText('Library bookcase, left');
-	await expect(shelfThickness(page, 3)).toHaveValue('3/4"');
+	await expect(shelfThickness(page, 3)).toHaveValue('1"');
 	await expect(elevation(page)).toContainText(/shelf 3: passes/);
 
 	// what was stored: the fixed design, recomputed by the server
@@ -64,9 +68,10 @@ test('a case with a failing shelf is fixed by a suggestion, saved and reloaded',
 	expect(stored.ok()).toBe(true);
 	const body = await stored.json();
 	expect(body.kind).toBe('case');
-	expect(body.input.shelves[2].thickness).toBeCloseTo(THREE_QUARTERS_M, 9);
+	expect(body.input.shelves[2].thickness).toBeCloseTo(ONE_INCH_M, 9);
 	expect(body.input.shelves).toHaveLength(4);
-	expect(body.pass).toBe(true);
+	// the other three bare 3/4" shelves still fail
+	expect(body.pass).toBe(false);
 
 	// a client reads it: no save, no fixes to apply, no inputs to type into
 	const client = await browser.newPage();

@@ -36,7 +36,11 @@ test('a builder checks a span, shortens it until it passes, saves and reloads it
 	await signIn(page, EDITOR);
 	const project = await firstProject(page);
 	await page.goto(`${project}/shelf/new`);
-	await expect(answer(page)).toContainText('Passes.');
+	// the default 36" shelf of 3/4" veneer-core hardwood plywood under 40 lbf/ft² sags about 0.48"
+	// after a year against 1/4" allowed (92% over; worked out by hand in
+	// tests/unit/workbench/shelf-form.test.ts from the ply-by-ply panel figure in reference/)
+	await expect(answer(page)).toContainText('Does not pass.');
+	await expect(answer(page)).toContainText('92% too much sag');
 
 	await page.getByLabel('Shelf material').selectOption('mdf');
 	await page.getByLabel('Span between supports', { exact: true }).fill('24');
