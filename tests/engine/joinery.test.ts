@@ -195,7 +195,9 @@ describe('screws through the side, shelf pins and a dado', () => {
 	});
 
 	it('a dado in a solid side: bearing stress = reaction / (depth × length)', () => {
-		// 400 N over 1/4" × 11-1/4" = 0.00635 · 0.28575 m² → 220,443 Pa; white oak 7.4 MPa (from memory)
+		// 400 N over 1/4" × 11-1/4" = 0.00635 · 0.28575 m² → 220,443 Pa; white oak 1,070 psi
+		// = 1070 × 6894.757 = 7,377,390 Pa (Wood Handbook Table 5-3a, 12% MC, read in a stored
+		// reprint; was 7.4 MPa from memory)
 		const p = planJointSI(
 			shelfJoint({
 				fastener: 'dado',
@@ -206,7 +208,7 @@ describe('screws through the side, shelf pins and a dado', () => {
 			})
 		);
 		expect(p.spec.bearingStressPa).toBeCloseTo(400 / (0.00635 * 0.28575), 3);
-		expect(p.checks[0].utilisation).toBeCloseTo(220443 / 7.4e6, 4);
+		expect(p.checks[0].utilisation).toBeCloseTo(220443 / 7377390, 4);
 	});
 });
 

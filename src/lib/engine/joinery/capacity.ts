@@ -26,6 +26,7 @@ export interface ResolvedStock {
 	screwHoldingFaceN?: number;
 	screwHoldingEdgeN?: number;
 	compressionPerpPa?: number;
+	compressionPerpSource?: string;
 	source: string;
 }
 
@@ -41,6 +42,7 @@ export function resolveStock(material: StockMaterial, field: string): ResolvedSt
 			screwHoldingFaceN: s.screwHoldingFaceN,
 			screwHoldingEdgeN: s.screwHoldingEdgeN,
 			compressionPerpPa: s.compressionPerpPa,
+			compressionPerpSource: s.compressionPerpSource,
 			source: s.screwHoldingSource ?? s.specificGravitySource
 		};
 	}

@@ -89,7 +89,7 @@ export function planDado(ctx: PlanContext): FastenerPart {
 					stressPa,
 					cPerp,
 					null,
-					`Wood Handbook Table 5-3a compression perpendicular to grain, proportional limit, ${end.name} (from memory)`
+					`compression perpendicular to grain, proportional limit, ${end.name}: ${end.compressionPerpSource ?? 'Wood Handbook Table 5-3a'}`
 				)
 			]
 		: [];
