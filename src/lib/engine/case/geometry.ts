@@ -2,10 +2,11 @@ import { findMaterial } from '../../../../reference/materials';
 import { findStockHolding } from '../../../../reference/stock-holding';
 import type { StockMaterial } from '../joinery/types';
 import type { CaseDesign, CasePart } from './types';
+import { METRES_PER_INCH } from '../units/length';
 
 type Material = CaseDesign['sides']['material'];
 
-const INCH = 0.0254;
+const INCH = METRES_PER_INCH;
 /** An adjustable shelf is cut 1/16" shorter than the opening so it drops in (common practice, no source). */
 export const ADJUSTABLE_CLEARANCE_M = INCH / 16;
 

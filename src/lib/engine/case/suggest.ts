@@ -7,8 +7,9 @@ import { maxSpanInput, minEdgeInput } from '../shelf/solvers';
 import type { CaseGeometry } from './geometry';
 import { asShelf, shelfRequest, type ShelfAnalyses } from './shelves';
 import type { CaseDesign, CaseJoint, CaseShelf, CaseSuggestion, DesignPath } from './types';
+import { METRES_PER_INCH } from '../units/length';
 
-const INCH = 0.0254;
+const INCH = METRES_PER_INCH;
 const SIXTEENTH = INCH / 16;
 /** A 3/4" solid-wood nosing is the usual strip (common practice, no source); red oak when the shelf
  * itself is not solid wood (a choice of this tool). */

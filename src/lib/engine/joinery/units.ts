@@ -1,8 +1,16 @@
-/** Conversions used at the lines where published US-customary formulas meet the SI engine. */
-export const M_PER_IN = 0.0254;
-export const N_PER_LBF = 4.4482216152605;
-export const PA_PER_PSI = 6894.757293168;
-export const G_M_PER_S2 = 9.80665;
+/**
+ * The conversions the joinery formulas use where published US-customary figures meet the SI
+ * engine: the engine's one set of constants (units/), under the short names these files use.
+ */
+import { METRES_PER_INCH } from '../units/length';
+import { NEWTONS_PER_LBF, PASCALS_PER_PSI, STANDARD_GRAVITY } from '../units/quantity';
 
-export const inches = (m: number) => m / M_PER_IN;
-export const metres = (inch: number) => inch * M_PER_IN;
+export {
+	METRES_PER_INCH as M_PER_IN,
+	NEWTONS_PER_LBF as N_PER_LBF,
+	PASCALS_PER_PSI as PA_PER_PSI,
+	STANDARD_GRAVITY as G_M_PER_S2
+};
+
+export const inches = (m: number) => m / METRES_PER_INCH;
+export const metres = (inch: number) => inch * METRES_PER_INCH;

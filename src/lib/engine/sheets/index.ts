@@ -7,6 +7,7 @@
  */
 import ShelfPack from '@mapbox/shelf-pack';
 import type { CutGroup } from '../cutlist';
+import { METRES_PER_INCH } from '../units/length';
 
 export interface SheetStock {
 	materialName: string;
@@ -92,7 +93,7 @@ export interface SheetPlan {
 	options: SheetOptions;
 }
 
-const INCH = 0.0254;
+const INCH = METRES_PER_INCH;
 /** 4×8 sheet, 1/8" kerf, 1/4" trim, 3" × 12" smallest useful offcut: choices of this tool. */
 export const DEFAULT_SHEET_OPTIONS: SheetOptions = {
 	kerfM: INCH / 8,

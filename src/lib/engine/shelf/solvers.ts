@@ -16,8 +16,9 @@ import type {
 	ShelfInput,
 	ShelfResult
 } from './types';
+import { METRES_PER_INCH } from '../units/length';
 
-const INCH = 0.0254;
+const INCH = METRES_PER_INCH;
 const MAX_SPAN_M = 10;
 
 /**

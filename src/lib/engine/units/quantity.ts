@@ -7,7 +7,7 @@
  * where one has been registered: the server registers it at start (hooks.server.ts); tests and
  * Node scripts import quantity-full.ts when they need unusual units.
  */
-import { QuantityError, parseLength } from './length';
+import { METRES_PER_INCH, QuantityError, parseLength } from './length';
 import { NEWTONS_PER_LBF, STANDARD_GRAVITY } from './si';
 import { readFromTable } from './unit-table';
 
@@ -35,7 +35,7 @@ export function hasFullUnitParser(): boolean {
 
 export { NEWTONS_PER_LBF, STANDARD_GRAVITY };
 /** 1 psi = 1 lbf/in² = 6894.757293168 Pa. */
-export const PASCALS_PER_PSI = NEWTONS_PER_LBF / 0.0254 ** 2;
+export const PASCALS_PER_PSI = NEWTONS_PER_LBF / METRES_PER_INCH ** 2;
 export const PASCALS_PER_PSF = PASCALS_PER_PSI / 144;
 export const NEWTONS_PER_METRE_PER_PLF = NEWTONS_PER_LBF / 0.3048;
 export const KG_PER_M3_PER_PCF = 0.45359237 / 0.3048 ** 3;
@@ -148,7 +148,7 @@ const PRESSURE_UNITS = {
 } as const;
 const LINE_LOAD_UNITS = { 'lbf/ft': NEWTONS_PER_METRE_PER_PLF, 'N/m': 1, 'kN/m': 1000 } as const;
 const MOMENT_UNITS = {
-	'lbf·in': NEWTONS_PER_LBF * 0.0254,
+	'lbf·in': NEWTONS_PER_LBF * METRES_PER_INCH,
 	'lbf·ft': NEWTONS_PER_LBF * 0.3048,
 	'N·m': 1
 } as const;

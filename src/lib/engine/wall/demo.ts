@@ -4,8 +4,9 @@
  * rabbet, biscuits and pocket screws. Used by the tests, the bench and the demo data.
  */
 import type { DrawerOpeningDesign, WallCaseDesign, WallDesign } from './types';
+import { METRES_PER_INCH } from '../units/length';
 
-const IN = 0.0254;
+const IN = METRES_PER_INCH;
 const PSF = 47.88025898033584; // N/m² per lbf/ft² (lbf and ft exact)
 const books = [{ kind: 'area' as const, pressure: 40 * PSF }];
 

@@ -3,8 +3,9 @@
  * joints that use it), slides by length, hinges, wall anchors and the screws the design implies.
  */
 import type { WallDesign, WallResult } from './types';
+import { METRES_PER_INCH } from '../units/length';
 
-const INCH = 0.0254;
+const INCH = METRES_PER_INCH;
 
 export interface HardwareLine {
 	kind:

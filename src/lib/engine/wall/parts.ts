@@ -13,8 +13,9 @@ import type {
 	WallCaseDesign,
 	WallPart
 } from './types';
+import { METRES_PER_INCH } from '../units/length';
 
-const INCH = 0.0254;
+const INCH = METRES_PER_INCH;
 /** An anchor strip (nailer) under the top at the back, 3" wide (common practice, no source). */
 export const ANCHOR_STRIP_WIDTH_M = 3 * INCH;
 const len = (m: number) => formatLength(m, { unit: 'frac16' });
