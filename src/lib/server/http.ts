@@ -19,9 +19,12 @@ export function zodIssues(err: z.ZodError): ProblemIssue[] {
 
 const MAX_BODY_BYTES = 256 * 1024;
 
+const JSON_TYPE = /^application\/(?:[\w.+-]+\+)?json\s*(?:;|$)/i;
+
 /**
  * Read and validate a JSON body with a shared schema. Returns the parsed data, or a problem
- * Response (400 for unreadable JSON, 413 for an oversized body, 422 for a body that fails the schema).
+ * Response (400 for unreadable JSON, 413 for an oversized body, 415 for a body not sent as JSON,
+ * 422 for a body that fails the schema).
  */
 export async function readJson<S extends z.ZodType>(
 	request: Request,
@@ -35,6 +38,11 @@ export async function readJson<S extends z.ZodType>(
 		const text = await request.text();
 		if (text.length > MAX_BODY_BYTES)
 			return { ok: false, response: problem(413, 'The request body is too large.') };
+		if (text.length && !JSON_TYPE.test(request.headers.get('content-type') ?? ''))
+			return {
+				ok: false,
+				response: problem(415, 'Send the body as JSON, with Content-Type: application/json.')
+			};
 		raw = text.length ? JSON.parse(text) : {};
 	} catch {
 		return { ok: false, response: problem(400, 'The request body is not valid JSON.') };

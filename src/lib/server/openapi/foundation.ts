@@ -1,4 +1,17 @@
 import {
+	apiTokenCreatedSchema,
+	apiTokenListSchema,
+	healthSchema,
+	meSchema,
+	projectPageSchema,
+	projectSchema,
+	projectWithRoleSchema,
+	workshopDetailSchema,
+	workshopListSchema,
+	workshopSchema,
+	workshopWithRoleSchema
+} from '$lib/schemas/responses/foundation';
+import {
 	projectCreateSchema,
 	projectListQuerySchema,
 	projectPatchSchema
@@ -13,44 +26,59 @@ const member = { ...signedIn, 404: 'No such workshop or project, or not a member
 // ---- health, workshops, projects ----
 const workshopAndProjectOperations: ApiOperation[] = [
 	{
+		operationId: 'getHealth',
 		method: 'get',
 		path: '/health',
 		tag: 'service',
 		summary: 'Whether the service and its database answer',
 		auth: 'none',
-		responses: { 200: 'Healthy' }
+		responses: { 200: { description: 'Healthy', schema: healthSchema } }
 	},
 	{
+		operationId: 'listWorkshops',
 		method: 'get',
 		path: '/workshops',
 		tag: 'workshops',
 		summary: "The actor's workshops with their role in each",
-		responses: { 200: 'Workshops', ...signedIn }
+		responses: { 200: { description: 'Workshops', schema: workshopListSchema }, ...signedIn }
 	},
 	{
+		operationId: 'createWorkshop',
 		method: 'post',
 		path: '/workshops',
 		tag: 'workshops',
 		summary: 'Create a workshop owned by the actor',
 		body: workshopNameSchema,
-		responses: { 201: 'Created', 422: 'Invalid fields', ...signedIn }
+		responses: {
+			201: { description: 'Created', schema: workshopWithRoleSchema },
+			422: 'Invalid fields',
+			...signedIn
+		}
 	},
 	{
+		operationId: 'getWorkshop',
 		method: 'get',
 		path: '/workshops/{id}',
 		tag: 'workshops',
 		summary: 'A workshop and its members',
-		responses: { 200: 'Workshop', ...member }
+		responses: { 200: { description: 'Workshop', schema: workshopDetailSchema }, ...member }
 	},
 	{
+		operationId: 'renameWorkshop',
 		method: 'patch',
 		path: '/workshops/{id}',
 		tag: 'workshops',
 		summary: 'Rename a workshop (owner)',
 		body: workshopNameSchema,
-		responses: { 200: 'Renamed', 403: 'Owners only', 422: 'Invalid fields', ...member }
+		responses: {
+			200: { description: 'Renamed', schema: workshopSchema },
+			403: 'Owners only',
+			422: 'Invalid fields',
+			...member
+		}
 	},
 	{
+		operationId: 'deleteWorkshop',
 		method: 'delete',
 		path: '/workshops/{id}',
 		tag: 'workshops',
@@ -63,37 +91,56 @@ const workshopAndProjectOperations: ApiOperation[] = [
 		}
 	},
 	{
+		operationId: 'listProjects',
 		method: 'get',
 		path: '/projects',
 		tag: 'projects',
 		summary: "A page of a workshop's projects, searched and sorted",
 		query: projectListQuerySchema,
-		responses: { 200: '{ items, total, page, perPage }', 422: 'Invalid query', ...member }
+		responses: {
+			200: { description: '{ items, total, page, perPage }', schema: projectPageSchema },
+			422: 'Invalid query',
+			...member
+		}
 	},
 	{
+		operationId: 'createProject',
 		method: 'post',
 		path: '/projects',
 		tag: 'projects',
 		summary: 'Create a project (editor)',
 		body: projectCreateSchema,
-		responses: { 201: 'Created', 403: 'Editors only', 422: 'Invalid fields', ...member }
+		responses: {
+			201: { description: 'Created', schema: projectSchema },
+			403: 'Editors only',
+			422: 'Invalid fields',
+			...member
+		}
 	},
 	{
+		operationId: 'getProject',
 		method: 'get',
 		path: '/projects/{id}',
 		tag: 'projects',
 		summary: 'A project, with the actor’s role',
-		responses: { 200: 'Project', ...member }
+		responses: { 200: { description: 'Project', schema: projectWithRoleSchema }, ...member }
 	},
 	{
+		operationId: 'updateProject',
 		method: 'patch',
 		path: '/projects/{id}',
 		tag: 'projects',
 		summary: 'Change a project’s name, client or site notes (editor)',
 		body: projectPatchSchema,
-		responses: { 200: 'Changed', 403: 'Editors only', 422: 'Invalid fields', ...member }
+		responses: {
+			200: { description: 'Changed', schema: projectSchema },
+			403: 'Editors only',
+			422: 'Invalid fields',
+			...member
+		}
 	},
 	{
+		operationId: 'deleteProject',
 		method: 'delete',
 		path: '/projects/{id}',
 		tag: 'projects',
@@ -105,33 +152,37 @@ const workshopAndProjectOperations: ApiOperation[] = [
 // ---- accounts (me, tokens): appended by the accounts work ----
 const accountOperations: ApiOperation[] = [
 	{
+		operationId: 'getMe',
 		method: 'get',
 		path: '/me',
 		tag: 'accounts',
 		summary: 'The caller: id, e-mail, name, how they signed in, length unit and workshops',
-		responses: { 200: 'The caller', ...signedIn }
+		responses: { 200: { description: 'The caller', schema: meSchema }, ...signedIn }
 	},
 	{
+		operationId: 'listApiTokens',
 		method: 'get',
 		path: '/tokens',
 		tag: 'accounts',
 		summary: "The caller's live API tokens (name, prefix, dates; never the secret)",
-		responses: { 200: 'Tokens', ...signedIn }
+		responses: { 200: { description: 'Tokens', schema: apiTokenListSchema }, ...signedIn }
 	},
 	{
+		operationId: 'createApiToken',
 		method: 'post',
 		path: '/tokens',
 		tag: 'accounts',
 		summary: 'Create an API token; the secret is in this answer only. Needs a session, not a token',
 		body: apiTokenCreateSchema,
 		responses: {
-			201: 'Created, with the secret',
+			201: { description: 'Created, with the secret', schema: apiTokenCreatedSchema },
 			403: 'Called with a token',
 			422: 'Invalid fields',
 			...signedIn
 		}
 	},
 	{
+		operationId: 'revokeApiToken',
 		method: 'delete',
 		path: '/tokens/{id}',
 		tag: 'accounts',

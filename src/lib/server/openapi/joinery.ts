@@ -1,17 +1,19 @@
 import { caseDesignSchema } from '$lib/schemas/case';
 import { jointRequestSchema } from '$lib/schemas/joinery';
 import { stabilityRequestSchema } from '$lib/schemas/stability';
+import {
+	caseCheckSchema,
+	jointPlanSchema,
+	stabilityResultSchema
+} from '$lib/schemas/responses/joinery';
 import type { ApiOperation } from './types';
 
-const computed = {
-	400: 'The body is not JSON',
-	413: 'The body is too large',
-	422: 'Some fields need attention (each issue names its field)'
-};
+const computed = { 422: 'Some fields need attention (each issue names its field)' };
 
 /** Joint plans, tip-over and the whole-case check: open to anyone, nothing stored. */
 export const joineryOperations: ApiOperation[] = [
 	{
+		operationId: 'planJoint',
 		method: 'post',
 		path: '/joints',
 		tag: 'joinery',
@@ -19,9 +21,11 @@ export const joineryOperations: ApiOperation[] = [
 			'Plan one joint (biscuits, pocket screws, screws, shelf pins or a dado): count, positions, capacity against demand. An estimate with cautions.',
 		auth: 'none',
 		body: jointRequestSchema,
-		responses: { 200: 'The joint plan', ...computed }
+		rateLimited: true,
+		responses: { 200: { description: 'The joint plan', schema: jointPlanSchema }, ...computed }
 	},
 	{
+		operationId: 'checkStability',
 		method: 'post',
 		path: '/stability',
 		tag: 'joinery',
@@ -29,9 +33,14 @@ export const joineryOperations: ApiOperation[] = [
 			'Tip-over of a case: centre of gravity, tipping forces, front-edge load against ASTM F2057-23, EN 14749 forces, restraint pull against ASTM F3096 and anchoring advice. An estimate with cautions.',
 		auth: 'none',
 		body: stabilityRequestSchema,
-		responses: { 200: 'The stability result', ...computed }
+		rateLimited: true,
+		responses: {
+			200: { description: 'The stability result', schema: stabilityResultSchema },
+			...computed
+		}
 	},
 	{
+		operationId: 'checkCase',
 		method: 'post',
 		path: '/cases/check',
 		tag: 'joinery',
@@ -39,6 +48,7 @@ export const joineryOperations: ApiOperation[] = [
 			'Check a whole case: every shelf, every joint, tip-over, the cut list, margins worst first and suggested design changes. An estimate with cautions.',
 		auth: 'none',
 		body: caseDesignSchema,
-		responses: { 200: 'The case check', ...computed }
+		rateLimited: true,
+		responses: { 200: { description: 'The case check', schema: caseCheckSchema }, ...computed }
 	}
 ];

@@ -5,53 +5,69 @@ import {
 	minThicknessRequestSchema,
 	shelfRequestSchema
 } from '$lib/schemas/shelf';
+import {
+	materialListSchema,
+	maxLoadResultSchema,
+	maxSpanResultSchema,
+	minEdgeResultSchema,
+	minThicknessResultSchema,
+	shelfAnalysisSchema
+} from '$lib/schemas/responses/shelf';
+import type { z } from 'zod';
 import type { ApiOperation } from './types';
 
-const computed = {
-	200: 'Computed (SI units: m, N, Pa, N·m)',
-	400: 'The body is not JSON',
-	413: 'The body is too large',
+const computed = (schema: z.ZodType) => ({
+	200: { description: 'Computed (SI units: m, N, Pa, N·m)', schema },
 	422: 'A field needs attention; each issue names its path and what was expected'
-};
+});
 
 export const shelfOperations: ApiOperation[] = [
 	{
+		operationId: 'analyseShelf',
 		method: 'post',
 		path: '/shelf',
 		summary: 'Analyse a shelf: instant and long-term sag, limit check, stress, reactions, curve',
 		tag: 'shelf',
 		body: shelfRequestSchema,
 		auth: 'none',
-		responses: computed
+		rateLimited: true,
+		responses: computed(shelfAnalysisSchema)
 	},
 	{
+		operationId: 'findMaxSpan',
 		method: 'post',
 		path: '/shelf/max-span',
 		summary: 'The longest span that meets the limit (shear, creep and self-weight included)',
 		tag: 'shelf',
 		body: maxSpanRequestSchema,
 		auth: 'none',
-		responses: computed
+		rateLimited: true,
+		responses: computed(maxSpanResultSchema)
 	},
 	{
+		operationId: 'findMinThickness',
 		method: 'post',
 		path: '/shelf/min-thickness',
 		summary: 'The thinnest stocked (or given) thickness that meets the limit',
 		tag: 'shelf',
 		body: minThicknessRequestSchema,
 		auth: 'none',
-		responses: computed
+		rateLimited: true,
+		responses: computed(minThicknessResultSchema)
 	},
 	{
+		operationId: 'findMinEdge',
 		method: 'post',
 		path: '/shelf/min-edge',
 		summary: 'The smallest strip (front, back or below) that makes a shelf meet the limit',
 		tag: 'shelf',
 		body: minEdgeRequestSchema,
 		auth: 'none',
-		responses: computed
+		rateLimited: true,
+		responses: computed(minEdgeResultSchema)
 	},
 	{
+		operationId: 'findMaxLoad',
 		method: 'post',
 		path: '/shelf/max-load',
 		summary:
@@ -59,14 +75,16 @@ export const shelfOperations: ApiOperation[] = [
 		tag: 'shelf',
 		body: maxLoadRequestSchema,
 		auth: 'none',
-		responses: computed
+		rateLimited: true,
+		responses: computed(maxLoadResultSchema)
 	},
 	{
+		operationId: 'listMaterials',
 		method: 'get',
 		path: '/materials',
 		summary: 'The shelf material library with a source for every figure',
 		tag: 'shelf',
 		auth: 'none',
-		responses: { 200: 'The materials (SI units)' }
+		responses: { 200: { description: 'The materials (SI units)', schema: materialListSchema } }
 	}
 ];

@@ -1,0 +1,249 @@
+// Every API route that touches stored data × who is asking → the expected status (the
+// authorization test asserts the statuses; the API document test validates every answer).
+// anonymous: no actor; viewer/editor/owner: members of the workshop; outsider: a member of another.
+import { event, makeWorkshopWithCast } from './actors';
+import * as workshopsApi from '../../../src/routes/api/v1/workshops/+server';
+import * as workshopApi from '../../../src/routes/api/v1/workshops/[id]/+server';
+import * as projectsApi from '../../../src/routes/api/v1/projects/+server';
+import * as projectApi from '../../../src/routes/api/v1/projects/[id]/+server';
+import { createProject } from '../../../src/lib/server/projects';
+import * as analysesApi from '../../../src/routes/api/v1/projects/[id]/analyses/+server';
+import * as analysisApi from '../../../src/routes/api/v1/analyses/[id]/+server';
+import * as undeleteApi from '../../../src/routes/api/v1/analyses/[id]/undelete/+server';
+import * as revisionsApi from '../../../src/routes/api/v1/analyses/[id]/revisions/+server';
+import * as revisionApi from '../../../src/routes/api/v1/analyses/[id]/revisions/[version]/+server';
+import * as duplicateApi from '../../../src/routes/api/v1/analyses/[id]/duplicate/+server';
+import * as moveApi from '../../../src/routes/api/v1/analyses/[id]/move/+server';
+import { deleteAnalysis, updateAnalysis } from '../../../src/lib/server/analyses';
+import { handShelf, saveShelf } from './analyses';
+import type { Actor } from '../../../src/lib/server/access';
+import * as meApi from '../../../src/routes/api/v1/me/+server';
+import * as tokensApi from '../../../src/routes/api/v1/tokens/+server';
+import * as tokenApi from '../../../src/routes/api/v1/tokens/[id]/+server';
+import { createApiToken } from '../../../src/lib/server/accounts/api-tokens';
+
+export type Who = 'anonymous' | 'viewer' | 'editor' | 'owner' | 'outsider';
+type Cast = ReturnType<typeof makeWorkshopWithCast>;
+export interface Row {
+	route: string;
+	call: (actor: Actor | null, cast: Cast, projectId: string) => Promise<Response> | Response;
+	expect: Record<Who, number>;
+}
+
+export const table: Row[] = [
+	{
+		route: 'GET /workshops',
+		call: (a) => workshopsApi.GET(event({ actor: a })),
+		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 200 }
+	},
+	{
+		route: 'POST /workshops',
+		call: (a) =>
+			workshopsApi.POST(event({ actor: a, method: 'POST', body: { name: 'Night class' } })),
+		expect: { anonymous: 401, viewer: 201, editor: 201, owner: 201, outsider: 201 }
+	},
+	{
+		route: 'GET /workshops/{id}',
+		call: (a, c) => workshopApi.GET(event({ actor: a, params: { id: c.workshopId } })),
+		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 404 }
+	},
+	{
+		route: 'PATCH /workshops/{id}',
+		call: (a, c) =>
+			workshopApi.PATCH(
+				event({
+					actor: a,
+					method: 'PATCH',
+					params: { id: c.workshopId },
+					body: { name: 'Renamed shop' }
+				})
+			),
+		expect: { anonymous: 401, viewer: 403, editor: 403, owner: 200, outsider: 404 }
+	},
+	{
+		route: 'DELETE /workshops/{id}',
+		call: (a, c) =>
+			workshopApi.DELETE(event({ actor: a, method: 'DELETE', params: { id: c.workshopId } })),
+		expect: { anonymous: 401, viewer: 403, editor: 403, owner: 204, outsider: 404 }
+	},
+	{
+		route: 'GET /projects',
+		call: (a, c) => projectsApi.GET(event({ actor: a, url: `/?workshop=${c.workshopId}` })),
+		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 404 }
+	},
+	{
+		route: 'POST /projects',
+		call: (a, c) =>
+			projectsApi.POST(
+				event({ actor: a, method: 'POST', body: { workshopId: c.workshopId, name: 'Wall unit' } })
+			),
+		expect: { anonymous: 401, viewer: 403, editor: 201, owner: 201, outsider: 404 }
+	},
+	{
+		route: 'GET /projects/{id}',
+		call: (a, _c, id) => projectApi.GET(event({ actor: a, params: { id } })),
+		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 404 }
+	},
+	{
+		route: 'PATCH /projects/{id}',
+		call: (a, _c, id) =>
+			projectApi.PATCH(
+				event({ actor: a, method: 'PATCH', params: { id }, body: { client: 'New client' } })
+			),
+		expect: { anonymous: 401, viewer: 403, editor: 200, owner: 200, outsider: 404 }
+	},
+	{
+		route: 'DELETE /projects/{id}',
+		call: (a, _c, id) => projectApi.DELETE(event({ actor: a, method: 'DELETE', params: { id } })),
+		expect: { anonymous: 401, viewer: 403, editor: 204, owner: 204, outsider: 404 }
+	}
+];
+
+// ---- saved analyses: each case saves one (as the owner) in the case's project ----
+const read = { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 404 };
+const write = { anonymous: 401, viewer: 403, editor: 200, owner: 200, outsider: 404 };
+const analysisOf = (c: Cast, projectId: string) => saveShelf(c.owner, projectId).id;
+
+table.push(
+	{
+		route: 'GET /projects/{id}/analyses',
+		call: (a, _c, id) => analysesApi.GET(event({ actor: a, params: { id } })),
+		expect: read
+	},
+	{
+		route: 'POST /projects/{id}/analyses',
+		call: (a, _c, id) =>
+			analysesApi.POST(
+				event({
+					actor: a,
+					method: 'POST',
+					params: { id },
+					body: { kind: 'shelf', name: 'Bay shelf', input: handShelf }
+				})
+			),
+		expect: { ...write, editor: 201, owner: 201 }
+	},
+	{
+		route: 'GET /analyses/{id}',
+		call: (a, c, p) => analysisApi.GET(event({ actor: a, params: { id: analysisOf(c, p) } })),
+		expect: read
+	},
+	{
+		route: 'PATCH /analyses/{id}',
+		call: (a, c, p) =>
+			analysisApi.PATCH(
+				event({
+					actor: a,
+					method: 'PATCH',
+					params: { id: analysisOf(c, p) },
+					body: { version: 1, name: 'Renamed' }
+				})
+			),
+		expect: write
+	},
+	{
+		route: 'PUT /analyses/{id}',
+		call: (a, c, p) =>
+			analysisApi.PUT(
+				event({
+					actor: a,
+					method: 'PUT',
+					params: { id: analysisOf(c, p) },
+					body: { version: 1, name: 'Replaced', input: handShelf }
+				})
+			),
+		expect: write
+	},
+	{
+		route: 'DELETE /analyses/{id}',
+		call: (a, c, p) =>
+			analysisApi.DELETE(event({ actor: a, method: 'DELETE', params: { id: analysisOf(c, p) } })),
+		expect: write
+	},
+	{
+		route: 'POST /analyses/{id}/undelete',
+		call: (a, c, p) => {
+			const id = analysisOf(c, p);
+			deleteAnalysis(c.owner, id);
+			return undeleteApi.POST(event({ actor: a, method: 'POST', params: { id } }));
+		},
+		expect: write
+	},
+	{
+		route: 'GET /analyses/{id}/revisions',
+		call: (a, c, p) => revisionsApi.GET(event({ actor: a, params: { id: analysisOf(c, p) } })),
+		expect: read
+	},
+	{
+		route: 'GET /analyses/{id}/revisions/{version}',
+		call: (a, c, p) =>
+			revisionApi.GET(event({ actor: a, params: { id: analysisOf(c, p), version: '1' } })),
+		expect: read
+	},
+	{
+		route: 'POST /analyses/{id}/revisions/{version}',
+		call: (a, c, p) => {
+			const id = analysisOf(c, p);
+			updateAnalysis(c.owner, id, { name: 'Second', version: 1 });
+			return revisionApi.POST(
+				event({ actor: a, method: 'POST', params: { id, version: '1' }, body: {} })
+			);
+		},
+		expect: write
+	},
+	{
+		route: 'POST /analyses/{id}/duplicate',
+		call: (a, c, p) =>
+			duplicateApi.POST(
+				event({ actor: a, method: 'POST', params: { id: analysisOf(c, p) }, body: {} })
+			),
+		expect: { ...write, editor: 201, owner: 201 }
+	},
+	{
+		route: 'POST /analyses/{id}/move',
+		call: (a, c, p) => {
+			const target = createProject(c.owner, c.workshopId, {
+				name: 'Hall',
+				client: '',
+				siteNotes: ''
+			});
+			return moveApi.POST(
+				event({
+					actor: a,
+					method: 'POST',
+					params: { id: analysisOf(c, p) },
+					body: { projectId: target.id }
+				})
+			);
+		},
+		expect: write
+	}
+);
+
+// ---- the actor's own account: tokens belong to a person, not to a workshop ----
+table.push(
+	{
+		route: 'GET /me',
+		call: (a) => meApi.GET(event({ actor: a })),
+		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 200 }
+	},
+	{
+		route: 'GET /tokens',
+		call: (a) => tokensApi.GET(event({ actor: a })),
+		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 200 }
+	},
+	{
+		route: 'POST /tokens',
+		call: (a) =>
+			tokensApi.POST(event({ actor: a, method: 'POST', body: { name: 'Cut-list script' } })),
+		expect: { anonymous: 401, viewer: 201, editor: 201, owner: 201, outsider: 201 }
+	},
+	{
+		route: "DELETE /tokens/{id} (the owner's token)",
+		call: (a, c) => {
+			const { id } = createApiToken(c.owner, { name: 'Shop laptop' });
+			return tokenApi.DELETE(event({ actor: a, method: 'DELETE', params: { id } }));
+		},
+		expect: { anonymous: 401, viewer: 404, editor: 404, owner: 204, outsider: 404 }
+	}
+);

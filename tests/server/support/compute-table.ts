@@ -1,0 +1,141 @@
+// One real request of each open compute route (and the open reads), with the status it answers.
+import { event } from './actors';
+import * as cases from '../../../src/routes/api/v1/cases/check/+server';
+import * as joints from '../../../src/routes/api/v1/joints/+server';
+import * as stability from '../../../src/routes/api/v1/stability/+server';
+import * as shelf from '../../../src/routes/api/v1/shelf/+server';
+import * as maxSpan from '../../../src/routes/api/v1/shelf/max-span/+server';
+import * as minThickness from '../../../src/routes/api/v1/shelf/min-thickness/+server';
+import * as minEdge from '../../../src/routes/api/v1/shelf/min-edge/+server';
+import * as maxLoad from '../../../src/routes/api/v1/shelf/max-load/+server';
+import * as materials from '../../../src/routes/api/v1/materials/+server';
+import * as health from '../../../src/routes/api/v1/health/+server';
+
+export const aShelf = {
+	span: '32"',
+	depth: '11 1/4"',
+	thickness: '3/4"',
+	material: 'red-oak',
+	loads: [{ kind: 'area', pressure: '40 psf' }]
+};
+const { span: _span, ...noSpan } = aShelf;
+
+export const aJoint = {
+	kind: 'shelf-to-side',
+	fastener: 'pocket-screw',
+	length: '11 1/4"',
+	endPiece: { material: 'red-oak', thickness: '3/4"' },
+	facePiece: { material: 'hardwood-plywood-veneer-core', thickness: '3/4"' },
+	demand: { shear: '40 lbf' }
+};
+
+export const aBookcase = {
+	width: '36"',
+	height: '80"',
+	depth: '12"',
+	sides: { material: 'hardwood-plywood-veneer-core', thickness: '3/4"' },
+	back: { material: 'hardwood-plywood-veneer-core', thickness: '1/4"' },
+	shelves: [
+		{ height: '20"', kind: 'adjustable', loads: [{ kind: 'area', pressure: '40 lbf/ft^2' }] },
+		{
+			height: '40"',
+			kind: 'fixed',
+			joint: 'pocket-screw',
+			loads: [{ kind: 'area', pressure: '40 lbf/ft^2' }]
+		}
+	]
+};
+
+type Handler = (e: never) => Response | Promise<Response>;
+const post = (h: unknown, body: unknown) =>
+	(h as Handler)(event({ actor: null, method: 'POST', body }) as never);
+const get = (h: unknown) => (h as Handler)(event({ actor: null }) as never);
+
+export interface ComputeRow {
+	route: string;
+	label: string;
+	status: number;
+	call: () => Promise<Response> | Response;
+}
+
+export const computeTable: ComputeRow[] = [
+	{ route: 'GET /health', label: 'healthy', status: 200, call: () => get(health.GET) },
+	{ route: 'GET /materials', label: 'the library', status: 200, call: () => get(materials.GET) },
+	{ route: 'POST /shelf', label: 'a shelf', status: 200, call: () => post(shelf.POST, aShelf) },
+	{ route: 'POST /shelf', label: 'not JSON', status: 400, call: () => post(shelf.POST, '{') },
+	{
+		route: 'POST /shelf',
+		label: 'a field wrong',
+		status: 422,
+		call: () => post(shelf.POST, { ...aShelf, span: 'long' })
+	},
+	{
+		route: 'POST /shelf/max-span',
+		label: 'solved',
+		status: 200,
+		call: () => post(maxSpan.POST, noSpan)
+	},
+	{
+		route: 'POST /shelf/min-thickness',
+		label: 'solved',
+		status: 200,
+		call: () => post(minThickness.POST, { ...aShelf, thickness: undefined })
+	},
+	{
+		route: 'POST /shelf/min-edge',
+		label: 'solved',
+		status: 200,
+		call: () =>
+			post(minEdge.POST, {
+				...aShelf,
+				span: '48"',
+				material: 'mdf',
+				strip: { material: 'red-oak', thickness: '3/4"' }
+			})
+	},
+	{
+		route: 'POST /shelf/max-load',
+		label: 'solved',
+		status: 200,
+		call: () => post(maxLoad.POST, { ...aShelf, loads: [], load: { kind: 'area' } })
+	},
+	{ route: 'POST /joints', label: 'planned', status: 200, call: () => post(joints.POST, aJoint) },
+	{
+		route: 'POST /joints',
+		label: 'a field wrong',
+		status: 422,
+		call: () => post(joints.POST, { ...aJoint, fastener: 'nail' })
+	},
+	{
+		route: 'POST /stability',
+		label: 'checked',
+		status: 200,
+		call: () =>
+			post(stability.POST, {
+				height: '80"',
+				width: '36"',
+				depth: '17"',
+				construction: { weight: '100 lb' }
+			})
+	},
+	{
+		route: 'POST /cases/check',
+		label: 'checked',
+		status: 200,
+		call: () => post(cases.POST, aBookcase)
+	}
+];
+
+computeTable.push({
+	route: 'POST /shelf',
+	label: 'a body sent as text',
+	status: 415,
+	call: () =>
+		(shelf.POST as Handler)({
+			request: new Request('http://localhost/api/v1/shelf', {
+				method: 'POST',
+				headers: { 'content-type': 'text/plain' },
+				body: JSON.stringify(aShelf)
+			})
+		} as never)
+});
