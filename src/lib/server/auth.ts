@@ -11,6 +11,7 @@ import { isRedirect, type RequestEvent } from '@sveltejs/kit';
 import { dev } from '$app/environment';
 import { env } from '$env/dynamic/private';
 import { signInSchema } from '$lib/schemas/account';
+import { safeRedirectPath } from '$lib/schemas/return-path';
 import { allowMailTo } from './accounts/mail-allowance';
 import { sessionIsCurrent } from './accounts/sessions';
 import { passwordSignIn } from './accounts/sign-in';
@@ -117,6 +118,18 @@ async function authConfig(event: RequestEvent): Promise<SvelteKitAuthConfig> {
 			})
 		],
 		callbacks: {
+			// where Auth.js sends people after a link or a sign-out: only paths on this site
+			redirect({ url, baseUrl }) {
+				const base = new URL(baseUrl);
+				let path = '/';
+				try {
+					const u = new URL(url, base);
+					if (u.origin === base.origin) path = u.pathname + u.search + u.hash;
+				} catch {
+					// an unreadable target goes home
+				}
+				return base.origin + safeRedirectPath(path, '/');
+			},
 			// Links go only to existing accounts; sign-up (with a name and a password) makes accounts.
 			signIn({ account, email, user }) {
 				if (account?.provider === 'nodemailer' && email?.verificationRequest)

@@ -7,6 +7,7 @@ import { linkOrigin, MAIL_UNAVAILABLE_MESSAGE } from '$lib/server/mail';
 import * as workshops from '$lib/server/workshops';
 import { confirmSchema, invitationSchema, workshopNameSchema } from '$lib/schemas/workshop';
 import { current, memberActions } from './member-actions.server';
+import { safeRedirectPath } from '$lib/schemas/return-path';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/form-body';
 
@@ -27,7 +28,7 @@ export const actions: Actions = {
 		const actor = requireActor(locals.actor);
 		const id = String((await readForm(request)).get('workshopId') ?? '');
 		workshops.switchWorkshop(actor, id);
-		redirect(303, url.searchParams.get('next') ?? '/projects');
+		redirect(303, safeRedirectPath(url.searchParams.get('next'), '/projects'));
 	},
 	rename: async ({ locals, request }) => {
 		const { actor, ws } = current(locals);

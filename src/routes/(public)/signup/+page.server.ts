@@ -1,7 +1,8 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { setError, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { safeRedirectPath, signUpSchema } from '$lib/schemas/account';
+import { signUpSchema } from '$lib/schemas/account';
+import { safeRedirectPath } from '$lib/schemas/return-path';
 import { AccountExistsError, createUser } from '$lib/server/accounts/users';
 import { mailSignInLink } from '$lib/server/auth';
 import { mailDown } from '$lib/server/mail';
