@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { patchOf } from './patch';
 
 export const projectSchema = z.object({
 	name: z
@@ -11,7 +12,8 @@ export const projectSchema = z.object({
 });
 export type ProjectInput = z.infer<typeof projectSchema>;
 
-export const projectPatchSchema = projectSchema.partial();
+// only the fields sent are changed: a PATCH with a name alone keeps the client and the site notes
+export const projectPatchSchema = patchOf(projectSchema);
 
 export const PROJECT_SORTS = ['updated', 'name', 'client', 'created'] as const;
 
