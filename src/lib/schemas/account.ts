@@ -78,3 +78,6 @@ export const apiTokenCreateSchema = z.object({
 export type ApiTokenCreateInput = z.infer<typeof apiTokenCreateSchema>;
 
 export const apiTokenRevokeSchema = z.object({ id: z.string().min(1).max(64) });
+
+/** "Sign out everywhere": whether the API tokens are revoked too (the form offers it, ticked). */
+export const signOutEverywhereSchema = z.object({ revokeTokens: z.boolean().default(false) });

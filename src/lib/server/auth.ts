@@ -13,7 +13,7 @@ import { env } from '$env/dynamic/private';
 import { signInSchema } from '$lib/schemas/account';
 import { safeRedirectPath } from '$lib/schemas/return-path';
 import { allowMailTo } from './accounts/mail-allowance';
-import { sessionIsCurrent } from './accounts/sessions';
+import { endSession, newSessionId, sessionIsCurrent } from './accounts/sessions';
 import { passwordSignIn } from './accounts/sign-in';
 import { throttleMessage } from './accounts/throttle';
 import { findUserByEmail } from './accounts/users';
@@ -136,10 +136,21 @@ async function authConfig(event: RequestEvent): Promise<SvelteKitAuthConfig> {
 					return Boolean(user.email && findUserByEmail(user.email));
 				return true;
 			},
+			// each sign-in gets an id that stays in the token as Auth.js renews it, so signing out can
+			// end that one session on the server
+			jwt({ token, user }) {
+				if (user) token.sid = newSessionId();
+				return token;
+			},
 			session({ session, token }) {
-				if (token.sub && session.user && sessionIsCurrent(token.sub, token.iat))
+				if (token.sub && session.user && sessionIsCurrent(token.sub, token.iat, token.sid))
 					session.user.id = token.sub;
 				return session;
+			}
+		},
+		events: {
+			signOut(message) {
+				if ('token' in message && message.token) endSession(message.token);
 			}
 		}
 	};

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { analysisKinds } from '../analysis';
+import { ANALYSIS_KINDS as analysisKinds } from '../../kinds/names';
 import { pageOf, roleSchema, timestamp } from './common';
 
 const base = {

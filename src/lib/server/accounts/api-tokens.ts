@@ -101,3 +101,12 @@ export function actorFromBearer(header: string | null | undefined, now = Date.no
 		lengthUnit: readLengthUnit(row.lengthUnit)
 	};
 }
+
+/** Revoke every live token of a user (a password reset; "sign out everywhere" when asked). */
+export function revokeAllApiTokens(userId: string, now = Date.now()) {
+	return getDb()
+		.update(apiTokens)
+		.set({ revokedAt: new Date(now) })
+		.where(and(eq(apiTokens.userId, userId), isNull(apiTokens.revokedAt)))
+		.run().changes;
+}

@@ -1,6 +1,6 @@
 import { and, eq, gt, isNull } from 'drizzle-orm';
 import { getDb } from '../db';
-import { passwordResets, signInFailures, users } from '../db/schema';
+import { apiTokens, passwordResets, signInFailures, users } from '../db/schema';
 import { sendPasswordReset } from '../mail';
 import { allowMailTo } from './mail-allowance';
 import { hashPassword } from './passwords';
@@ -56,7 +56,11 @@ export function resetTokenIsLive(token: string, now = Date.now()) {
 	return Boolean(liveReset(token, now));
 }
 
-/** Set a new password with a reset link. Consumes the link; false when it is unknown, used or expired. */
+/**
+ * Set a new password with a reset link. Consumes the link; false when it is unknown, used or expired.
+ * Ends every session of the account and revokes its API tokens: a reset is what someone does when
+ * they fear their password is known, and a token made by whoever knew it must stop working too.
+ */
 export async function resetPassword(token: string, newPassword: string, now = Date.now()) {
 	if (!liveReset(token, now)) return false;
 	const passwordHash = await hashPassword(newPassword);
@@ -88,6 +92,10 @@ export async function resetPassword(token: string, newPassword: string, now = Da
 				.set({ emailVerified: new Date(now) })
 				.where(eq(users.id, claimed.userId))
 				.run();
+		tx.update(apiTokens)
+			.set({ revokedAt: new Date(now) })
+			.where(and(eq(apiTokens.userId, claimed.userId), isNull(apiTokens.revokedAt)))
+			.run();
 		// other links sent earlier stop working too
 		tx.update(passwordResets)
 			.set({ usedAt: new Date(now) })

@@ -31,7 +31,7 @@ export const users = sqliteTable('user', {
 	// 'frac32' | 'frac16' | 'frac64' | 'decimal-in' | 'mm'
 	lengthUnit: text('length_unit').notNull().default('frac16'),
 	currentWorkshopId: text('current_workshop_id'),
-	// sessions issued before this instant are no longer honoured (set by a password reset)
+	// sessions issued before this instant are no longer honoured (a password reset, signing out everywhere)
 	sessionsValidFrom: integer('sessions_valid_from', { mode: 'timestamp_ms' }),
 	createdAt: createdAt()
 });
@@ -62,6 +62,15 @@ export const sessions = sqliteTable('session', {
 		.notNull()
 		.references(() => users.id, { onDelete: 'cascade' }),
 	expires: integer('expires', { mode: 'timestamp_ms' }).notNull()
+});
+
+/**
+ * Sessions ended by signing out while their cookie would still be valid: a copied cookie stops
+ * working. Kept until the session would have expired anyway.
+ */
+export const endedSessions = sqliteTable('ended_session', {
+	id: text('id').primaryKey(),
+	expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull()
 });
 
 export const verificationTokens = sqliteTable(

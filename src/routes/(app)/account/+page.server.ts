@@ -1,9 +1,21 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { apiTokenCreateSchema, apiTokenRevokeSchema, profileSchema } from '$lib/schemas/account';
+import {
+	apiTokenCreateSchema,
+	apiTokenRevokeSchema,
+	profileSchema,
+	signOutEverywhereSchema
+} from '$lib/schemas/account';
 import { requireActor } from '$lib/server/access';
-import { createApiToken, listApiTokens, revokeApiToken } from '$lib/server/accounts/api-tokens';
+import {
+	createApiToken,
+	listApiTokens,
+	revokeAllApiTokens,
+	revokeApiToken
+} from '$lib/server/accounts/api-tokens';
+import { endAllSessions } from '$lib/server/accounts/sessions';
+import { signOutOf } from '$lib/server/auth';
 import { getProfile, updateProfile } from '$lib/server/accounts/profile';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/form-body';
@@ -19,7 +31,10 @@ export const load: PageServerLoad = async ({ locals }) => {
 			{ id: 'profile' }
 		),
 		newToken: await superValidate(zod4(apiTokenCreateSchema), { id: 'token' }),
-		tokens: listApiTokens(locals.actor)
+		tokens: listApiTokens(locals.actor),
+		everywhere: await superValidate({ revokeTokens: true }, zod4(signOutEverywhereSchema), {
+			id: 'everywhere'
+		})
 	};
 };
 
@@ -55,5 +70,21 @@ export const actions: Actions = {
 				revokeError: 'That token was not found; it may be revoked already.'
 			});
 		return { form, revoked: true };
+	},
+
+	/** End every session of this account (other browsers, copied cookies), and this one. */
+	signOutEverywhere: async (event) => {
+		const actor = requireActor(event.locals.actor);
+		const form = await superValidate(await readForm(event.request), zod4(signOutEverywhereSchema), {
+			id: 'everywhere'
+		});
+		if (!form.valid) return fail(400, { everywhere: form });
+		endAllSessions(actor.id);
+		if (form.data.revokeTokens) revokeAllApiTokens(actor.id);
+		await signOutOf(event);
+		redirect(
+			303,
+			`/signin?notice=${form.data.revokeTokens ? 'signed-out-everywhere-tokens' : 'signed-out-everywhere'}`
+		);
 	}
 };
