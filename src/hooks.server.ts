@@ -4,6 +4,9 @@ import { building, dev } from '$app/environment';
 import { actorFromBearer } from '$lib/server/accounts/api-tokens';
 import { actorForUserId } from '$lib/server/accounts/users';
 import { authHandle, authSecret } from '$lib/server/auth';
+import { apiJson } from '$lib/server/hooks/api-json';
+import { authCookies } from '$lib/server/hooks/auth-cookies';
+import { originCheck } from '$lib/server/hooks/origin-check';
 // units beyond the trade's table (unit-table.ts) are read on the server with mathjs
 import '$lib/engine/units/quantity-full';
 
@@ -12,9 +15,14 @@ export const init: ServerInit = () => {
 	if (!building) authSecret();
 };
 
+// Open API routes that read no stored data: no session to read, no Auth.js work per request.
+const OPEN_API =
+	/^\/api\/v1\/(shelf(\/[\w-]+)?|joints|stability|cases\/check|materials|health|openapi\.json)\/?$/;
+
 /** Who is acting: an API token on /api/ requests, else the Auth.js session cookie. */
 export const actorHandle: Handle = async ({ event, resolve }) => {
 	event.locals.actor = null;
+	if (OPEN_API.test(event.url.pathname)) return resolve(event);
 	const authorization = event.request.headers.get('authorization');
 	if (authorization && event.url.pathname.startsWith('/api/')) {
 		// a bad or revoked token is anonymous, never a fallback to the cookie
@@ -41,6 +49,8 @@ export const securityHeaders: Handle = async ({ event, resolve }) => {
 	let response = await resolve(event);
 	const headers: Record<string, string> = { ...SECURITY_HEADERS };
 	if (!dev) headers['Strict-Transport-Security'] = 'max-age=63072000; includeSubDomains';
+	// what a signed-in person sees is theirs: no shared cache keeps it, no browser cache stores it
+	if (event.locals.actor) headers['Cache-Control'] = 'private, no-store';
 	try {
 		for (const [name, value] of Object.entries(headers)) response.headers.set(name, value);
 	} catch {
@@ -52,12 +62,22 @@ export const securityHeaders: Handle = async ({ event, resolve }) => {
 };
 
 // Headers outermost, so Auth.js's own responses (it answers /auth/* itself) get them too.
-export const handle = sequence(securityHeaders, authHandle, actorHandle);
+export const handle = sequence(
+	securityHeaders,
+	originCheck,
+	apiJson,
+	authCookies,
+	authHandle,
+	actorHandle
+);
 
 /** Log unexpected errors with an id; the client sees only a plain message and that id. */
 export const handleError: HandleServerError = ({ error, event, status, message }) => {
 	const id = crypto.randomUUID();
-	if (status !== 404) console.error(`[${id}] ${event.request.method} ${event.url.pathname}`, error);
+	const where = `[${id}] ${status} ${event.request.method} ${event.url.pathname}`;
+	// a refusal (4xx) is an everyday answer: one line, no stack; only server errors get the stack
+	if (status >= 500) console.error(where, error);
+	else if (status !== 404) console.warn(`${where}: ${message}`);
 	return {
 		message:
 			status === 404 ? 'Not found.' : status >= 500 ? 'Something went wrong on our side.' : message,

@@ -12,7 +12,7 @@ export function patchOf<T extends z.ZodRawShape>(schema: z.ZodObject<T>): Patch<
 	const shape = Object.fromEntries(
 		Object.entries(schema.shape).map(([key, field]) => [
 			key,
-			(field instanceof z.ZodDefault ? field.unwrap() : field).optional()
+			z.optional((field instanceof z.ZodDefault ? field.unwrap() : field) as z.ZodType)
 		])
 	);
 	return z.object(shape) as unknown as Patch<T>;
