@@ -75,7 +75,7 @@ describe('password check', () => {
 });
 
 describe('failed sign-in throttle', () => {
-	it('slows after 3 failures and refuses after 5 within 15 minutes, even the right password', async () => {
+	it('slows after 3 failures and refuses after 5 within 15 minutes from that address, even the right password', async () => {
 		await createUser({ name: 'Cy', email: 'cy@shop.example', password: 'correct horse staple' });
 		const wrong = { email: 'cy@shop.example', password: 'wrong guess' };
 		for (let i = 1; i <= REFUSE_AFTER_FAILURES; i++) {
@@ -83,14 +83,18 @@ describe('failed sign-in throttle', () => {
 			expect(r).toEqual({ ok: false, reason: 'wrong' });
 			if (i === 3) expect(signInGate(wrong.email, '203.0.113.7').state).toBe('slow');
 		}
+		// refused from the address the failures came from, even with the right password …
 		const refused = await passwordSignIn(
 			{ ...wrong, password: 'correct horse staple' },
-			'198.51.100.2'
+			'203.0.113.7'
 		);
 		expect(refused).toEqual({ ok: false, reason: 'throttled', retryAfterMinutes: 15 });
+		// … but not from another address: those failures cannot lock the owner out (issue 11.4);
+		// the account is still slowed down wherever the next attempt comes from
+		expect(signInGate(wrong.email, '198.51.100.2').state).toBe('slow');
 		// 15 minutes after the first failure the oldest one has left the window
 		expect(
-			signInGate(wrong.email, '198.51.100.2', Date.now() + 15 * 60 * 1000 + 1000).state
+			signInGate(wrong.email, '203.0.113.7', Date.now() + 15 * 60 * 1000 + 1000).state
 		).not.toBe('refused');
 	});
 
@@ -204,4 +208,37 @@ describe('length unit preference', () => {
 		setLengthUnit(actor, 'mm');
 		expect(getProfile(actor).lengthUnit).toBe('mm');
 	});
+});
+
+describe('one address cannot lock anyone out (throttle per account and per address)', () => {
+	it("an attacker's failures for someone else's account do not refuse the owner elsewhere", async () => {
+		const owner = await createUser({
+			name: 'Ivo',
+			email: 'ivo@shop.example',
+			password: 'correct horse staple'
+		});
+		db()
+			.db.update(schema.users)
+			.set({ emailVerified: new Date() })
+			.where(eq(schema.users.id, owner.id))
+			.run();
+		for (let i = 0; i < REFUSE_AFTER_FAILURES + 2; i++)
+			await passwordSignIn({ email: 'ivo@shop.example', password: `guess ${i}` }, '203.0.113.66');
+		expect(signInGate('ivo@shop.example', '203.0.113.66').state).toBe('refused');
+		// the owner, from home, is slowed (the account is under attack) but let in
+		const gate = signInGate('ivo@shop.example', '192.0.2.44');
+		expect(gate.state).toBe('slow');
+		const r = await passwordSignIn(
+			{ email: 'ivo@shop.example', password: 'correct horse staple' },
+			'192.0.2.44'
+		);
+		expect(r.ok).toBe(true);
+	}, 30_000);
+
+	it('an address that fails for many accounts is refused for all of them, and only that address', async () => {
+		for (let i = 0; i < 20; i++)
+			await passwordSignIn({ email: `nobody${i}@shop.example`, password: 'x' }, '198.51.100.99');
+		expect(signInGate('someone@shop.example', '198.51.100.99').state).toBe('refused');
+		expect(signInGate('someone@shop.example', '198.51.100.100').state).toBe('open');
+	}, 30_000);
 });

@@ -1,11 +1,11 @@
-import { and, eq, gt, isNull } from 'drizzle-orm';
+import { and, eq, gt, isNull, or, sql } from 'drizzle-orm';
 import { getDb } from '../db';
 import { apiTokens, passwordResets, signInFailures, users } from '../db/schema';
 import { sendPasswordReset } from '../mail';
 import { allowMailTo } from './mail-allowance';
 import { hashPassword } from './passwords';
 import { randomSecret, sha256 } from './secrets';
-import { emailKey } from './throttle';
+import { emailKey, pairKeyPrefix } from './throttle';
 import { findUserByEmail } from './users';
 
 export const PASSWORD_RESET_TTL_MS = 60 * 60 * 1000;
@@ -101,10 +101,18 @@ export async function resetPassword(token: string, newPassword: string, now = Da
 			.set({ usedAt: new Date(now) })
 			.where(and(eq(passwordResets.userId, claimed.userId), isNull(passwordResets.usedAt)))
 			.run();
-		if (user?.email)
+		// the account's failed sign-ins, from every address, no longer count
+		if (user?.email) {
+			const pairs = pairKeyPrefix(user.email);
 			tx.delete(signInFailures)
-				.where(eq(signInFailures.key, emailKey(user.email)))
+				.where(
+					or(
+						eq(signInFailures.key, emailKey(user.email)),
+						sql`substr(${signInFailures.key}, 1, ${pairs.length}) = ${pairs}`
+					)
+				)
 				.run();
+		}
 		return true;
 	});
 }

@@ -31,7 +31,7 @@ export async function passwordSignIn(
 		recordSignInFailure(input.email, clientAddress);
 		return { ok: false, reason: 'wrong' };
 	}
-	clearSignInFailures(input.email);
+	clearSignInFailures(input.email, clientAddress);
 	// An unconfirmed address could be someone else's; invitations are matched by address, so the
 	// address must be proven (by a mailed link) before the password alone lets anyone in.
 	if (!findUserByEmail(user.email)?.emailVerified) return { ok: false, reason: 'unverified' };

@@ -1,13 +1,18 @@
-import { and, desc, eq, gt, lt } from 'drizzle-orm';
+import { and, desc, eq, gt, inArray, lt } from 'drizzle-orm';
 import { getDb } from '../db';
 import { signInFailures } from '../db/schema';
 
 export const SIGN_IN_WINDOW_MS = 15 * 60 * 1000;
-/** From the third failure on, each further attempt waits a little longer. */
+/** From an account's third failure on (from anywhere), each further attempt waits a little longer. */
 export const SLOW_AFTER_FAILURES = 3;
-/** Five failures for one address within the window, and further attempts are refused. */
+/**
+ * Five failures for one account from one client address within the window, and that address may
+ * not try that account again until the window has moved on. The account's owner, elsewhere, still
+ * can: one address cannot lock anyone out of an account it does not own.
+ */
 export const REFUSE_AFTER_FAILURES = 5;
-// Per client address the bar is higher: a school or a shop may share one address among many people.
+// Per client address, over all accounts, the bar is higher: a school or a shop may share one
+// address among many people (behind a proxy, see ADDRESS_HEADER in the README).
 export const REFUSE_AFTER_FAILURES_PER_CLIENT = 20;
 
 export type SignInGate =
@@ -17,6 +22,9 @@ export type SignInGate =
 
 export const emailKey = (email: string) => `email:${email.trim().toLowerCase()}`;
 const clientKey = (address: string) => `client:${address}`;
+/** The start of every per-address key of one account. */
+export const pairKeyPrefix = (email: string) => `pair:${email.trim().toLowerCase()}|`;
+const pairKey = (email: string, address: string) => pairKeyPrefix(email) + address;
 
 /** Times (ms) of the failures counted under `key` within the window, newest first. */
 export function recentFailures(key: string, now: number) {
@@ -31,12 +39,17 @@ export function recentFailures(key: string, now: number) {
 		.map((r) => r.at.getTime());
 }
 
-/** Whether a sign-in for this e-mail from this client address may go ahead now. */
+/**
+ * Whether a sign-in for this e-mail from this client address may go ahead now: refused for this
+ * account from this address, or for this address altogether; slowed for the account wherever the
+ * failures came from.
+ */
 export function signInGate(email: string, clientAddress: string, now = Date.now()): SignInGate {
 	const byEmail = recentFailures(emailKey(email), now);
+	const byPair = recentFailures(pairKey(email, clientAddress), now);
 	const byClient = recentFailures(clientKey(clientAddress), now);
 	const refusedUntil = Math.max(
-		refusedUntilOf(byEmail, REFUSE_AFTER_FAILURES),
+		refusedUntilOf(byPair, REFUSE_AFTER_FAILURES),
 		refusedUntilOf(byClient, REFUSE_AFTER_FAILURES_PER_CLIENT)
 	);
 	if (refusedUntil > now)
@@ -44,7 +57,7 @@ export function signInGate(email: string, clientAddress: string, now = Date.now(
 			state: 'refused',
 			retryAfterMinutes: Math.max(1, Math.ceil((refusedUntil - now) / 60000))
 		};
-	const failures = Math.max(byEmail.length, byClient.length);
+	const failures = byEmail.length;
 	if (failures >= SLOW_AFTER_FAILURES)
 		return { state: 'slow', delayMs: Math.min(4000, 1000 * (failures - SLOW_AFTER_FAILURES + 1)) };
 	return { state: 'open' };
@@ -62,6 +75,7 @@ export function recordSignInFailure(email: string, clientAddress: string, now = 
 		tx.insert(signInFailures)
 			.values([
 				{ key: emailKey(email), at },
+				{ key: pairKey(email, clientAddress), at },
 				{ key: clientKey(clientAddress), at }
 			])
 			.run();
@@ -72,11 +86,11 @@ export function recordSignInFailure(email: string, clientAddress: string, now = 
 	});
 }
 
-export function clearSignInFailures(email: string) {
-	getDb()
-		.delete(signInFailures)
-		.where(eq(signInFailures.key, emailKey(email)))
-		.run();
+/** After a successful sign-in: the account's count, and its count from this address, start again. */
+export function clearSignInFailures(email: string, clientAddress?: string) {
+	const keys = [emailKey(email)];
+	if (clientAddress !== undefined) keys.push(pairKey(email, clientAddress));
+	getDb().delete(signInFailures).where(inArray(signInFailures.key, keys)).run();
 }
 
 export function throttleMessage(retryAfterMinutes: number) {
