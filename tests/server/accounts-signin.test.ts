@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { createUser } from '../../src/lib/server/accounts/users';
 import { authHandle } from '../../src/lib/server/auth';
 import { schema } from '../../src/lib/server/db';
-import { waitForMailTo } from '../../src/lib/server/dev/caught-mail';
+import { listCaughtMail, waitForMailTo } from '../../src/lib/server/dev/caught-mail';
 import { actions as signInActions } from '../../src/routes/(public)/signin/+page.server';
 import { actions as signUpActions } from '../../src/routes/(public)/signup/+page.server';
 import { actions as resetActions } from '../../src/routes/(public)/reset/+page.server';
@@ -173,16 +173,32 @@ describe('sign-up, then the mailed link', () => {
 		expect(later.thrown).toMatchObject({ status: 303, location: '/projects' });
 	});
 
-	it('says so next to the e-mail when the address already has an account (409)', async () => {
-		const { returned } = (await runAction(
-			signUpActions.default,
-			formEvent({
-				url: '/signup',
-				fields: { name: 'Flo 2', email: 'flo@shop.example', password: 'another long one' }
-			})
-		)) as { returned: { status: number; data: { form: { errors: Record<string, string[]> } } } };
-		expect(returned.status).toBe(409);
-		expect(returned.data.form.errors.email?.[0]).toMatch(/already exists/);
+	it('answers a known address exactly as a new one, and mails its owner instead (no enumeration)', async () => {
+		const sentAt = new Date();
+		const answer = async (email: string) => {
+			const { thrown } = await runAction(
+				signUpActions.default,
+				formEvent({
+					url: '/signup',
+					fields: { name: 'Flo 2', email, password: 'another long one' }
+				})
+			);
+			return thrown;
+		};
+		const known = await answer('flo@shop.example');
+		const fresh = await answer('new-flo@shop.example');
+		expect(known?.status).toBe(303);
+		expect(known?.location).toBe('/signin?sent=signup&email=flo%40shop.example');
+		expect(fresh?.location).toBe('/signin?sent=signup&email=new-flo%40shop.example');
+		const notice = await waitForMailTo('flo@shop.example', { dir: mail.dir, after: sentAt });
+		expect(notice.subject).toMatch(/already have a Spanwright account/);
+		// the known account is as it was: no second user, the password unchanged
+		const rows = db()
+			.db.select()
+			.from(schema.users)
+			.where(eq(schema.users.email, 'flo@shop.example'))
+			.all();
+		expect(rows).toHaveLength(1);
 	});
 });
 
@@ -200,6 +216,12 @@ describe('when mail cannot be sent', () => {
 			expect(returned.status).toBe(503);
 			expect(returned.data.form.message).toMatch(/could not send mail just now/);
 			expect(returned.data.form.data.email).toBe('flo@shop.example');
+			// and the same for an address with no account, so the 503 tells nothing either
+			const unknown = (await runAction(
+				resetActions.default,
+				formEvent({ url: '/reset', fields: { email: 'nobody-here@shop.example' } })
+			)) as { returned: { status: number } };
+			expect(unknown.returned.status).toBe(503);
 		} finally {
 			process.env.SMTP_URL = before;
 		}
@@ -228,5 +250,28 @@ describe('handleError', () => {
 		} finally {
 			console.error = original;
 		}
+	});
+});
+
+describe('a reset request', () => {
+	it('answers a known and an unknown address alike, and mails after answering', async () => {
+		const ask = async (email: string) =>
+			(await runAction(resetActions.default, formEvent({ url: '/reset', fields: { email } }))) as {
+				returned: { form: { message: string; valid: boolean } };
+			};
+		const after = new Date();
+		const known = await ask('flo@shop.example');
+		// the letter is not out yet when the page answers: it goes after
+		const caught = listCaughtMail(mail.dir).filter(
+			(m) => m.to.includes('flo@shop.example') && new Date(m.receivedAt) >= after
+		);
+		expect(caught).toEqual([]);
+		const unknown = await ask('nobody-at-all@shop.example');
+		expect(known.returned.form.valid).toBe(unknown.returned.form.valid);
+		expect(known.returned.form.message.replace('flo@shop.example', 'X')).toBe(
+			unknown.returned.form.message.replace('nobody-at-all@shop.example', 'X')
+		);
+		const letter = await waitForMailTo('flo@shop.example', { dir: mail.dir, after });
+		expect(letter.subject).toMatch(/new Spanwright password/);
 	});
 });

@@ -59,6 +59,34 @@ export function mailDown(e: unknown): null {
 	throw e;
 }
 
+let ready = { url: '', until: 0 };
+
+/**
+ * Whether the mail server answers (checked at most every 30 s). Forms that must not say whether an
+ * address has an account ask this first, for every address alike, then send after answering.
+ */
+export async function mailReady(now = Date.now()) {
+	if (ready.url === smtpUrl() && now < ready.until) return;
+	try {
+		await transporter().verify();
+	} catch (e) {
+		throw new MailUnavailable(e);
+	}
+	ready = { url: smtpUrl(), until: now + 30_000 };
+}
+
+/**
+ * Send after the answer has gone: the time a page takes then says nothing about whether a message
+ * was sent (an account exists). A failure is logged in one line; the person can ask again.
+ */
+export function sendLater(what: string, send: () => Promise<unknown>) {
+	setImmediate(() => {
+		send().catch((e) =>
+			console.warn(`[mail] ${what} not sent: ${e instanceof Error ? e.message : String(e)}`)
+		);
+	});
+}
+
 /** Send one message. Throws MailUnavailable when the server is away or refuses it. */
 export async function sendMail({ to, subject, text, html }: OutgoingMail) {
 	let info;
@@ -150,5 +178,21 @@ export async function sendPasswordReset(to: string, url: string) {
 		subject: 'Set a new Spanwright password',
 		text: `${lines.join('\n\n')}\n\n${url}\n\n${after}\n`,
 		html: letterHtml(lines, { href: url, label: 'Choose a new password' }, after)
+	});
+}
+
+/** Sent when someone signs up with an address that already has an account. */
+export async function sendAccountExistsNotice(to: string, signInUrl: string, resetUrl: string) {
+	const lines = [
+		'Hello,',
+		'Someone (perhaps you) tried to make a Spanwright account with this address. You already have one, so nothing new was made.',
+		`Sign in at ${signInUrl}, or if the password is lost, choose a new one:`
+	];
+	const after = 'If it was not you, ignore this message: your account is as it was.';
+	return sendMail({
+		to,
+		subject: 'You already have a Spanwright account',
+		text: `${lines.join('\n\n')}\n\n${resetUrl}\n\n${after}\n`,
+		html: letterHtml(lines, { href: resetUrl, label: 'Choose a new password' }, after)
 	});
 }

@@ -1,7 +1,7 @@
 import { and, eq, gt, isNull, or, sql } from 'drizzle-orm';
 import { getDb } from '../db';
 import { apiTokens, passwordResets, signInFailures, users } from '../db/schema';
-import { sendPasswordReset } from '../mail';
+import { mailReady, sendLater, sendPasswordReset } from '../mail';
 import { allowMailTo } from './mail-allowance';
 import { hashPassword } from './passwords';
 import { randomSecret, sha256 } from './secrets';
@@ -12,7 +12,7 @@ export const PASSWORD_RESET_TTL_MS = 60 * 60 * 1000;
 
 /**
  * Mail a one-time link for choosing a new password. Says nothing about whether the address has an
- * account: the caller shows the same answer either way.
+ * account: the caller shows the same answer either way, in the same time (the mail goes after).
  */
 export async function requestPasswordReset(
 	email: string,
@@ -22,6 +22,8 @@ export async function requestPasswordReset(
 	// counted for every address, known or not, so the answer gives nothing away
 	const allowed = allowMailTo(email, now);
 	if (!allowed.ok) return allowed;
+	// the same for every address: is mail working at all (MailUnavailable when not)
+	await mailReady();
 	const user = findUserByEmail(email);
 	if (!user?.email) return { ok: true };
 	const token = randomSecret();
@@ -33,7 +35,9 @@ export async function requestPasswordReset(
 			expiresAt: new Date(now + PASSWORD_RESET_TTL_MS)
 		})
 		.run();
-	await sendPasswordReset(user.email, `${origin}/reset/${token}`);
+	// sent after answering, so a known address takes no longer than an unknown one
+	const to = user.email;
+	sendLater('password reset', () => sendPasswordReset(to, `${origin}/reset/${token}`));
 	return { ok: true };
 }
 

@@ -1,11 +1,18 @@
 import { fail, redirect } from '@sveltejs/kit';
-import { setError, superValidate } from 'sveltekit-superforms';
+import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { signUpSchema } from '$lib/schemas/account';
 import { safeRedirectPath } from '$lib/schemas/return-path';
-import { AccountExistsError, createUser } from '$lib/server/accounts/users';
+import { hashPassword } from '$lib/server/accounts/passwords';
+import { AccountExistsError, createUser, findUserByEmail } from '$lib/server/accounts/users';
 import { mailSignInLink } from '$lib/server/auth';
-import { mailDown } from '$lib/server/mail';
+import {
+	linkOrigin,
+	mailDown,
+	mailReady,
+	sendAccountExistsNotice,
+	sendLater
+} from '$lib/server/mail';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/form-body';
 
@@ -22,28 +29,31 @@ export const actions: Actions = {
 	default: async (event) => {
 		const form = await superValidate(await readForm(event.request), zod4(signUpSchema));
 		if (!form.valid) return fail(400, { form });
-		try {
-			await createUser({
-				name: form.data.name,
-				email: form.data.email,
-				password: form.data.password
-			});
-		} catch (e) {
-			if (e instanceof AccountExistsError)
-				return setError(
-					form,
-					'email',
-					'An account with this address already exists. Sign in, or set a new password from the sign-in page.',
-					{ status: 409 }
+		const email = form.data.email.trim().toLowerCase();
+		const redirectTo = safeRedirectPath(form.data.redirectTo, '/projects');
+		// whether mail works at all, asked for every address alike
+		const ready = await mailReady().then(() => true, mailDown);
+		// The same answer, in the same time, whether or not the address has an account: the letters
+		// go after answering, and a known address costs a password hash too.
+		let created = false;
+		if (!findUserByEmail(email)) {
+			try {
+				await createUser({ name: form.data.name, email, password: form.data.password });
+				created = true;
+			} catch (e) {
+				if (!(e instanceof AccountExistsError)) throw e;
+			}
+		} else await hashPassword(form.data.password);
+		if (ready) {
+			const origin = linkOrigin(event.url);
+			if (created)
+				sendLater('sign-up confirmation', () => mailSignInLink(event, { email, redirectTo }));
+			else
+				sendLater('account-exists notice', () =>
+					sendAccountExistsNotice(email, `${origin}/signin`, `${origin}/reset`)
 				);
-			throw e;
 		}
-		// The mailed link confirms the address and signs them in; until then the password waits.
-		const mailed = await mailSignInLink(event, {
-			email: form.data.email,
-			redirectTo: safeRedirectPath(form.data.redirectTo, '/projects')
-		}).catch(mailDown);
-		const sent = !mailed ? 'mail-failed' : mailed.ok ? 'signup' : 'link';
+		const sent = ready ? 'signup' : 'mail-failed';
 		redirect(303, `/signin?sent=${sent}&email=${encodeURIComponent(form.data.email)}`);
 	}
 };
