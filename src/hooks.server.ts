@@ -6,6 +6,7 @@ import { actorForUserId } from '$lib/server/accounts/users';
 import { authHandle, authSecret } from '$lib/server/auth';
 import { apiJson } from '$lib/server/hooks/api-json';
 import { authCookies } from '$lib/server/hooks/auth-cookies';
+import { computeLimit } from '$lib/server/hooks/compute-limit';
 import { originCheck } from '$lib/server/hooks/origin-check';
 // units beyond the trade's table (unit-table.ts) are read on the server with mathjs
 import '$lib/engine/units/quantity-full';
@@ -66,6 +67,7 @@ export const handle = sequence(
 	securityHeaders,
 	originCheck,
 	apiJson,
+	computeLimit,
 	authCookies,
 	authHandle,
 	actorHandle

@@ -139,3 +139,25 @@ computeTable.push({
 			})
 		} as never)
 });
+
+computeTable.push({
+	route: 'POST /shelf',
+	label: 'over the per-address limit',
+	status: 429,
+	call: async () => {
+		const { computeLimit } = await import('../../../src/lib/server/hooks/compute-limit');
+		const { COMPUTE_REQUESTS } = await import('../../../src/lib/server/rate-limit');
+		const url = new URL('http://localhost/api/v1/shelf');
+		let res: Response = new Response();
+		for (let i = 0; i <= COMPUTE_REQUESTS; i++)
+			res = await computeLimit({
+				event: {
+					url,
+					request: new Request(url, { method: 'POST' }),
+					getClientAddress: () => '192.0.2.250'
+				},
+				resolve: () => post(shelf.POST, aShelf)
+			} as never);
+		return res;
+	}
+});

@@ -73,6 +73,16 @@ export const endedSessions = sqliteTable('ended_session', {
 	expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull()
 });
 
+/**
+ * Request counts of the open compute routes per client address (rate-limiter-flexible's SQLite
+ * store; its shape is the library's). In the database, so several app instances share the counts.
+ */
+export const rateLimits = sqliteTable('rate_limit', {
+	key: text('key').primaryKey(),
+	points: integer('points').notNull().default(0),
+	expire: integer('expire')
+});
+
 export const verificationTokens = sqliteTable(
 	'verificationToken',
 	{

@@ -1,0 +1,53 @@
+import { RateLimiterRes, RateLimiterSQLite } from 'rate-limiter-flexible';
+import { getDb, type Db } from './db';
+import { problem } from './http';
+
+/**
+ * The open compute routes (/shelf*, /joints, /stability, /cases/check) are free to call without an
+ * account, so each client address gets a budget: COMPUTE_REQUESTS per COMPUTE_WINDOW_S seconds,
+ * counted in the database (the `rate_limit` table) so that several app instances share it.
+ * Common practice, no source: generous for a person or a script, small for a flood.
+ */
+export const COMPUTE_REQUESTS = 120;
+export const COMPUTE_WINDOW_S = 60;
+
+let current: { db: Db; limiter: RateLimiterSQLite } | undefined;
+
+function limiter() {
+	const db = getDb();
+	if (current?.db !== db)
+		current = {
+			db,
+			limiter: new RateLimiterSQLite({
+				storeClient: db.$client,
+				storeType: 'better-sqlite3',
+				tableName: 'rate_limit',
+				tableCreated: true, // by the migrations
+				clearExpiredByTimeout: true,
+				keyPrefix: 'compute',
+				points: COMPUTE_REQUESTS,
+				duration: COMPUTE_WINDOW_S
+			})
+		};
+	return current.limiter;
+}
+
+/**
+ * Count one compute request from this address. Null when it may go ahead; otherwise the 429
+ * answer, with Retry-After in whole seconds.
+ */
+export async function limitCompute(address: string): Promise<Response | null> {
+	try {
+		await limiter().consume(address);
+		return null;
+	} catch (e) {
+		if (!(e instanceof RateLimiterRes)) throw e;
+		const seconds = Math.max(1, Math.ceil(e.msBeforeNext / 1000));
+		const res = problem(
+			429,
+			`Too many calculations from your address: at most ${COMPUTE_REQUESTS} a minute. Try again in ${seconds} s.`
+		);
+		res.headers.set('Retry-After', String(seconds));
+		return res;
+	}
+}
