@@ -8,6 +8,7 @@ import { apiJson } from '$lib/server/hooks/api-json';
 import { authCookies } from '$lib/server/hooks/auth-cookies';
 import { computeLimit } from '$lib/server/hooks/compute-limit';
 import { originCheck } from '$lib/server/hooks/origin-check';
+import { closeUnreadBody } from '$lib/server/hooks/unread-body';
 // units beyond the trade's table (unit-table.ts) are read on the server with mathjs
 import '$lib/engine/units/quantity-full';
 
@@ -64,6 +65,7 @@ export const securityHeaders: Handle = async ({ event, resolve }) => {
 
 // Headers outermost, so Auth.js's own responses (it answers /auth/* itself) get them too.
 export const handle = sequence(
+	closeUnreadBody,
 	securityHeaders,
 	originCheck,
 	apiJson,

@@ -8,6 +8,7 @@ import { schema } from '../../src/lib/server/db';
 import { apiJson } from '../../src/lib/server/hooks/api-json';
 import { authCookies } from '../../src/lib/server/hooks/auth-cookies';
 import { originCheck } from '../../src/lib/server/hooks/origin-check';
+import { closeUnreadBody } from '../../src/lib/server/hooks/unread-body';
 import { actorHandle, handleError, securityHeaders } from '../../src/hooks.server';
 import { actions as signInActions } from '../../src/routes/(public)/signin/+page.server';
 import { useTempDb } from './support/db';
@@ -204,5 +205,36 @@ describe('handleError', () => {
 		} as never);
 		expect(error).toHaveBeenCalledTimes(1);
 		expect(error.mock.calls[0][1]).toBeInstanceOf(Error);
+	});
+});
+
+describe('a body left unread', () => {
+	const post = () =>
+		new Request('http://localhost:5173/api/v1/projects', {
+			method: 'POST',
+			headers: { 'content-type': 'application/json' },
+			body: 'x'.repeat(300 * 1024)
+		});
+
+	it('closes the connection after the answer, so the next request on it does not wait', async () => {
+		const request = post();
+		const res = await closeUnreadBody({
+			event: { request, url: new URL(request.url) },
+			resolve: (() => new Response('{"error":"Sign in"}', { status: 401 })) as Resolve
+		} as never);
+		expect(res.status).toBe(401);
+		expect(res.headers.get('connection')).toBe('close');
+	});
+
+	it('keeps the connection when the body was read', async () => {
+		const request = post();
+		const res = await closeUnreadBody({
+			event: { request, url: new URL(request.url) },
+			resolve: (async () => {
+				await request.text();
+				return new Response('{}', { status: 201 });
+			}) as Resolve
+		} as never);
+		expect(res.headers.get('connection')).toBeNull();
 	});
 });
