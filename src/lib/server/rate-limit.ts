@@ -1,5 +1,6 @@
 import { RateLimiterRes, RateLimiterSQLite } from 'rate-limiter-flexible';
-import { getDb, type Db } from './db';
+import type Database from 'better-sqlite3';
+import { getSqlite } from './db';
 import { problem } from './http';
 
 /**
@@ -11,15 +12,15 @@ import { problem } from './http';
 export const COMPUTE_REQUESTS = 120;
 export const COMPUTE_WINDOW_S = 60;
 
-let current: { db: Db; limiter: RateLimiterSQLite } | undefined;
+let current: { db: Database.Database; limiter: RateLimiterSQLite } | undefined;
 
 function limiter() {
-	const db = getDb();
+	const db = getSqlite();
 	if (current?.db !== db)
 		current = {
 			db,
 			limiter: new RateLimiterSQLite({
-				storeClient: db.$client,
+				storeClient: db,
 				storeType: 'better-sqlite3',
 				tableName: 'rate_limit',
 				tableCreated: true, // by the migrations

@@ -51,6 +51,12 @@ export function getDb(): Db {
 	return opened.db;
 }
 
+/** The SQLite connection under getDb(), for libraries that take one (the rate limiter). */
+export function getSqlite(): Database.Database {
+	getDb();
+	return opened!.sqlite;
+}
+
 /** For tests: swap in a database (e.g. a temporary file) and get back the one it replaced. */
 export function useDb(next: { db: Db; sqlite: Database.Database } | undefined) {
 	const previous = opened;
