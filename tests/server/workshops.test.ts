@@ -71,3 +71,31 @@ describe('workshops, members and invitations', () => {
 		expect(statusOf(() => ws.switchWorkshop(cast.outsider, cast.workshopId))).toBe(404);
 	});
 });
+
+describe('accepting an invitation as an existing member', () => {
+	it('applies the role the owner chose, and says it changed', () => {
+		const cast = makeWorkshopWithCast();
+		const { token } = ws.createInvitation(cast.owner, cast.workshopId, cast.viewer.email, 'editor');
+		const { outcome } = ws.acceptInvitation(cast.viewer, token);
+		expect(outcome).toEqual({ kind: 'role-changed', from: 'viewer', role: 'editor' });
+		expect(ws.membershipOf(cast.viewer.id, cast.workshopId)?.role).toBe('editor');
+	});
+
+	it('never demotes the last owner, and says so', () => {
+		const cast = makeWorkshopWithCast();
+		const { token } = ws.createInvitation(cast.owner, cast.workshopId, cast.owner.email, 'viewer');
+		const { outcome } = ws.acceptInvitation(cast.owner, token);
+		expect(outcome).toEqual({ kind: 'kept-last-owner', role: 'owner', invited: 'viewer' });
+		expect(ws.membershipOf(cast.owner.id, cast.workshopId)?.role).toBe('owner');
+	});
+
+	it('a newcomer joins with the invited role', () => {
+		const cast = makeWorkshopWithCast();
+		const newcomer = makeUser('newcomer');
+		const { token } = ws.createInvitation(cast.owner, cast.workshopId, newcomer.email, 'viewer');
+		expect(ws.acceptInvitation(newcomer, token).outcome).toEqual({
+			kind: 'joined',
+			role: 'viewer'
+		});
+	});
+});

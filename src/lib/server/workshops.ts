@@ -209,6 +209,18 @@ export function findInvitation(token: string) {
 }
 
 /** Accept an invitation: the signed-in account must be the one it was sent to. */
+/** What accepting did: joined with the invited role, changed an existing role, or kept it. */
+export type InvitationOutcome =
+	| { kind: 'joined'; role: Role }
+	| { kind: 'role-changed'; from: Role; role: Role }
+	| { kind: 'unchanged'; role: Role }
+	| { kind: 'kept-last-owner'; role: 'owner'; invited: Role };
+
+/**
+ * Accept an invitation as the person it was sent to. A member already in the workshop gets the
+ * role the owner chose in the invitation, except that the last owner stays owner (a workshop keeps
+ * at least one); the answer says which of these happened.
+ */
 export function acceptInvitation(actor: Actor, token: string) {
 	const found = findInvitation(token);
 	if (found.state === 'unknown') error(404, 'This invitation link is not known.');
@@ -218,18 +230,38 @@ export function acceptInvitation(actor: Actor, token: string) {
 	if (inv.email !== actor.email.toLowerCase())
 		error(403, `This invitation was sent to ${inv.email}. Sign in with that address to accept it.`);
 	const db = getDb();
-	db.transaction((tx) => {
+	const outcome = db.transaction((tx): InvitationOutcome => {
 		const existing = tx
 			.select()
 			.from(memberships)
 			.where(and(eq(memberships.userId, actor.id), eq(memberships.workshopId, inv.workshopId)))
 			.get();
-		if (!existing)
+		let result: InvitationOutcome;
+		if (!existing) {
 			tx.insert(memberships)
 				.values({ userId: actor.id, workshopId: inv.workshopId, role: inv.role })
 				.run();
+			result = { kind: 'joined', role: inv.role };
+		} else if (existing.role === inv.role) result = { kind: 'unchanged', role: inv.role };
+		else {
+			const owners = tx
+				.select({ userId: memberships.userId })
+				.from(memberships)
+				.where(and(eq(memberships.workshopId, inv.workshopId), eq(memberships.role, 'owner')))
+				.all();
+			if (existing.role === 'owner' && owners.length === 1)
+				result = { kind: 'kept-last-owner', role: 'owner', invited: inv.role };
+			else {
+				tx.update(memberships)
+					.set({ role: inv.role })
+					.where(and(eq(memberships.userId, actor.id), eq(memberships.workshopId, inv.workshopId)))
+					.run();
+				result = { kind: 'role-changed', from: existing.role, role: inv.role };
+			}
+		}
 		tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, inv.id)).run();
 		tx.update(users).set({ currentWorkshopId: inv.workshopId }).where(eq(users.id, actor.id)).run();
+		return result;
 	});
-	return inv;
+	return { ...inv, outcome };
 }

@@ -18,7 +18,9 @@ export const load: PageServerLoad = ({ params, locals }) => {
 
 export const actions: Actions = {
 	accept: async ({ params, locals }) => {
-		acceptInvitation(requireActor(locals.actor), params.token);
-		redirect(303, '/projects');
+		const { outcome } = acceptInvitation(requireActor(locals.actor), params.token);
+		// a newcomer goes straight in; a member whose role changed (or could not) is told first
+		if (outcome.kind === 'joined') redirect(303, '/projects');
+		return { outcome };
 	}
 };
