@@ -19,7 +19,7 @@ export const init: ServerInit = () => {
 
 // Open API routes that read no stored data: no session to read, no Auth.js work per request.
 const OPEN_API =
-	/^\/api\/v1\/(shelf(\/[\w-]+)?|joints|stability|cases\/check|materials|health|openapi\.json)\/?$/;
+	/^\/api\/v1\/(shelf(\/[\w-]+)?|joints|stability|cases\/check|walls\/(check|cutlist|sheets)|materials|health|openapi\.json)\/?$/;
 
 /** Who is acting: an API token on /api/ requests, else the Auth.js session cookie. */
 export const actorHandle: Handle = async ({ event, resolve }) => {

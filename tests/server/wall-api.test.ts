@@ -114,7 +114,7 @@ describe('POST /api/v1/walls/*', () => {
 	});
 
 	it('is in the OpenAPI document', () => {
-		const doc = openApiDocument('test');
+		const doc = openApiDocument('test') as { paths: Record<string, Record<string, unknown>> };
 		for (const p of ['/walls/check', '/walls/cutlist', '/walls/sheets'])
 			expect((doc.paths[p].post as { requestBody?: unknown }).requestBody).toBeDefined();
 	});

@@ -10,6 +10,9 @@ import * as minEdge from '../../../src/routes/api/v1/shelf/min-edge/+server';
 import * as maxLoad from '../../../src/routes/api/v1/shelf/max-load/+server';
 import * as materials from '../../../src/routes/api/v1/materials/+server';
 import * as health from '../../../src/routes/api/v1/health/+server';
+import * as wallCheck from '../../../src/routes/api/v1/walls/check/+server';
+import * as wallCutList from '../../../src/routes/api/v1/walls/cutlist/+server';
+import * as wallSheets from '../../../src/routes/api/v1/walls/sheets/+server';
 
 export const aShelf = {
 	span: '32"',
@@ -42,6 +45,33 @@ export const aBookcase = {
 			kind: 'fixed',
 			joint: 'pocket-screw',
 			loads: [{ kind: 'area', pressure: '40 lbf/ft^2' }]
+		}
+	]
+};
+
+/** Two units side by side, as in the wall API test. */
+export const aWall = {
+	name: 'Two units',
+	cases: [
+		{
+			name: 'bookcase',
+			width: '30"',
+			height: '80"',
+			depth: '17"',
+			sides: { material: 'mdo', thickness: '23/32"' },
+			back: { material: 'softwood-plywood', thickness: '1/4"' },
+			base: { height: '3 1/2"' },
+			shelves: [
+				{ height: '40"', kind: 'fixed', loads: [{ kind: 'area', pressure: '40 lbf/ft^2' }] }
+			]
+		},
+		{
+			name: 'low unit',
+			width: '30"',
+			height: '30"',
+			depth: '17"',
+			sides: { material: 'mdo', thickness: '23/32"' },
+			base: { height: '3 1/2"' }
 		}
 	]
 };
@@ -117,6 +147,30 @@ export const computeTable: ComputeRow[] = [
 				depth: '17"',
 				construction: { weight: '100 lb' }
 			})
+	},
+	{
+		route: 'POST /walls/check',
+		label: 'checked',
+		status: 200,
+		call: () => post(wallCheck.POST, aWall)
+	},
+	{
+		route: 'POST /walls/check',
+		label: 'a field wrong',
+		status: 422,
+		call: () => post(wallCheck.POST, { ...aWall, cases: 'many' })
+	},
+	{
+		route: 'POST /walls/cutlist',
+		label: 'listed',
+		status: 200,
+		call: () => post(wallCutList.POST, aWall)
+	},
+	{
+		route: 'POST /walls/sheets',
+		label: 'laid out',
+		status: 200,
+		call: () => post(wallSheets.POST, aWall)
 	},
 	{
 		route: 'POST /cases/check',

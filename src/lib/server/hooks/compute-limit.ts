@@ -2,7 +2,8 @@ import type { Handle } from '@sveltejs/kit';
 import { limitCompute } from '../rate-limit';
 
 /** The open compute routes: free to call, so limited per client address. */
-export const COMPUTE_ROUTES = /^\/api\/v1\/(shelf(\/[\w-]+)?|joints|stability|cases\/check)\/?$/;
+export const COMPUTE_ROUTES =
+	/^\/api\/v1\/(shelf(\/[\w-]+)?|joints|stability|cases\/check|walls\/(check|cutlist|sheets))\/?$/;
 
 /** 429 with Retry-After once an address has used its budget (see rate-limit.ts). */
 export const computeLimit: Handle = async ({ event, resolve }) => {
