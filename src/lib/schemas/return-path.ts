@@ -4,6 +4,7 @@
 const BASE = 'http://return-path.invalid';
 // C0 control characters and DEL: browsers drop tabs and newlines from URLs (`/\t/host` is `//host`
 // to them), and a CR or LF in a Location header is refused by the server.
+// eslint-disable-next-line no-control-regex -- removing control characters is the point
 const CONTROL = /[\u0000-\u001f\u007f]/g;
 
 /**
