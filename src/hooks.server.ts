@@ -52,7 +52,7 @@ export const securityHeaders: Handle = async ({ event, resolve }) => {
 	const headers: Record<string, string> = { ...SECURITY_HEADERS };
 	if (!dev) headers['Strict-Transport-Security'] = 'max-age=63072000; includeSubDomains';
 	// what a signed-in person sees is theirs: no shared cache keeps it, no browser cache stores it
-	if (event.locals.actor) headers['Cache-Control'] = 'private, no-store';
+	if (event.locals?.actor) headers['Cache-Control'] = 'private, no-store';
 	try {
 		for (const [name, value] of Object.entries(headers)) response.headers.set(name, value);
 	} catch {
