@@ -176,13 +176,25 @@ describe('sign-up, then the mailed link', () => {
 	it('answers a known address exactly as a new one, and mails its owner instead (no enumeration)', async () => {
 		const sentAt = new Date();
 		const answer = async (email: string) => {
+			// like SvelteKit's, these cookies cannot be set once the answer has gone
+			const jar = cookieJar();
+			let answered = false;
+			const cookies = {
+				...jar,
+				set: (...args: Parameters<typeof jar.set>) => {
+					if (answered) throw new Error('Cannot use `cookies.set(...)` after the response');
+					jar.set(...args);
+				}
+			};
 			const { thrown } = await runAction(
 				signUpActions.default,
 				formEvent({
 					url: '/signup',
-					fields: { name: 'Flo 2', email, password: 'another long one' }
+					fields: { name: 'Flo 2', email, password: 'another long one' },
+					cookies: cookies as never
 				})
 			);
+			answered = true;
 			return thrown;
 		};
 		const known = await answer('flo@shop.example');
@@ -192,6 +204,12 @@ describe('sign-up, then the mailed link', () => {
 		expect(fresh?.location).toBe('/signin?sent=signup&email=new-flo%40shop.example');
 		const notice = await waitForMailTo('flo@shop.example', { dir: mail.dir, after: sentAt });
 		expect(notice.subject).toMatch(/already have a Spanwright account/);
+		// the new address gets its confirmation link, sent after the answer
+		const confirmation = await waitForMailTo('new-flo@shop.example', {
+			dir: mail.dir,
+			after: sentAt
+		});
+		expect(confirmation.links.some((l) => l.includes('/auth/callback/'))).toBe(true);
 		// the known account is as it was: no second user, the password unchanged
 		const rows = db()
 			.db.select()

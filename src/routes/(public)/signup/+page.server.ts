@@ -1,4 +1,4 @@
-import { fail, redirect } from '@sveltejs/kit';
+import { fail, redirect, type RequestEvent } from '@sveltejs/kit';
 import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { signUpSchema } from '$lib/schemas/account';
@@ -25,6 +25,14 @@ export const load: PageServerLoad = async ({ locals, url }) => {
 	};
 };
 
+const detachedCookies: RequestEvent['cookies'] = {
+	get: () => undefined,
+	getAll: () => [],
+	set: () => {},
+	delete: () => {},
+	serialize: () => ''
+};
+
 export const actions: Actions = {
 	default: async (event) => {
 		const form = await superValidate(await readForm(event.request), zod4(signUpSchema));
@@ -47,7 +55,11 @@ export const actions: Actions = {
 		if (ready) {
 			const origin = linkOrigin(event.url);
 			if (created)
-				sendLater('sign-up confirmation', () => mailSignInLink(event, { email, redirectTo }));
+				// after the answer has gone, the page's cookies can no longer be set: Auth.js gets a
+				// stand-in (sending a link sets nothing the person needs)
+				sendLater('sign-up confirmation', () =>
+					mailSignInLink({ ...event, cookies: detachedCookies }, { email, redirectTo })
+				);
 			else
 				sendLater('account-exists notice', () =>
 					sendAccountExistsNotice(email, `${origin}/signin`, `${origin}/reset`)
