@@ -42,3 +42,4 @@ export type {
 	DesignPath
 } from './case';
 export { loadPresets, type LoadPreset } from '../../../reference/load-presets';
+export { CREEP_TIME_EXPONENT, LONG_TERM_DAYS, creepShare, sagAfter } from './creep-time';
