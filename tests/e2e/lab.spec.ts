@@ -51,8 +51,8 @@ test('the lab redraws on every movement and states the law from the engine', asy
 test('a teacher steps through the span experiment from the keyboard', async ({ page }) => {
 	await page.setViewportSize({ width: 1920, height: 1080 });
 	await page.goto('/lab?view=projector');
-	await expect(page.getByRole('link', { name: 'Projector view' })).toHaveCount(0);
-	await page.getByLabel('Experiment').selectOption('span');
+	await expect(page.getByRole('link', { name: 'Projector view', exact: true })).toHaveCount(0);
+	await page.getByRole('combobox', { name: 'Experiment' }).selectOption('span');
 	await expect(
 		page.getByText('Predict: We double the span to 48". What happens to the sag?')
 	).toBeVisible();

@@ -173,6 +173,11 @@ export function timeText(days: number): string {
 	return stop ? stop.label : `${formatNumber(days)} days`;
 }
 
+/** "when loaded", "after one week" */
+export function whenText(days: number): string {
+	return days > 0 ? `after ${timeText(days)}` : 'when loaded';
+}
+
 export function shortName(materialId: string): string {
 	const m = materials.find((x) => x.id === materialId);
 	if (!m) return materialId;

@@ -74,7 +74,7 @@ export function lawsFor(s: LabState, previousMaterial: string | null = null): La
 	const [thickB, thickR] = ratios({ thicknessM: s.thicknessM * 2 });
 	laws.push({ variable: 'thickness', ...pair(thickB, thickR, 'Twice the thickness') });
 	const [depthB, depthR] = ratios({ depthM: s.depthM * 2 });
-	laws.push({ variable: 'depth', ...pair(depthB, depthR, 'Twice the depth, same books') });
+	laws.push({ variable: 'depth', ...pair(depthB, depthR, 'Twice the depth, same load') });
 
 	// stiffness is the instant sag's business; creep is the time law's
 	const other = comparedMaterial(s.material, previousMaterial);

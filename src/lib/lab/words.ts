@@ -2,7 +2,7 @@
  * The lab's shelf in one sentence: what is drawn and how far it sags, for the readout under the
  * drawing and for screen readers.
  */
-import { SUPPORTS, shortName, timeText, type LabRun, type LabState } from './lab-state';
+import { SUPPORTS, shortName, whenText, type LabRun, type LabState } from './lab-state';
 
 export function describeLab(
 	s: LabState,
@@ -19,6 +19,6 @@ export function describeLab(
 	return (
 		`A ${format(s.spanM)} ${shortName(s.material)} shelf, ${format(s.thicknessM)} thick and ` +
 		`${format(s.depthM)} deep${nosing}, ${held}, carrying ${load}, sags about ${format(run.sagM)} ` +
-		`after ${timeText(s.days)} (${format(run.result.sag.instant)} when loaded). An estimate.`
+		`${whenText(s.days)}${s.days > 0 ? ` (${format(run.result.sag.instant)} when loaded)` : ''}. An estimate.`
 	);
 }

@@ -1,5 +1,6 @@
 // Browser benchmark: how long a span change takes to reach the screen, in Debian's Chromium, on
-// the shelf check (the elevation drawing) and the comparison (the sag chart). Run by
+// the shelf check (the elevation drawing), the comparison (the sag chart) and the teaching lab
+// (its span slider to the lab's drawing and chart). Run by
 // tests/bench/run.sh after `npx vite build`; it builds nothing itself. It reports, it never fails
 // on a slow number: the exit code says only whether the measurement could be made.
 //
@@ -21,6 +22,11 @@ const SAMPLES = Number(process.env.BENCH_SAMPLES ?? 60);
 const TARGET_MS = 16; // issue 5: "under 16 ms at the median, so a slider feels continuous"
 // Demo scenario accounts (invented, src/lib/server/demo/accounts.ts): the shop's editor.
 const EDITOR = { email: 'tomas@quillfeather.test', password: 'sawdust-and-glue' };
+
+/** The lab's span slider positions, 24 to 47.5 inches by halves, as the range input takes them. */
+function labSpan(i: number): string {
+	return String(24 + (i % 48) / 2);
+}
 
 /** Spans to type, 24" to 47 1/2" by half inches: every sample differs from the one before. */
 function spanText(i: number): string {
@@ -121,12 +127,18 @@ interface Sample {
 	frameMs: number;
 }
 
-async function measure(page: Page, input: string, screen: string, label: string) {
+async function measure(
+	page: Page,
+	input: string,
+	screen: string,
+	label: string,
+	valueOf: (i: number) => string = spanText
+) {
 	const run = (value: string) =>
 		page.evaluate(`(${MEASURE})(${JSON.stringify({ input, screen, value })})`) as Promise<Sample>;
 	const samples: Sample[] = [];
 	for (let i = 0; i < WARMUP + SAMPLES; i++) {
-		const sample = await run(spanText(i));
+		const sample = await run(valueOf(i));
 		if (i >= WARMUP) samples.push(sample);
 		// let the shelf check's deferred advice (a 120 ms timer) run outside the next sample
 		await page.waitForTimeout(250);
@@ -136,7 +148,10 @@ async function measure(page: Page, input: string, screen: string, label: string)
 	const field = page
 		.locator(input)
 		.locator('xpath=ancestor::div[contains(@class,"quantity-input")]');
-	const said = ok.length < samples.length ? (await field.innerText()).replace(/\s+/g, ' ') : '';
+	const said =
+		ok.length < samples.length && (await field.count())
+			? (await field.innerText()).replace(/\s+/g, ' ')
+			: '';
 	return { label, samples: samples.length, unchanged: samples.length - ok.length, ok, said };
 }
 
@@ -244,14 +259,27 @@ async function main() {
 			'Comparison (/projects/{id}/compare/new), span → sag chart'
 		);
 
+		// the lab needs no account; its span slider is the first range input
+		await page.goto('/lab');
+		await page.waitForLoadState('networkidle');
+		await page.locator('svg.lab-shelf').waitFor();
+		const lab = await measure(
+			page,
+			'.lab-slider input[type=range]',
+			'.lab',
+			'Teaching lab (/lab), span slider → lab drawing and chart',
+			labSpan
+		);
+
 		const version = browser.version();
 		console.log(
 			`\nSpan input to screen, Chromium ${version} headless, ${WARMUP} warm-up runs then ${SAMPLES} samples each`
 		);
 		report(shelf);
 		report(compare);
+		report(lab);
 		// a screen that never followed the input is a broken page, not a slow one
-		const dead = [shelf, compare].filter((r) => r.ok.length === 0).map((r) => r.label);
+		const dead = [shelf, compare, lab].filter((r) => r.ok.length === 0).map((r) => r.label);
 		if (dead.length) throw new Error(`no sample changed the SVG on: ${dead.join('; ')}`);
 	} finally {
 		await browser?.close();
