@@ -7,13 +7,14 @@ import {
 	METRES_PER_INCH,
 	NEWTONS_PER_LBF,
 	NEWTONS_PER_METRE_PER_PLF,
+	DEFAULT_SHELF_OPTIONS,
 	STANDARD_GRAVITY,
-	analyzeShelf,
+	analyzeInput,
 	formatLength,
 	formatNumber,
 	materials,
 	sagAfter,
-	type ShelfRequest,
+	type ShelfInput,
 	type ShelfResult
 } from '../engine/index';
 
@@ -184,16 +185,16 @@ export function shortName(materialId: string): string {
 	return m.name.replace(/\s*\(.*?\)/g, '').replace(/,.*$/, '');
 }
 
-export function labRequest(s: LabState, extra: Partial<ShelfRequest> = {}): ShelfRequest {
-	const support: ShelfRequest['support'] =
+export function labRequest(s: LabState, extra: Partial<ShelfInput> = {}): ShelfInput {
+	const support: ShelfInput['support'] =
 		s.support === 'pins'
 			? 'simple'
 			: s.support === 'fixed'
 				? 'fixed'
 				: s.support === 'wall'
 					? 'cantilever'
-					: { spans: [s.spanM / 2, s.spanM / 2] };
-	const loads: ShelfRequest['loads'] =
+					: { spans: [s.spanM / 2, s.spanM / 2], ends: 'simple' };
+	const loads: ShelfInput['loads'] =
 		s.loadKind === 'books'
 			? s.booksNPerM > 0
 				? [{ kind: 'line', intensity: s.booksNPerM }]
@@ -212,7 +213,12 @@ export function labRequest(s: LabState, extra: Partial<ShelfRequest> = {}): Shel
 			s.nosingM > 0
 				? [{ side: 'front', material: s.material, height: s.nosingM, thickness: NOSING.thicknessM }]
 				: [],
+		grain: 'along',
+		selfWeight: true,
 		duration: 'long',
+		service: 'dry',
+		limit: 'L/144',
+		options: DEFAULT_SHELF_OPTIONS,
 		...extra
 	};
 }
@@ -229,8 +235,8 @@ export interface LabRun {
  * Run the engine on the lab's shelf. The shape after a given time is the long-term shape scaled to
  * the sag at that time (exact for one material throughout, as every lab shelf is).
  */
-export function runLab(s: LabState, extra: Partial<ShelfRequest> = {}): LabRun {
-	const result = analyzeShelf(labRequest(s, extra));
+export function runLab(s: LabState, extra: Partial<ShelfInput> = {}): LabRun {
+	const result = analyzeInput(labRequest(s, extra));
 	const sagM = sagAfter(result.sag.instant, result.sag.longTerm, s.days);
 	const scale = result.sag.longTerm > 0 ? sagM / result.sag.longTerm : 0;
 	const curve = result.curve.map(([x, y]) => [x, y * scale] as [number, number]);

@@ -33,7 +33,7 @@ describe('creep with time under load', () => {
 describe('the lab shelf', () => {
 	it('asks the engine for the shelf the sliders show', () => {
 		const r = labRequest({ ...START, support: 'divider', nosingM: 1.5 * IN });
-		expect(r.support).toEqual({ spans: [18 * IN, 18 * IN] });
+		expect(r.support).toEqual({ spans: [18 * IN, 18 * IN], ends: 'simple' });
 		expect(r.loads).toHaveLength(1);
 		expect(r.loads![0]).toMatchObject({ kind: 'line' });
 		expect((r.loads![0] as { intensity: number }).intensity).toBeCloseTo(20 * PLF, 4);
