@@ -1,22 +1,20 @@
 /**
- * The save form of an analysis screen: the name, the input as JSON (the screen's live state) and
- * the version it was opened at. The input is then checked by its kind's own schema.
+ * The save form of an analysis screen (superforms, sent as JSON): the name, the screen's live input
+ * and the version it was opened at. The input is validated once, by its kind's schema in the
+ * registry (src/lib/kinds/registry.ts), when the data module computes it.
  */
 import { z } from 'zod';
 import { analysisCreateSchema } from './analysis';
 
-export const analysisFormSchema = z.object({
+export const analysisSaveSchema = z.object({
 	name: analysisCreateSchema.shape.name,
-	input: z
-		.string()
-		.max(200_000, 'The input is too large to save.')
-		.transform((text, ctx) => {
-			try {
-				return JSON.parse(text) as unknown;
-			} catch {
-				ctx.addIssue({ code: 'custom', message: 'The input could not be read; reload the page.' });
-				return z.NEVER;
-			}
-		}),
-	version: z.coerce.number().int().min(1).optional()
+	input: z.unknown(),
+	version: z.number().int().min(1).optional()
 });
+export type AnalysisSave = z.infer<typeof analysisSaveSchema>;
+
+/** What a save says back: "Saved." or why it was refused. */
+export interface SaveMessage {
+	text: string;
+	ok: boolean;
+}

@@ -1,63 +1,80 @@
-// The save action shared by the analysis screens: validate the form and the input with the shared
-// schemas, then create (303 to the saved analysis) or update (409 when someone saved in between).
+// The save form shared by the analysis screens (superforms, JSON): the name and version are checked
+// here, the input once by its kind's schema when the data module computes it; then create (303 to
+// the saved analysis) or update (409 when someone saved in between).
 import { error, fail, redirect, type RequestEvent } from '@sveltejs/kit';
-import type { z } from 'zod';
-import { requireActor } from '$lib/server/access';
+import { message, superValidate } from 'sveltekit-superforms';
+import { zod4 } from 'sveltekit-superforms/adapters';
+import { requireActor, requireRole } from '$lib/server/access';
 import { AnalysisProblem, createAnalysis, getAnalysis, updateAnalysis } from '$lib/server/analyses';
-import type { AnalysisKind } from '$lib/server/db/schema';
-import { analysisFormSchema } from '$lib/schemas/analysis-form';
+import { kindLabel, kindScreenPath, type AnalysisKind } from '$lib/kinds/names';
+import { getProject } from '$lib/server/projects';
+import {
+	analysisSaveSchema,
+	type AnalysisSave,
+	type SaveMessage
+} from '$lib/schemas/analysis-form';
 import { readForm } from '$lib/server/form-body';
-import { fieldIssues } from '$lib/schemas/issues';
 
-type Issue = { path: (string | number)[]; message: string };
+const adapter = zod4(analysisSaveSchema);
 
-export async function saveAnalysis(
-	event: RequestEvent,
-	kind: AnalysisKind,
-	inputSchema: z.ZodType,
-	screen: string,
-	analysisId?: string
-) {
+/** The save form of a screen: a new analysis's default name, or a saved one's name and version. */
+export function saveForm(initial: { name: string; version?: number }) {
+	return superValidate<AnalysisSave, SaveMessage>({ ...initial, input: null }, adapter, {
+		errors: false
+	});
+}
+
+/** "input.depth: Must be greater than zero." — the first field the server refused, by its path. */
+function refusal(e: AnalysisProblem) {
+	const first = e.issues[0];
+	if (!first) return e.message;
+	return `${e.message} ${first.path.length ? `${first.path.join('.')}: ` : ''}${first.message}`;
+}
+
+export async function saveAnalysis(event: RequestEvent, kind: AnalysisKind, analysisId?: string) {
 	const actor = requireActor(event.locals.actor);
 	const projectId = event.params.id!;
-	const form = analysisFormSchema.safeParse(Object.fromEntries(await readForm(event.request)));
-	if (!form.success) {
-		const issues: Issue[] = fieldIssues(form.error);
-		return fail(400, { message: issues[0]?.message ?? 'Check the form.', issues });
-	}
-	const input = inputSchema.safeParse(form.data.input);
-	if (!input.success) {
-		const issues = fieldIssues(input.error).map((i) => ({
-			path: ['input', ...i.path],
-			message: i.message
-		}));
-		return fail(400, { message: 'Some fields need attention before saving.', issues });
-	}
+	const form = await superValidate<AnalysisSave, SaveMessage>(
+		await readForm(event.request),
+		adapter
+	);
+	if (!form.valid) return fail(400, { form });
+	const { name, input, version } = form.data;
 	let id: string;
 	try {
 		if (analysisId) {
-			const saved = updateAnalysis(actor, analysisId, {
-				name: form.data.name,
-				input: form.data.input,
-				version: form.data.version ?? 1
-			});
-			return { saved: true, version: saved.version };
+			const saved = updateAnalysis(actor, analysisId, { name, input, version: version ?? 1 });
+			form.data.version = saved.version;
+			return message(form, { text: 'Saved.', ok: true });
 		}
-		id = createAnalysis(actor, projectId, {
-			kind,
-			name: form.data.name,
-			input: form.data.input
-		}).id;
+		id = createAnalysis(actor, projectId, { kind, name, input }).id;
 	} catch (e) {
 		if (e instanceof AnalysisProblem)
-			return fail(e.status, { message: e.message, issues: e.issues as Issue[] });
+			return message(form, { text: refusal(e), ok: false } satisfies SaveMessage, {
+				status: e.status === 409 ? 409 : 422
+			});
 		throw e;
 	}
-	redirect(303, `/projects/${projectId}/${screen}/${id}`);
+	redirect(303, kindScreenPath(projectId, kind, id));
+}
+
+/** The load of a new analysis's screen: an editor's (viewers read saved ones), named by its kind. */
+export async function loadNewAnalysis(
+	event: Pick<RequestEvent, 'locals' | 'params'>,
+	kind: AnalysisKind
+) {
+	const actor = requireActor(event.locals.actor);
+	const { project } = getProject(actor, event.params.id!);
+	const { role } = requireRole(actor, project.workshopId, 'editor');
+	return {
+		project: { id: project.id, name: project.name },
+		role,
+		save: await saveForm({ name: kindLabel(kind) })
+	};
 }
 
 /** The load of a saved analysis's screen: the analysis, if it is of this kind and in this project. */
-export function loadSavedAnalysis(
+export async function loadSavedAnalysis(
 	event: Pick<RequestEvent, 'locals' | 'params'>,
 	kind: AnalysisKind
 ) {
@@ -76,6 +93,7 @@ export function loadSavedAnalysis(
 			version: analysis.version,
 			updatedAt: analysis.updatedAt,
 			updatedByName: analysis.updatedByName
-		}
+		},
+		save: await saveForm({ name: analysis.name, version: analysis.version })
 	};
 }

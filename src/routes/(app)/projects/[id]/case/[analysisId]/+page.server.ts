@@ -1,9 +1,8 @@
-import { caseDesignSchema } from '$lib/schemas/case';
 import { loadSavedAnalysis, saveAnalysis } from '../../save-analysis.server';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = (event) => loadSavedAnalysis(event, 'case');
 
 export const actions: Actions = {
-	save: (event) => saveAnalysis(event, 'case', caseDesignSchema, 'case', event.params.analysisId)
+	save: (event) => saveAnalysis(event, 'case', event.params.analysisId)
 };

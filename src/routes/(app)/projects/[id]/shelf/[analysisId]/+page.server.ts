@@ -1,10 +1,8 @@
-import { shelfRequestSchema } from '$lib/schemas/shelf';
 import { loadSavedAnalysis, saveAnalysis } from '../../save-analysis.server';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = (event) => loadSavedAnalysis(event, 'shelf');
 
 export const actions: Actions = {
-	save: (event) =>
-		saveAnalysis(event, 'shelf', shelfRequestSchema, 'shelf', event.params.analysisId)
+	save: (event) => saveAnalysis(event, 'shelf', event.params.analysisId)
 };
