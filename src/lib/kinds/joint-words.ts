@@ -54,5 +54,11 @@ export function describeJoint(plan: JointPlan, unit: ReaderUnit): JointSentences
 		: plan.pass
 			? `${head}; carries the load at ${percent(plan.utilisation)} of its estimated capacity.`
 			: `${head}; overloaded: ${percent(plan.utilisation)} of its estimated capacity.`;
-	return { plan: `${head}: ${plan.description}.`, verdict, checks, summary, pass: plan.pass };
+	// "pocket screw #8 × 1-1/4" coarse thread" → "each #8 × 1-1/4" coarse thread"
+	const [one] = FASTENER_WORDS[plan.fastener];
+	const each = plan.description.startsWith(one)
+		? plan.description.slice(one.length).trim()
+		: plan.description;
+	const spec = each ? (plan.count === 1 ? `, ${each}` : `, each ${each}`) : '';
+	return { plan: `${head}${spec}.`, verdict, checks, summary, pass: plan.pass };
 }
