@@ -1,0 +1,8 @@
+import { loadNewAnalysis, saveAnalysis } from '../../save-analysis.server';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = (event) => loadNewAnalysis(event, 'stability');
+
+export const actions: Actions = {
+	save: (event) => saveAnalysis(event, 'stability')
+};
