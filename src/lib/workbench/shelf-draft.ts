@@ -227,6 +227,15 @@ export const FIELD_PLACES: Partial<Record<keyof ShelfDraft, { id: string; label:
 	limitRatio: { id: 'limit-ratio', label: 'Limit' }
 };
 
+/** A field's place, named as the form names it for this support (a wall-hung shelf's reach and width). */
+export function fieldPlace(key: keyof ShelfDraft, support: SupportChoice) {
+	const place = FIELD_PLACES[key];
+	if (!place || support !== 'cantilever') return place;
+	if (key === 'span') return { ...place, label: 'Reach out from the wall' };
+	if (key === 'depth') return { ...place, label: 'Width along the wall' };
+	return place;
+}
+
 export function fieldOf(path: (string | number)[]): keyof ShelfDraft | 'form' {
 	const [head, , key] = path;
 	if (head === 'span' || head === 'support') return 'span';

@@ -56,8 +56,12 @@ export function drawingDescription(
 	const strips = [d.front.on && 'a solid nosing on the front edge', d.below.on && 'a cleat below']
 		.filter(Boolean)
 		.join(' and ');
+	const shelf =
+		d.support === 'cantilever'
+			? `Side view of a shelf reaching ${format(r.span)} out from the wall, ${format(metres(d.depth, unit, 0))} wide along it and ${format(metres(d.thickness, unit, 0))} thick, ${held}`
+			: `Front elevation of a ${format(r.span)} shelf, ${format(metres(d.thickness, unit, 0))} thick, ${held}`;
 	return (
-		`Front elevation of a ${format(r.span)} shelf, ${format(metres(d.thickness, unit, 0))} thick, ${held}` +
+		shelf +
 		`${strips ? `, with ${strips}` : ''}. ` +
 		`It carries ${d.load || 'only its own weight'} and is drawn sagging ${format(r.sag[r.sag.checked])} ` +
 		`at ${format(r.sag.at)} from the left end, against a limit of ${format(r.limit.allowed)}.`
