@@ -12,7 +12,7 @@ export interface LoadPreset {
 	kind: 'area' | 'line';
 	/** Pa for an area load, N/m for a line load */
 	valueSI: number;
-	/** what lies on the shelf, for "after a year under the same …" */
+	/** what lies on the shelf, for "in the long run under the same …" */
 	contents: string;
 	source: string;
 }
