@@ -3,8 +3,8 @@
  * becomes input. Inches as a fraction when the value is an exact 64th (23/32"), else decimal inches
  * with the digits it needs; millimetres with the digits they need.
  */
-import { METRES_PER_INCH, formatLength } from '../engine/length';
-import { NEWTONS_PER_LBF as LBF_IN_N } from '../engine/si';
+import { METRES_PER_INCH, formatLength } from '../engine/units/length';
+import { NEWTONS_PER_LBF as LBF_IN_N } from '../engine/units/si';
 import type { UserLengthUnit } from './lengths';
 
 const CLOSE = 1e-9;

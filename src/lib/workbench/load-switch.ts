@@ -4,14 +4,14 @@
  * wants pounds; when the load or the shelf's size cannot be read, the field is cleared with a hint.
  */
 import { withUnitMark } from '../components/quantity-input/reading';
-import { formatLength, parseLength } from '../engine/length';
+import { formatLength, parseLength } from '../engine/units/length';
 import {
 	formatForce,
 	formatLineLoad,
 	formatPressure,
 	tryParseQuantity,
 	type QuantityKind
-} from '../engine/quantity';
+} from '../engine/units/quantity';
 import { loadUnitsFor, type UserLengthUnit } from './lengths';
 import type { LoadKind, ShelfDraft } from './shelf-draft';
 
