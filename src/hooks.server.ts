@@ -9,12 +9,16 @@ import { authCookies } from '$lib/server/hooks/auth-cookies';
 import { computeLimit } from '$lib/server/hooks/compute-limit';
 import { originCheck } from '$lib/server/hooks/origin-check';
 import { closeUnreadBody } from '$lib/server/hooks/unread-body';
+import { sweepOrphanFiles } from '$lib/server/documents';
 // units beyond the trade's table (unit-table.ts) are read on the server with mathjs
 import '$lib/engine/units/quantity-full';
 
 /** Refuse to start a production server without AUTH_SECRET, rather than fail every request. */
 export const init: ServerInit = () => {
-	if (!building) authSecret();
+	if (building) return;
+	authSecret();
+	// files left by a crash mid-upload or a deleted project; never holds up the start
+	sweepOrphanFiles().catch((e) => console.error('Sweeping orphan document files failed:', e));
 };
 
 // Open API routes that read no stored data: no session to read, no Auth.js work per request.

@@ -2,7 +2,8 @@ import { and, asc, count, desc, eq, type SQL } from 'drizzle-orm';
 import { requireRole, type Actor } from './access';
 import { getDb } from './db';
 import { containsText } from './db/contains';
-import { projects, users } from './db/schema';
+import { documents, projects, users } from './db/schema';
+import { getStore } from './storage';
 import type { ProjectInput, ProjectListQuery } from '$lib/schemas/project';
 import { error } from '@sveltejs/kit';
 
@@ -74,9 +75,20 @@ export function updateProject(actor: Actor, projectId: string, patch: Partial<Pr
 		.get();
 }
 
-export function deleteProject(actor: Actor, projectId: string) {
+/** Delete a project (editors) with its analyses and documents, then its stored files. */
+export async function deleteProject(actor: Actor, projectId: string) {
 	const { project } = getProject(actor, projectId);
 	requireRole(actor, project.workshopId, 'editor');
-	getDb().delete(projects).where(eq(projects.id, projectId)).run();
+	const db = getDb();
+	const files = db
+		.select({ fileKey: documents.fileKey, thumbKey: documents.thumbKey })
+		.from(documents)
+		.where(eq(documents.projectId, projectId))
+		.all()
+		.flatMap((d) => [d.fileKey, d.thumbKey ?? []].flat());
+	// the rows go first: a crash before the files are removed leaves orphans for the start-up sweep
+	db.delete(projects).where(eq(projects.id, projectId)).run();
+	const store = getStore();
+	await Promise.all(files.map((key) => store.delete(key)));
 	return project;
 }

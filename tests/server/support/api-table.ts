@@ -21,6 +21,42 @@ import * as meApi from '../../../src/routes/api/v1/me/+server';
 import * as tokensApi from '../../../src/routes/api/v1/tokens/+server';
 import * as tokenApi from '../../../src/routes/api/v1/tokens/[id]/+server';
 import { createApiToken } from '../../../src/lib/server/accounts/api-tokens';
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import * as documentsApi from '../../../src/routes/api/v1/projects/[id]/documents/+server';
+import * as documentApi from '../../../src/routes/api/v1/documents/[id]/+server';
+import * as documentUndeleteApi from '../../../src/routes/api/v1/documents/[id]/undelete/+server';
+import { addDocument, deleteDocument } from '../../../src/lib/server/documents';
+import { useStore } from '../../../src/lib/server/storage';
+import { folderStore } from '../../../src/lib/server/storage/folder';
+
+// uploads made by these rows go to a scratch folder, never the repository's data folder
+useStore(folderStore(mkdtempSync(join(tmpdir(), 'spanwright-api-files-'))));
+const drawingPdf = new TextEncoder().encode(
+	'%PDF-1.4\n1 0 obj<</Type/Catalog/Pages 2 0 R>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n'
+);
+const documentOf = async (c: Cast, p: string) =>
+	(
+		await addDocument(
+			c.editor,
+			p,
+			{ bytes: drawingPdf, name: 'elevation.pdf' },
+			{ caption: 'Elevation', analysisId: null }
+		)
+	).id;
+function upload(actor: Actor | null, projectId: string) {
+	const body = new FormData();
+	body.append('file', new Blob([drawingPdf]), 'section.pdf');
+	body.append('caption', 'Section A');
+	return documentsApi.POST({
+		locals: { actor },
+		params: { id: projectId },
+		url: new URL('http://localhost/'),
+		request: new Request('http://localhost/', { method: 'POST', body })
+		// eslint-disable-next-line @typescript-eslint/no-explicit-any
+	} as any);
+}
 
 export type Who = 'anonymous' | 'viewer' | 'editor' | 'owner' | 'outsider';
 type Cast = ReturnType<typeof makeWorkshopWithCast>;
@@ -245,5 +281,51 @@ table.push(
 			return tokenApi.DELETE(event({ actor: a, method: 'DELETE', params: { id } }));
 		},
 		expect: { anonymous: 401, viewer: 404, editor: 404, owner: 204, outsider: 404 }
+	},
+	{
+		route: 'GET /projects/{id}/documents',
+		call: (a, _c, p) => documentsApi.GET(event({ actor: a, params: { id: p } })),
+		expect: read
+	},
+	{
+		route: 'POST /projects/{id}/documents',
+		call: (a, _c, p) => upload(a, p),
+		expect: { anonymous: 401, viewer: 403, editor: 201, owner: 201, outsider: 404 }
+	},
+	{
+		route: 'GET /documents/{id}',
+		call: async (a, c, p) =>
+			documentApi.GET(event({ actor: a, params: { id: await documentOf(c, p) } })),
+		expect: read
+	},
+	{
+		route: 'PATCH /documents/{id}',
+		call: async (a, c, p) =>
+			documentApi.PATCH(
+				event({
+					actor: a,
+					method: 'PATCH',
+					params: { id: await documentOf(c, p) },
+					body: { caption: 'North elevation', inRecord: true }
+				})
+			),
+		expect: write
+	},
+	{
+		route: 'DELETE /documents/{id}',
+		call: async (a, c, p) =>
+			documentApi.DELETE(
+				event({ actor: a, method: 'DELETE', params: { id: await documentOf(c, p) } })
+			),
+		expect: write
+	},
+	{
+		route: 'POST /documents/{id}/undelete',
+		call: async (a, c, p) => {
+			const id = await documentOf(c, p);
+			await deleteDocument(c.editor, id);
+			return documentUndeleteApi.POST(event({ actor: a, method: 'POST', params: { id } }));
+		},
+		expect: write
 	}
 );

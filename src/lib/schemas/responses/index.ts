@@ -6,3 +6,4 @@ export * from './analyses';
 export * from './shelf';
 export * from './joinery';
 export * from './wall';
+export * from './documents';

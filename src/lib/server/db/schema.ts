@@ -239,3 +239,36 @@ export const analysisRevisions = sqliteTable(
 	},
 	(t) => [uniqueIndex('analysis_revision_version').on(t.analysisId, t.version)]
 );
+
+// ---- Project documents: drawings, site photos and measurements ----
+export const DOCUMENT_TYPES = ['image/jpeg', 'image/png', 'image/webp', 'application/pdf'] as const;
+export type DocumentType = (typeof DOCUMENT_TYPES)[number];
+
+export const documents = sqliteTable(
+	'document',
+	{
+		id: id(),
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		// optionally about one analysis of the same project
+		analysisId: text('analysis_id').references(() => analyses.id, { onDelete: 'set null' }),
+		// the uploaded file's own name, cleaned; shown and offered on download, never a path
+		name: text('name').notNull(),
+		caption: text('caption').notNull().default(''),
+		// decided from the file's bytes, never from its name or the browser's claim
+		contentType: text('content_type', { enum: DOCUMENT_TYPES }).notNull(),
+		bytes: integer('bytes').notNull(),
+		width: integer('width'),
+		height: integer('height'),
+		// random keys in the file store
+		fileKey: text('file_key').notNull(),
+		thumbKey: text('thumb_key'),
+		// shown in the client's record
+		inRecord: integer('in_record', { mode: 'boolean' }).notNull().default(false),
+		deletedAt: integer('deleted_at', { mode: 'timestamp_ms' }),
+		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: createdAt()
+	},
+	(t) => [index('document_project').on(t.projectId, t.createdAt)]
+);

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { createDocument, type ZodOpenApiOperationObject } from 'zod-openapi';
 import { problemSchema } from '$lib/schemas/responses/common';
+import { documentOperations } from './documents';
 import { foundationOperations } from './foundation';
 import { joineryOperations } from './joinery';
 import { shelfOperations } from './shelf';
@@ -13,7 +14,8 @@ export const operations: ApiOperation[] = [
 	...shelfOperations,
 	...joineryOperations,
 	...wallOperations,
-	...workbenchOperations
+	...workbenchOperations,
+	...documentOperations
 ];
 
 /** The session cookie Auth.js sets over HTTPS (plain http in development drops the prefix). */

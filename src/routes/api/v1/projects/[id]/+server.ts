@@ -18,7 +18,7 @@ export const PATCH: RequestHandler = api(async ({ locals, params, request }) => 
 	return json(updateProject(actor, params.id, body.data));
 });
 
-export const DELETE: RequestHandler = api(({ locals, params }) => {
-	deleteProject(requireActor(locals.actor), params.id);
+export const DELETE: RequestHandler = api(async ({ locals, params }) => {
+	await deleteProject(requireActor(locals.actor), params.id);
 	return new Response(null, { status: 204 });
 });
