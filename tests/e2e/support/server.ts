@@ -13,6 +13,8 @@ process.env.SMTP_URL = `smtp://127.0.0.1:${mailPort}`;
 process.env.PORT = String(port);
 process.env.ORIGIN = `http://localhost:${port}`;
 process.env.AUTH_SECRET ??= 'e2e-only-secret-not-for-production-0123456789';
+// uploads of drawings and photos are larger than adapter-node's default body limit (512 kB)
+process.env.BODY_SIZE_LIMIT ??= '25M';
 
 const { seedDemo } = await import('../../../src/lib/server/demo/seed');
 const { startMailCatcher } = await import('../../../src/lib/server/dev/mail-catcher');

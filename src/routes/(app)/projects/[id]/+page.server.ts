@@ -2,6 +2,7 @@ import { fail, redirect } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireActor } from '$lib/server/access';
+import { listDocuments } from '$lib/server/documents';
 import { deleteProject, getProject, listProjects, updateProject } from '$lib/server/projects';
 import { projectSchema } from '$lib/schemas/project';
 import { analysisRowActions } from './analysis-actions.server';
@@ -29,6 +30,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
 		project,
 		role,
 		otherProjects,
+		documents: listDocuments(actor, project.id),
 		editForm: await superValidate(project, zod4(projectSchema))
 	};
 };
@@ -45,7 +47,7 @@ export const actions: Actions = {
 	delete: async ({ locals, params, request }) => {
 		const actor = requireActor(locals.actor);
 		if ((await readForm(request)).get('confirm') !== 'yes') return { confirmProjectDelete: true };
-		deleteProject(actor, params.id);
+		await deleteProject(actor, params.id);
 		redirect(303, '/projects');
 	},
 	...analysisRowActions

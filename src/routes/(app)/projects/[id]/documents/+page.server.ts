@@ -1,0 +1,51 @@
+import { fail, redirect } from '@sveltejs/kit';
+import { requireActor } from '$lib/server/access';
+import { addDocument, listDocuments, undoDeleteDocument } from '$lib/server/documents';
+import { getProject } from '$lib/server/projects';
+import { documentFieldsSchema } from '$lib/schemas/document';
+import type { Actions, PageServerLoad } from './$types';
+
+export const load: PageServerLoad = ({ locals, params, url }) => {
+	const actor = requireActor(locals.actor);
+	const { project, role } = getProject(actor, params.id);
+	const deleted = url.searchParams.get('deleted');
+	return { project, role, documents: listDocuments(actor, params.id), deleted };
+};
+
+const statusOf = (e: unknown) => (e as { status?: number }).status;
+const messageOf = (e: unknown) => (e as { body?: { message?: string } }).body?.message;
+
+export const actions: Actions = {
+	// the uploader without JavaScript: one or more files with one caption, then back to the list
+	upload: async ({ locals, params, request }) => {
+		const actor = requireActor(locals.actor);
+		let form: FormData;
+		try {
+			form = await request.formData();
+		} catch {
+			return fail(400, { message: 'The upload could not be read; choose the files again.' });
+		}
+		const files = form.getAll('file').filter((f): f is File => f instanceof File && f.size > 0);
+		if (!files.length) return fail(422, { message: 'Choose at least one file to add.' });
+		const fields = documentFieldsSchema.safeParse({ caption: form.get('caption') ?? undefined });
+		if (!fields.success) return fail(422, { message: fields.error.issues[0].message });
+		for (const file of files) {
+			try {
+				const bytes = new Uint8Array(await file.arrayBuffer());
+				await addDocument(actor, params.id, { bytes, name: file.name }, fields.data);
+			} catch (e) {
+				const status = statusOf(e);
+				if (!status || status >= 500) throw e;
+				return fail(status, { message: `${file.name}: ${messageOf(e) ?? 'not added.'}` });
+			}
+		}
+		redirect(303, `/projects/${params.id}/documents`);
+	},
+	undo: async ({ locals, params, request }) => {
+		const actor = requireActor(locals.actor);
+		const id = String((await request.formData().catch(() => null))?.get('id') ?? '');
+		if (!id) return fail(400, { message: 'Which document?' });
+		undoDeleteDocument(actor, id);
+		redirect(303, `/projects/${params.id}/documents`);
+	}
+};
