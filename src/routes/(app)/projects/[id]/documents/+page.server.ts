@@ -1,5 +1,6 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { requireActor } from '$lib/server/access';
+import { readForm } from '$lib/server/form-body';
 import { addDocument, listDocuments, undoDeleteDocument } from '$lib/server/documents';
 import { getProject } from '$lib/server/projects';
 import { documentFieldsSchema } from '$lib/schemas/document';
@@ -19,12 +20,7 @@ export const actions: Actions = {
 	// the uploader without JavaScript: one or more files with one caption, then back to the list
 	upload: async ({ locals, params, request }) => {
 		const actor = requireActor(locals.actor);
-		let form: FormData;
-		try {
-			form = await request.formData();
-		} catch {
-			return fail(400, { message: 'The upload could not be read; choose the files again.' });
-		}
+		const form = await readForm(request);
 		const files = form.getAll('file').filter((f): f is File => f instanceof File && f.size > 0);
 		if (!files.length) return fail(422, { message: 'Choose at least one file to add.' });
 		const fields = documentFieldsSchema.safeParse({ caption: form.get('caption') ?? undefined });
@@ -43,7 +39,7 @@ export const actions: Actions = {
 	},
 	undo: async ({ locals, params, request }) => {
 		const actor = requireActor(locals.actor);
-		const id = String((await request.formData().catch(() => null))?.get('id') ?? '');
+		const id = String((await readForm(request)).get('id') ?? '');
 		if (!id) return fail(400, { message: 'Which document?' });
 		undoDeleteDocument(actor, id);
 		redirect(303, `/projects/${params.id}/documents`);

@@ -2,6 +2,7 @@ import { fail, redirect } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireActor } from '$lib/server/access';
+import { readForm } from '$lib/server/form-body';
 import { listAnalyses } from '$lib/server/analyses';
 import { deleteDocument, getDocument, updateDocument } from '$lib/server/documents';
 import { documentFormSchema } from '$lib/schemas/document';
@@ -36,7 +37,7 @@ export const load: PageServerLoad = async ({ locals, params }) => {
 export const actions: Actions = {
 	update: async ({ locals, params, request }) => {
 		const actor = requireActor(locals.actor);
-		const form = await superValidate(request, zod4(documentFormSchema));
+		const form = await superValidate(await readForm(request), zod4(documentFormSchema));
 		if (!form.valid) return fail(400, { form });
 		const { analysisId, ...rest } = form.data;
 		updateDocument(actor, params.documentId, { ...rest, analysisId: analysisId || null });
