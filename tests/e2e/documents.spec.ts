@@ -105,15 +105,13 @@ test('a file whose bytes are not an image is refused by name, and nothing is add
 	const panel = page.locator('section', {
 		has: page.getByRole('heading', { name: 'Drawings and photos' })
 	});
-	await panel
-		.getByLabel('Choose files')
-		.setInputFiles([
-			{
-				name: 'plan.jpg',
-				mimeType: 'image/jpeg',
-				buffer: Buffer.from('<svg><script>1</script></svg>')
-			}
-		]);
+	await panel.getByLabel('Choose files').setInputFiles([
+		{
+			name: 'plan.jpg',
+			mimeType: 'image/jpeg',
+			buffer: Buffer.from('<svg><script>1</script></svg>')
+		}
+	]);
 	await panel.getByRole('button', { name: 'Add to the project' }).click();
 	await expect(panel.getByText(/Only JPEG, PNG and WebP images and PDF drawings/)).toBeVisible();
 	await expect(panel.getByRole('link', { name: 'Open plan.jpg' })).toHaveCount(0);

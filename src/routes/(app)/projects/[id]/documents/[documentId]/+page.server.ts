@@ -43,7 +43,8 @@ export const actions: Actions = {
 		updateDocument(actor, params.documentId, { ...rest, analysisId: analysisId || null });
 		return message(form, 'Saved.');
 	},
-	delete: async ({ locals, params }) => {
+	delete: async ({ locals, params, request }) => {
+		await readForm(request);
 		await deleteDocument(requireActor(locals.actor), params.documentId);
 		redirect(303, `/projects/${params.id}/documents?deleted=${params.documentId}`);
 	}
