@@ -116,8 +116,8 @@ export async function readDocumentFile(
 /** A file name to show and offer on download: the last part of what was sent, without controls. */
 export function cleanFileName(name: string) {
 	const base = name.split(/[/\\]/).pop() ?? '';
-	// eslint-disable-next-line no-control-regex
 	const clean = base
+		// eslint-disable-next-line no-control-regex -- control characters are what it removes
 		.replace(/[\u0000-\u001f\u007f"<>|:*?]/g, '')
 		.trim()
 		.slice(-120);

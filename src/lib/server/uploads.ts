@@ -48,7 +48,6 @@ export async function readUpload(
 export function fileHeaders(file: { contentType: string; name: string }, download: boolean) {
 	// a PDF is always a download: the browser's viewer would run it in our origin
 	const disposition = download || file.contentType === 'application/pdf' ? 'attachment' : 'inline';
-	// eslint-disable-next-line no-control-regex
 	const ascii = file.name.replace(/[^\x20-\x7e]|["\\]/g, '_');
 	return {
 		'content-type': file.contentType,
