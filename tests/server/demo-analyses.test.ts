@@ -3,6 +3,8 @@ import { useTempDb } from './support/db';
 import { seedDemo } from '../../src/lib/server/demo/seed';
 import { seedDemoAnalyses } from '../../src/lib/server/demo/analyses';
 import { getAnalysis, listRevisions } from '../../src/lib/server/analyses';
+import { listSharedProjects } from '../../src/lib/server/project-access';
+import { listWorkshops } from '../../src/lib/server/workshops';
 
 useTempDb();
 
@@ -11,8 +13,8 @@ describe('the demo analyses', () => {
 		const demo = await seedDemo();
 		const ids = seedDemoAnalyses(demo.projectIds, demo.users);
 		expect(ids).toHaveLength(6);
-		const dana = demo.users.find((u) => u.role === 'viewer')!;
-		const reader = { id: dana.id, email: dana.email, name: dana.name, via: 'session' as const };
+		const ines = demo.users.find((u) => u.role === 'owner')!;
+		const reader = { id: ines.id, email: ines.email, name: ines.name, via: 'session' as const };
 		const saved = ids.map((id) => getAnalysis(reader, id).analysis);
 		expect(saved.slice(0, 5).map((a) => a.kind)).toEqual([
 			'shelf',
@@ -30,5 +32,20 @@ describe('the demo analyses', () => {
 		// drawers open): the screen's first suggestion
 		expect(saved[5].pass).toBe(false);
 		expect(saved[5].summary).toMatch(/fail/);
+	});
+
+	it('lets the demo client read her own project only', async () => {
+		const demo = await seedDemo();
+		const dana = demo.users.find((u) => u.role === 'client')!;
+		const client = { id: dana.id, email: dana.email, name: dana.name, via: 'session' as const };
+		// the library wall's analyses are hers; the pantry shelf and the school cabinet are not
+		const [shelf, comparison, joint, pantry, school, wall] = demo.analysisIds;
+		for (const id of [shelf, comparison, joint, wall])
+			expect(getAnalysis(client, id).role).toBe('client');
+		expect(listRevisions(client, shelf)).toHaveLength(2);
+		for (const id of [pantry, school])
+			expect(() => getAnalysis(client, id)).toThrow(expect.objectContaining({ status: 404 }));
+		expect(listSharedProjects(client).map((p) => p.name)).toEqual(['Whitlock library wall']);
+		expect(listWorkshops(client).map((w) => w.name)).not.toContain('Quillfeather Casework');
 	});
 });

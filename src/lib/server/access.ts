@@ -1,7 +1,7 @@
 import { error } from '@sveltejs/kit';
 import { and, eq } from 'drizzle-orm';
 import { getDb } from './db';
-import { memberships, type Role } from './db/schema';
+import { memberships, projectAccess, type Role } from './db/schema';
 import type { LengthUnit } from '$lib/schemas/preferences';
 
 /** Who is acting: the signed-in user, however they proved it (session cookie or API token). */
@@ -54,4 +54,49 @@ export function requireRole(
 export function requireActor(actor: Actor | null): Actor {
 	if (!actor) error(401, 'Sign in to continue.');
 	return actor;
+}
+
+/**
+ * What someone may do in one project. Workshop members keep their workshop role; a client (or an
+ * installer) invited to this project alone reads it and nothing else of the workshop.
+ */
+export type ProjectRole = Role | 'client';
+
+const PROJECT_RANK: Record<ProjectRole, number> = { client: 0, viewer: 1, editor: 2, owner: 3 };
+
+/** True for the roles that change a project's analyses (editor, owner). */
+export function canEdit(role: ProjectRole) {
+	return PROJECT_RANK[role] >= PROJECT_RANK.editor;
+}
+
+/** The actor's role in a project: their workshop role, else 'client' when invited to it, else null. */
+export function projectRoleIn(
+	actor: Actor,
+	project: { id: string; workshopId: string }
+): ProjectRole | null {
+	const role = roleIn(actor, project.workshopId);
+	if (role) return role;
+	const invited = getDb()
+		.select({ userId: projectAccess.userId })
+		.from(projectAccess)
+		.where(and(eq(projectAccess.userId, actor.id), eq(projectAccess.projectId, project.id)))
+		.get();
+	return invited ? 'client' : null;
+}
+
+/**
+ * requireRole for one project: 401 without an actor, 404 when the actor may not see the project
+ * (neither a member of its workshop nor invited to it), 403 when their role is too low.
+ */
+export function requireProjectRole(
+	actor: Actor | null,
+	project: { id: string; workshopId: string },
+	needed: ProjectRole
+): { actor: Actor; role: ProjectRole } {
+	if (!actor) error(401, 'Sign in to continue.');
+	const role = projectRoleIn(actor, project);
+	if (!role) error(404, 'Not found.');
+	if (PROJECT_RANK[role] < PROJECT_RANK[needed])
+		error(403, `This needs the ${needed} role; you are a ${role} here.`);
+	return { actor, role };
 }

@@ -6,7 +6,7 @@
 import { error } from '@sveltejs/kit';
 import { and, asc, count, desc, eq, gt, isNull, sql, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
-import { requireRole, type Actor } from './access';
+import { type Actor } from './access';
 import { computeAnalysis, describeAnalysis, describeInput } from '$lib/kinds/registry';
 import { getDb } from './db';
 import { containsText } from './db/contains';
@@ -160,8 +160,7 @@ export function createAnalysis(
 	projectId: string,
 	body: { kind: AnalysisKind; name: string; input: unknown }
 ) {
-	const { project } = getProject(actor, projectId);
-	requireRole(actor, project.workshopId, 'editor');
+	getProject(actor, projectId, 'editor');
 	const run = computed(body.kind, body.input);
 	const now = new Date();
 	const id = getDb().transaction(() => {
@@ -190,9 +189,9 @@ export function createAnalysis(
 	return getAnalysis(actor, id).analysis;
 }
 
-function editable(actor: Actor, id: string) {
-	const row = findRow(id);
-	requireRole(actor, row.workshopId, 'editor');
+function editable(actor: Actor, id: string, includeDeleted = false) {
+	const row = findRow(id, includeDeleted);
+	getProject(actor, row.projectId, 'editor');
 	return row;
 }
 
@@ -330,7 +329,7 @@ export function duplicateAnalysis(actor: Actor, id: string, body: { name?: strin
 /** Move to another project of the same workshop (editor); other workshops are refused (422). */
 export function moveAnalysis(actor: Actor, id: string, projectId: string) {
 	const row = editable(actor, id);
-	const { project: target } = getProject(actor, projectId);
+	const { project: target } = getProject(actor, projectId, 'editor');
 	if (target.workshopId !== row.workshopId)
 		throw new AnalysisProblem(422, 'An analysis moves only between projects of its workshop.', [
 			{ path: ['projectId'], message: 'Pick a project of the same workshop.' }
@@ -361,8 +360,7 @@ export function deleteAnalysis(actor: Actor, id: string) {
 
 /** Undo a delete made within the window (editor); later deletes stay deleted (409). */
 export function undoDelete(actor: Actor, id: string, now = new Date()) {
-	const row = findRow(id, true);
-	requireRole(actor, row.workshopId, 'editor');
+	const row = editable(actor, id, true);
 	if (!row.deletedAt) return getAnalysis(actor, id).analysis;
 	if (+now - +row.deletedAt > UNDO_WINDOW_MS)
 		throw new AnalysisProblem(409, 'This analysis was deleted too long ago to undo.');

@@ -29,6 +29,24 @@ export async function sendInvitation(args: {
 	return sent === true;
 }
 
+/** The invitation to read one project (a client or an installer), with its one-time link. */
+export async function sendProjectInvitation(args: {
+	to: string;
+	from: Actor;
+	projectName: string;
+	link: string;
+}) {
+	const who = args.from.name ?? args.from.email;
+	const text = `${who} invites you to read the project "${args.projectName}" on Spanwright: its records, drawings and cautions. You will see this project only.\n\nAccept the invitation:\n${args.link}\n\nThe link works once and expires in 7 days. If you did not expect this, ignore this message.`;
+	const sent = await sendMail({
+		to: args.to,
+		subject: `${who} shares the project ${args.projectName} with you on Spanwright`,
+		text,
+		html: `<p>${escapeHtml(who)} invites you to read the project <strong>${escapeHtml(args.projectName)}</strong> on Spanwright: its records, drawings and cautions. You will see this project only.</p><p><a href="${args.link}">Accept the invitation</a></p><p>The link works once and expires in 7 days.</p>`
+	}).then(() => true, mailDown);
+	return sent === true;
+}
+
 function escapeHtml(s: string) {
 	return s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 }

@@ -36,6 +36,8 @@ export interface OutgoingMail {
 	subject: string;
 	text: string;
 	html?: string;
+	/** files sent with the message, e.g. a record as a PDF */
+	attachments?: { filename: string; content: Buffer; contentType: string }[];
 }
 
 /** The mail server could not be reached or refused the message; pages say "try again shortly". */
@@ -88,10 +90,10 @@ export function sendLater(what: string, send: () => Promise<unknown>) {
 }
 
 /** Send one message. Throws MailUnavailable when the server is away or refuses it. */
-export async function sendMail({ to, subject, text, html }: OutgoingMail) {
+export async function sendMail({ to, subject, text, html, attachments }: OutgoingMail) {
 	let info;
 	try {
-		info = await transporter().sendMail({ from: mailFrom(), to, subject, text, html });
+		info = await transporter().sendMail({ from: mailFrom(), to, subject, text, html, attachments });
 	} catch (e) {
 		throw new MailUnavailable(e);
 	}

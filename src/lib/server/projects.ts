@@ -1,5 +1,5 @@
 import { and, asc, count, desc, eq, type SQL } from 'drizzle-orm';
-import { requireRole, type Actor } from './access';
+import { requireProjectRole, requireRole, type Actor, type ProjectRole } from './access';
 import { getDb } from './db';
 import { containsText } from './db/contains';
 import { documents, projects, users } from './db/schema';
@@ -47,11 +47,14 @@ export function listProjects(actor: Actor, query: ProjectListQuery) {
 	return { items, total, page: query.page, perPage: query.perPage };
 }
 
-/** One project, if the actor may see its workshop; 404 otherwise. */
-export function getProject(actor: Actor, projectId: string) {
+/**
+ * One project, if the actor is a member of its workshop or was invited to it (a client); 404
+ * otherwise. `needed` raises the bar (403 below it).
+ */
+export function getProject(actor: Actor, projectId: string, needed: ProjectRole = 'client') {
 	const row = getDb().select().from(projects).where(eq(projects.id, projectId)).get();
 	if (!row) error(404, 'Not found.');
-	const { role } = requireRole(actor, row.workshopId, 'viewer');
+	const { role } = requireProjectRole(actor, row, needed);
 	return { project: row, role };
 }
 
@@ -65,8 +68,7 @@ export function createProject(actor: Actor, workshopId: string, input: ProjectIn
 }
 
 export function updateProject(actor: Actor, projectId: string, patch: Partial<ProjectInput>) {
-	const { project } = getProject(actor, projectId);
-	requireRole(actor, project.workshopId, 'editor');
+	getProject(actor, projectId, 'editor');
 	return getDb()
 		.update(projects)
 		.set({ ...patch, updatedAt: new Date() })
@@ -77,8 +79,7 @@ export function updateProject(actor: Actor, projectId: string, patch: Partial<Pr
 
 /** Delete a project (editors) with its analyses and documents, then its stored files. */
 export async function deleteProject(actor: Actor, projectId: string) {
-	const { project } = getProject(actor, projectId);
-	requireRole(actor, project.workshopId, 'editor');
+	const { project } = getProject(actor, projectId, 'editor');
 	const db = getDb();
 	const files = db
 		.select({ fileKey: documents.fileKey, thumbKey: documents.thumbKey })

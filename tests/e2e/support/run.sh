@@ -4,6 +4,7 @@
 set -euo pipefail
 cd "$(dirname "$0")/../../.."
 bash tests/e2e/support/ensure-chromium.sh
+bash tests/support/ensure-poppler.sh
 exec 9>/tmp/spanwright-e2e.lock
 flock 9
 npx vite build --logLevel warn

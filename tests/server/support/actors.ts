@@ -1,6 +1,6 @@
 import type { Actor } from '../../../src/lib/server/access';
 import { getDb } from '../../../src/lib/server/db';
-import { memberships, users, workshops } from '../../../src/lib/server/db/schema';
+import { memberships, projectAccess, users, workshops } from '../../../src/lib/server/db/schema';
 import type { Role } from '../../../src/lib/server/db/schema';
 
 let n = 0;
@@ -17,14 +17,19 @@ export function makeUser(label: string): Actor {
 	return { id: row.id, email, name: row.name, via: 'session' };
 }
 
-/** A workshop with one member in each role, and an outsider who belongs to another workshop. */
+/**
+ * A workshop with one member in each role, an outsider who belongs to another workshop, and two
+ * clients who belong to no workshop of theirs yet (grant them projects with grantProject).
+ */
 export function makeWorkshopWithCast() {
 	const db = getDb();
 	const cast = {
 		owner: makeUser('owner'),
 		editor: makeUser('editor'),
 		viewer: makeUser('viewer'),
-		outsider: makeUser('outsider')
+		outsider: makeUser('outsider'),
+		client: makeUser('client'),
+		otherClient: makeUser('other-client')
 	};
 	const ws = db
 		.insert(workshops)
@@ -44,6 +49,11 @@ export function makeWorkshopWithCast() {
 		.values({ userId: cast.outsider.id, workshopId: other.id, role: 'owner' })
 		.run();
 	return { workshopId: ws.id, ...cast };
+}
+
+/** Invite a person to one project as its client (what accepting a project invitation does). */
+export function grantProject(user: Actor, projectId: string) {
+	getDb().insert(projectAccess).values({ userId: user.id, projectId }).run();
 }
 
 /** A RequestEvent-like object for calling a +server.ts handler directly. */

@@ -272,3 +272,77 @@ export const documents = sqliteTable(
 	},
 	(t) => [index('document_project').on(t.projectId, t.createdAt)]
 );
+
+// ---- The client's side: access to single projects, share links, records sent ----
+
+/** A person (a client or an installer) who may read one project of a workshop they do not belong to. */
+export const projectAccess = sqliteTable(
+	'project_access',
+	{
+		userId: text('user_id')
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		grantedBy: text('granted_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: createdAt()
+	},
+	(t) => [
+		primaryKey({ columns: [t.userId, t.projectId] }),
+		index('project_access_project').on(t.projectId)
+	]
+);
+
+export const projectInvitations = sqliteTable(
+	'project_invitation',
+	{
+		id: id(),
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		email: text('email').notNull(),
+		// sha-256 of the token sent by mail; the token itself is never stored
+		tokenHash: text('token_hash').notNull().unique(),
+		invitedBy: text('invited_by').references(() => users.id, { onDelete: 'set null' }),
+		expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
+		acceptedAt: integer('accepted_at', { mode: 'timestamp_ms' }),
+		createdAt: createdAt()
+	},
+	(t) => [index('project_invitation_project').on(t.projectId)]
+);
+
+/** A read-only link to a project's record (or one analysis's), for someone without an account. */
+export const shareLinks = sqliteTable(
+	'share_link',
+	{
+		id: id(),
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		analysisId: text('analysis_id').references(() => analyses.id, { onDelete: 'cascade' }),
+		// sha-256 of the token in the link; the token itself is never stored
+		tokenHash: text('token_hash').notNull().unique(),
+		createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+		expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
+		revokedAt: integer('revoked_at', { mode: 'timestamp_ms' }),
+		createdAt: createdAt()
+	},
+	(t) => [index('share_link_project').on(t.projectId)]
+);
+
+/** A record sent by e-mail: when, to whom, by whom, and whether the mail server took it. */
+export const recordSends = sqliteTable(
+	'record_send',
+	{
+		id: id(),
+		projectId: text('project_id')
+			.notNull()
+			.references(() => projects.id, { onDelete: 'cascade' }),
+		analysisId: text('analysis_id').references(() => analyses.id, { onDelete: 'set null' }),
+		to: text('to').notNull(),
+		sentBy: text('sent_by').references(() => users.id, { onDelete: 'set null' }),
+		createdAt: createdAt()
+	},
+	(t) => [index('record_send_project').on(t.projectId)]
+);

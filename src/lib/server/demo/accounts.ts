@@ -21,7 +21,7 @@ export const DEMO_ACCOUNTS = [
 		email: 'dana@whitlock-home.test',
 		name: 'Dana Whitlock',
 		password: DEMO_PASSWORD,
-		role: 'viewer' as const,
-		note: 'A client; reads the records'
+		role: 'client' as const,
+		note: 'A client; reads the records of her own project only'
 	}
 ];

@@ -1,12 +1,12 @@
 import { eq, inArray } from 'drizzle-orm';
 import { createUser } from '../accounts/users';
 import { getDb } from '../db';
-import { memberships, projects, users, workshops } from '../db/schema';
+import { memberships, projectAccess, projects, users, workshops } from '../db/schema';
 import { DEMO_ACCOUNTS } from './accounts';
 import { seedDemoAnalyses } from './analyses';
 
 // The demo scenario (invented): Quillfeather Casework, a two-person built-in shop, and Dana
-// Whitlock, a client who follows her library wall as a viewer.
+// Whitlock, a client invited to her library wall alone: she never sees the shop's other clients.
 export const DEMO_WORKSHOP = 'Quillfeather Casework';
 
 const DEMO_PROJECTS = [
@@ -58,12 +58,14 @@ export async function seedDemo() {
 		.returning()
 		.get();
 	for (const member of created) {
+		if (member.role === 'client') continue;
 		db.insert(memberships)
 			.values({ userId: member.id, workshopId: shop.id, role: member.role })
 			.run();
 		db.update(users).set({ currentWorkshopId: shop.id }).where(eq(users.id, member.id)).run();
 	}
-	// Dana is a client, not a builder: her shop is Quillfeather's, her own remains empty.
+	// Dana is a client, not a builder: she reads her own project of Quillfeather's; her own
+	// workshop remains empty.
 	const editor = created.find((a) => a.role === 'editor')!;
 	const projectIds: Record<string, string> = {};
 	DEMO_PROJECTS.forEach((p, i) => {
@@ -79,6 +81,14 @@ export async function seedDemo() {
 			.get();
 		projectIds[p.name] = row.id;
 	});
+	const client = created.find((a) => a.role === 'client')!;
+	db.insert(projectAccess)
+		.values({
+			userId: client.id,
+			projectId: projectIds['Whitlock library wall'],
+			grantedBy: owner.id
+		})
+		.run();
 	const analysisIds = seedDemoAnalyses(projectIds, created);
 	return { workshopId: shop.id, users: created, projectIds, analysisIds };
 }

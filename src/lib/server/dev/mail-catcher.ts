@@ -22,6 +22,8 @@ export interface CaughtMail {
 	html: string;
 	links: string[];
 	receivedAt: string;
+	/** files that came with it (a record's PDF), each kept beside the message */
+	attachments?: { filename: string; contentType: string; size: number; path: string }[];
 }
 
 /** <data folder>/mail, the data folder being SPANWRIGHT_DATA_DIR or the project's data/. */
@@ -63,15 +65,23 @@ export async function startMailCatcher({
 					const html = typeof parsed.html === 'string' ? parsed.html : '';
 					const envelopeTo = session.envelope.rcptTo.map((r) => r.address.toLowerCase());
 					const receivedAt = new Date();
+					const id = randomUUID();
+					const attachments = parsed.attachments.map((a, n) => {
+						const safe = (a.filename ?? `file-${n}`).replace(/[^A-Za-z0-9._-]+/g, '-');
+						const path = join(dir, `${receivedAt.getTime()}-${id}-${n}-${safe}`);
+						writeFileSync(path, a.content);
+						return { filename: a.filename ?? safe, contentType: a.contentType, size: a.size, path };
+					});
 					const mail: CaughtMail = {
-						id: randomUUID(),
+						id,
 						to: envelopeTo.length ? envelopeTo : addresses(parsed.to),
 						from: addresses(parsed.from)[0] ?? '',
 						subject: parsed.subject ?? '',
 						text,
 						html,
 						links: linksIn(text, html),
-						receivedAt: receivedAt.toISOString()
+						receivedAt: receivedAt.toISOString(),
+						attachments
 					};
 					// the time first, so the files sort oldest to newest by name
 					writeFileSync(

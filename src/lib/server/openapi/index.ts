@@ -4,6 +4,7 @@ import { problemSchema } from '$lib/schemas/responses/common';
 import { documentOperations } from './documents';
 import { foundationOperations } from './foundation';
 import { joineryOperations } from './joinery';
+import { recordOperations } from './records';
 import { shelfOperations } from './shelf';
 import type { ApiOperation, ApiResponse } from './types';
 import { wallOperations } from './wall';
@@ -15,7 +16,8 @@ export const operations: ApiOperation[] = [
 	...joineryOperations,
 	...wallOperations,
 	...workbenchOperations,
-	...documentOperations
+	...documentOperations,
+	...recordOperations
 ];
 
 /** The session cookie Auth.js sets over HTTPS (plain http in development drops the prefix). */

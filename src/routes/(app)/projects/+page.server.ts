@@ -3,14 +3,19 @@ import { superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireActor } from '$lib/server/access';
 import { createProject } from '$lib/server/projects';
+import { listSharedProjects } from '$lib/server/project-access';
 import { currentWorkshop } from '$lib/server/workshops';
 import { projectSchema } from '$lib/schemas/project';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/form-body';
 
 export const load: PageServerLoad = async ({ locals }) => {
-	requireActor(locals.actor);
-	return { createForm: await superValidate(zod4(projectSchema)) };
+	const actor = requireActor(locals.actor);
+	return {
+		createForm: await superValidate(zod4(projectSchema)),
+		// projects of other workshops the actor was invited to as a client
+		shared: listSharedProjects(actor)
+	};
 };
 
 export const actions: Actions = {

@@ -1,11 +1,15 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { requireActor } from '$lib/server/access';
+import { canEdit, requireActor } from '$lib/server/access';
 import { listDocuments } from '$lib/server/documents';
 import { deleteProject, getProject, listProjects, updateProject } from '$lib/server/projects';
+import { listProjectAccess } from '$lib/server/project-access';
+import { listRecordSends } from '$lib/server/record-mail';
+import { clientInviteSchema } from '$lib/schemas/client-access';
 import { projectSchema } from '$lib/schemas/project';
 import { analysisRowActions } from './analysis-actions.server';
+import { clientActions } from './client-actions.server';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/form-body';
 
@@ -13,25 +17,28 @@ export const load: PageServerLoad = async ({ locals, params }) => {
 	const actor = requireActor(locals.actor);
 	const { project, role } = getProject(actor, params.id);
 	// where an editor may move an analysis: the other projects of this workshop
-	const otherProjects =
-		role === 'viewer'
-			? []
-			: listProjects(actor, {
-					workshop: project.workshopId,
-					q: '',
-					sort: 'name',
-					dir: 'asc',
-					page: 1,
-					perPage: 100
-				})
-					.items.filter((p) => p.id !== project.id)
-					.map((p) => ({ id: p.id, name: p.name }));
+	const otherProjects = !canEdit(role)
+		? []
+		: listProjects(actor, {
+				workshop: project.workshopId,
+				q: '',
+				sort: 'name',
+				dir: 'asc',
+				page: 1,
+				perPage: 100
+			})
+				.items.filter((p) => p.id !== project.id)
+				.map((p) => ({ id: p.id, name: p.name }));
 	return {
 		project,
 		role,
 		otherProjects,
 		documents: listDocuments(actor, project.id),
-		editForm: await superValidate(project, zod4(projectSchema))
+		editForm: await superValidate(project, zod4(projectSchema)),
+		// who reads it as a client, and where its records went (editors and owners)
+		clients: canEdit(role) ? listProjectAccess(actor, project.id) : null,
+		sends: canEdit(role) ? listRecordSends(actor, project.id) : [],
+		clientForm: await superValidate(zod4(clientInviteSchema), { id: 'client' })
 	};
 };
 
@@ -51,4 +58,5 @@ export const actions: Actions = {
 		redirect(303, '/projects');
 	},
 	...analysisRowActions
+	...clientActions
 };

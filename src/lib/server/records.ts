@@ -1,0 +1,151 @@
+/**
+ * The record: what a client reads, prints, downloads as a PDF and receives by e-mail. One document
+ * per project (every saved analysis) or per analysis, built from the stored inputs and results in
+ * the reader's units. Reached by a member or a client of the project (records.ts checks through
+ * getProject), or by a share link (share-links.ts) without an account.
+ */
+import { error } from '@sveltejs/kit';
+import { and, asc, eq, isNull } from 'drizzle-orm';
+import type { Actor } from './access';
+import { getDb } from './db';
+import { analyses, projects, workshops, type AnalysisKind } from './db/schema';
+
+type Project = typeof projects.$inferSelect;
+import { lengthUnitOf } from './preferences';
+import { getProject } from './projects';
+import { GENERAL_CAUTION, GLOSSARY, isUnverified, recordWords } from './record-words';
+import { openShareLink } from './share-links';
+import type { LengthUnit } from '$lib/schemas/preferences';
+import { kindLabel } from '$lib/kinds/names';
+
+export interface RecordItem {
+	id: string;
+	kind: AnalysisKind;
+	kindLabel: string;
+	name: string;
+	version: number;
+	engineVersion: string;
+	updatedAt: Date;
+	pass: boolean | null;
+	verdict: string;
+	inputs: [string, string][];
+	steps: string[];
+	cautions: string[];
+	/** note numbers of this item's sources */
+	notes: number[];
+	/** stored SI input and result, for the measured drawing */
+	input: unknown;
+	result: unknown;
+}
+
+export interface RecordNote {
+	n: number;
+	text: string;
+	unverified: boolean;
+}
+
+export interface RecordDoc {
+	shop: string;
+	project: { id: string; name: string; client: string };
+	scope: 'project' | 'analysis';
+	date: Date;
+	unit: LengthUnit;
+	items: RecordItem[];
+	cautions: string[];
+	notes: RecordNote[];
+	glossary: [string, string][];
+}
+
+type Row = typeof analyses.$inferSelect;
+
+function buildRecord(
+	project: Project,
+	rows: Row[],
+	unit: LengthUnit,
+	scope: RecordDoc['scope']
+): RecordDoc {
+	const shop =
+		getDb()
+			.select({ name: workshops.name })
+			.from(workshops)
+			.where(eq(workshops.id, project.workshopId))
+			.get()?.name ?? '';
+	const notes: RecordNote[] = [];
+	const noteOf = (text: string) => {
+		let note = notes.find((x) => x.text === text);
+		if (!note) notes.push((note = { n: notes.length + 1, text, unverified: isUnverified(text) }));
+		return note.n;
+	};
+	const terms = new Set<string>();
+	const items = rows.map((row): RecordItem => {
+		const words = recordWords(row.kind, row.input, row.result, unit);
+		words.terms.forEach((t) => terms.add(t));
+		return {
+			id: row.id,
+			kind: row.kind,
+			kindLabel: kindLabel(row.kind),
+			name: row.name,
+			version: row.version,
+			engineVersion: row.engineVersion,
+			updatedAt: row.updatedAt,
+			pass: row.pass,
+			verdict: words.verdict,
+			inputs: words.inputs,
+			steps: words.steps,
+			cautions: words.cautions,
+			notes: [...new Set(words.sources.map(noteOf))],
+			input: row.input,
+			result: row.result
+		};
+	});
+	return {
+		shop,
+		project: { id: project.id, name: project.name, client: project.client },
+		scope,
+		date: new Date(),
+		unit,
+		items,
+		cautions: [GENERAL_CAUTION],
+		notes,
+		glossary: [...terms].map((t) => [t, GLOSSARY[t]])
+	};
+}
+
+function savedRows(projectId: string, analysisId?: string | null) {
+	const where = [eq(analyses.projectId, projectId), isNull(analyses.deletedAt)];
+	if (analysisId) where.push(eq(analyses.id, analysisId));
+	const rows = getDb()
+		.select()
+		.from(analyses)
+		.where(and(...where))
+		.orderBy(asc(analyses.createdAt), asc(analyses.id))
+		.all();
+	if (analysisId && !rows.length) error(404, 'Not found.');
+	return rows;
+}
+
+/** The record of every saved analysis of a project (anyone who may read the project). */
+export function projectRecord(actor: Actor, projectId: string) {
+	const { project, role } = getProject(actor, projectId);
+	return {
+		record: buildRecord(project, savedRows(projectId), lengthUnitOf(actor), 'project'),
+		role
+	};
+}
+
+/** The record of one analysis of a project. */
+export function analysisRecord(actor: Actor, projectId: string, analysisId: string) {
+	const { project, role } = getProject(actor, projectId);
+	const rows = savedRows(projectId, analysisId);
+	return { record: buildRecord(project, rows, lengthUnitOf(actor), 'analysis'), role };
+}
+
+/** The record a share link opens, in the units of whoever made the link; 404 when it is closed. */
+export function sharedRecord(token: string) {
+	const link = openShareLink(token);
+	const project = getDb().select().from(projects).where(eq(projects.id, link.projectId)).get();
+	if (!project) error(404, 'Not found.');
+	const unit = link.createdBy ? lengthUnitOf({ id: link.createdBy } as Actor) : 'frac16';
+	const rows = savedRows(project.id, link.analysisId);
+	return buildRecord(project, rows, unit, link.analysisId ? 'analysis' : 'project');
+}

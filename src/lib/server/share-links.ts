@@ -1,0 +1,105 @@
+/**
+ * Share links: a read-only view of one project's record (or one analysis's) for someone without an
+ * account. The token is 32 random bytes, shown once in the link and stored only as its sha-256; a
+ * revoked, expired or unknown token answers the same bare 404.
+ */
+import { error } from '@sveltejs/kit';
+import { and, desc, eq, gt, isNull } from 'drizzle-orm';
+import { randomBytes } from 'node:crypto';
+import type { Actor } from './access';
+import { getDb } from './db';
+import { analyses, shareLinks, users } from './db/schema';
+import { sha256 } from './project-access';
+import { getProject } from './projects';
+
+const DAY_MS = 86_400_000;
+
+/** Make a link (editor). Returns the token: it is in the link and nowhere else. */
+export function createShareLink(
+	actor: Actor,
+	projectId: string,
+	opts: { days: number; analysisId?: string }
+) {
+	getProject(actor, projectId, 'editor');
+	if (opts.analysisId) analysisOf(projectId, opts.analysisId);
+	const token = randomBytes(32).toString('base64url');
+	const link = getDb()
+		.insert(shareLinks)
+		.values({
+			projectId,
+			analysisId: opts.analysisId ?? null,
+			tokenHash: sha256(token),
+			createdBy: actor.id,
+			expiresAt: new Date(Date.now() + opts.days * DAY_MS)
+		})
+		.returning()
+		.get();
+	return { link, token };
+}
+
+function analysisOf(projectId: string, analysisId: string) {
+	const row = getDb()
+		.select({ id: analyses.id, name: analyses.name })
+		.from(analyses)
+		.where(
+			and(
+				eq(analyses.id, analysisId),
+				eq(analyses.projectId, projectId),
+				isNull(analyses.deletedAt)
+			)
+		)
+		.get();
+	if (!row) error(404, 'Not found.');
+	return row;
+}
+
+/** The project's links still open, newest first (editor); tokens are not kept, so not shown. */
+export function listShareLinks(actor: Actor, projectId: string) {
+	getProject(actor, projectId, 'editor');
+	return getDb()
+		.select({
+			id: shareLinks.id,
+			analysisId: shareLinks.analysisId,
+			analysisName: analyses.name,
+			expiresAt: shareLinks.expiresAt,
+			createdAt: shareLinks.createdAt,
+			createdByName: users.name
+		})
+		.from(shareLinks)
+		.leftJoin(analyses, eq(analyses.id, shareLinks.analysisId))
+		.leftJoin(users, eq(users.id, shareLinks.createdBy))
+		.where(
+			and(
+				eq(shareLinks.projectId, projectId),
+				isNull(shareLinks.revokedAt),
+				gt(shareLinks.expiresAt, new Date())
+			)
+		)
+		.orderBy(desc(shareLinks.createdAt))
+		.all();
+}
+
+/** Close a link for good (editor). */
+export function revokeShareLink(actor: Actor, projectId: string, linkId: string) {
+	getProject(actor, projectId, 'editor');
+	const row = getDb()
+		.update(shareLinks)
+		.set({ revokedAt: new Date() })
+		.where(and(eq(shareLinks.id, linkId), eq(shareLinks.projectId, projectId)))
+		.returning()
+		.get();
+	if (!row) error(404, 'Not found.');
+}
+
+/** What an open link shows: its project and, for a one-analysis link, the analysis. Else 404. */
+export function openShareLink(token: string) {
+	// base64url of 32 bytes is 43 characters; anything else cannot be one of ours
+	if (!/^[A-Za-z0-9_-]{43}$/.test(token)) error(404, 'Not found.');
+	const row = getDb()
+		.select()
+		.from(shareLinks)
+		.where(eq(shareLinks.tokenHash, sha256(token)))
+		.get();
+	if (!row || row.revokedAt || row.expiresAt.getTime() <= Date.now()) error(404, 'Not found.');
+	return { projectId: row.projectId, analysisId: row.analysisId, createdBy: row.createdBy };
+}
