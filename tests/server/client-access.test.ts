@@ -132,7 +132,7 @@ describe('sending the record', () => {
 		const text = pdfText(readFileSync(caught.attachments![0].path));
 		expect(text).toContain('Library wall');
 		expect(text).toContain(shelf.name);
-		expect(text).toContain('This shelf will sag about');
+		expect(text).toContain('This shelf sags about');
 		const sends = listRecordSends(cast.owner, project.id);
 		expect(sends.map((s) => s.to)).toEqual([to]);
 		expect(sharedRecord(link!.split('/').pop()!).items[0].name).toBe(shelf.name);

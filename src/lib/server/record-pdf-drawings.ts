@@ -116,7 +116,7 @@ export function drawShelf(pen: Pen, r: ShelfResult, input: unknown, len: (m: num
 		.fontSize(8.5)
 		.fillColor(r.limit.pass ? pen.ink : pen.pencil)
 		.text(
-			`sags ${len(r.sag[r.sag.checked])} ${r.sag.checked === 'longTerm' ? 'after a year' : 'when loaded'} (${r.limit.pass ? 'passes' : 'does not pass'})`,
+			`sags ${len(r.sag[r.sag.checked])} ${r.sag.checked === 'longTerm' ? 'in the long run' : 'when loaded'} (${r.limit.pass ? 'passes' : 'does not pass'})`,
 			Math.min(sagX + 8, x0 + W - 150),
 			shelfY + thick + sagPx + 2,
 			{ width: 200, lineBreak: false }

@@ -67,7 +67,7 @@ function shelfSources(input: ShelfInput, r: ShelfResult) {
 			`${material.name}, stiffness: ${material.sources.modulus}`,
 			`${material.name}, strength: ${material.sources.rupture}`,
 			`${material.name}, weight: ${material.sources.density}`,
-			`Sag after a year (creep): ${material.sources.creep}`
+			`Sag in the long run (creep): ${material.sources.creep}`
 		);
 	else out.push(`${r.material.name}: the figures were typed in by the shop, not published ones.`);
 	for (const w of r.warnings) if (w.source) out.push(w.source);
@@ -105,7 +105,7 @@ function comparisonWords(input: unknown, r: ComparisonResult, unit: LengthUnit):
 		`${c.pass ? 'meets' : 'does not meet'} ${c.limit.name}: sags about ${formatLength(
 			c.sag.checked === 'longTerm' ? c.sag.longTerm : c.sag.instant,
 			{ unit }
-		)}${c.sag.checked === 'longTerm' ? ' after a year' : ''}`
+		)}${c.sag.checked === 'longTerm' ? ' in the long run' : ''}`
 	]);
 	const warnings = [...new Set(r.candidates.flatMap((c) => c.warnings.map((w) => w.message)))];
 	const sources = [
