@@ -33,8 +33,15 @@ describe('the record', () => {
 		expect(record.items.map((i) => i.name)).toEqual([
 			'Left bookcase, middle shelf',
 			'Shelf stock for the library wall',
-			'Fixed shelf to case side'
+			'Fixed shelf to case side',
+			'Living-room wall, four units'
 		]);
+		// the demo wall fails until its cases are fixed to the wall: the record says so and lists
+		// the anchoring steps of its cases
+		const wall = record.items[3];
+		expect(wall.pass).toBe(false);
+		expect(wall.verdict).toMatch(/checks of this wall do not pass; the worst is/);
+		expect(wall.steps.some((s) => /wall|stud/i.test(s))).toBe(true);
 		const shelf = record.items[0];
 		const r = shelf.result as ShelfResult;
 		// the demo's oak-nosed shelf under L/144 (the engine's figures, written out)

@@ -5,6 +5,7 @@
  */
 import { findMaterial, formatLength, type ShelfInput, type ShelfResult } from '$lib/engine';
 import type { CaseResult } from '$lib/engine/case/types';
+import type { WallResult } from '$lib/engine/wall/types';
 import type { JointPlan } from '$lib/engine/joinery';
 import type { StabilityResult } from '$lib/engine/stability';
 import type { ReaderUnit as LengthUnit } from '$lib/kinds/words';
@@ -189,6 +190,29 @@ function caseWords(input: unknown, r: CaseResult, unit: LengthUnit): RecordWords
 	};
 }
 
+function wallWords(input: unknown, r: WallResult, unit: LengthUnit): RecordWords {
+	const worst = r.margins[0];
+	const failing = r.margins.filter((m) => !m.pass).length;
+	const verdict = r.pass
+		? `Every case of this wall passes its shelf, joint and tipping checks (${r.margins.length} checks).`
+		: `${failing} of ${r.margins.length} checks of this wall do not pass; the worst is ${r.cases[worst.caseIndex]?.name ?? 'a case'}: ${worst.what}. Change the design before it is built.`;
+	const anchoring = [...new Set(r.cases.flatMap((c) => c.stability.anchoring.recommendations))];
+	const fixes = r.pass ? [] : r.suggestions.slice(0, 3).map((s) => `${s.title}: ${s.detail}`);
+	return {
+		verdict,
+		inputs: r.cases.map((c): [string, string] => [
+			c.name,
+			`${formatLength(c.widthM, { unit })} wide, ${formatLength(c.heightM, { unit })} tall: ${
+				c.pass ? 'passes' : 'does not pass'
+			}`
+		]),
+		steps: [...fixes, ...anchoring],
+		cautions: [...new Set([...r.warnings, ...r.cautions, ...r.cases.flatMap((c) => c.warnings)])],
+		sources: [...new Set(r.cases.flatMap((c) => c.stability.sources))],
+		terms: ['sag', 'span', 'limit', 'anchoring', 'tip force']
+	};
+}
+
 /** The record's words for one stored analysis (input and result as the engine left them). */
 export function recordWords(
 	kind: AnalysisKind,
@@ -207,5 +231,16 @@ export function recordWords(
 			return stabilityWords(input, result as StabilityResult, unit);
 		case 'case':
 			return caseWords(input, result as CaseResult, unit);
+		case 'wall':
+			return wallWords(input, result as WallResult, unit);
+		default:
+			return {
+				verdict: describeAnalysis(kind, input, result, unit),
+				inputs: describeInput(kind, input, unit),
+				steps: [],
+				cautions: [],
+				sources: [],
+				terms: []
+			};
 	}
 }
