@@ -152,7 +152,7 @@ for (const [name, size] of [
 		await page.emulateMedia({ media: 'print' });
 		for (const selector of [
 			'nav',
-			'header',
+			'header:not(.record-head)',
 			'footer',
 			'button',
 			'input',
