@@ -2,7 +2,7 @@
  * The measured drawing of a saved shelf, from its stored SI input and the engine's result: the
  * record draws what was checked, not a draft being typed.
  */
-import type { ShelfResult } from '../../engine/types';
+import type { ShelfResult } from '../../engine/shelf/types';
 import type { ShelfInput } from '../../schemas/shelf';
 import type { DrawingLoad, ShelfDrawingInput } from '../shelf-drawing/geometry';
 

@@ -57,6 +57,6 @@ export const actions: Actions = {
 		await deleteProject(actor, params.id);
 		redirect(303, '/projects');
 	},
-	...analysisRowActions
+	...analysisRowActions,
 	...clientActions
 };
