@@ -4,7 +4,6 @@ import { problemSchema } from '$lib/schemas/responses/common';
 import { documentOperations } from './documents';
 import { foundationOperations } from './foundation';
 import { joineryOperations } from './joinery';
-import { recordOperations } from './records';
 import { shelfOperations } from './shelf';
 import type { ApiOperation, ApiResponse } from './types';
 import { wallOperations } from './wall';
@@ -16,8 +15,7 @@ export const operations: ApiOperation[] = [
 	...joineryOperations,
 	...wallOperations,
 	...workbenchOperations,
-	...documentOperations,
-	...recordOperations
+	...documentOperations
 ];
 
 /** The session cookie Auth.js sets over HTTPS (plain http in development drops the prefix). */

@@ -1,7 +1,7 @@
 import { fail, redirect } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
-import { requireActor } from '$lib/server/access';
+import { canEdit, requireActor } from '$lib/server/access';
 import { readForm } from '$lib/server/form-body';
 import { listAnalyses } from '$lib/server/analyses';
 import { deleteDocument, getDocument, updateDocument } from '$lib/server/documents';
@@ -13,16 +13,15 @@ export const load: PageServerLoad = async ({ locals, params }) => {
 	const { document, project, role } = getDocument(actor, params.documentId);
 	if (document.projectId !== params.id)
 		redirect(308, `/projects/${project.id}/documents/${document.id}`);
-	const analyses =
-		role === 'viewer'
-			? []
-			: listAnalyses(actor, project.id, {
-					q: '',
-					sort: 'name',
-					dir: 'asc',
-					page: 1,
-					perPage: 100
-				}).items.map((a) => ({ id: a.id, name: a.name }));
+	const analyses = !canEdit(role)
+		? []
+		: listAnalyses(actor, project.id, {
+				q: '',
+				sort: 'name',
+				dir: 'asc',
+				page: 1,
+				perPage: 100
+			}).items.map((a) => ({ id: a.id, name: a.name }));
 	const form = await superValidate(
 		{
 			caption: document.caption,
