@@ -18,7 +18,11 @@ const modules = import.meta.glob<{ actions?: Record<string, Action> }>(
 );
 
 /** Actions that never read a body (a button that is its own confirmation, or sign-out). */
-const BODYLESS = new Set(['/signout default', '/invite/[token] accept']);
+const BODYLESS = new Set([
+	'/signout default',
+	'/invite/[token] accept',
+	'/invite/project/[token] accept'
+]);
 
 const BAD_BODIES = [
 	{ type: 'text/plain', body: 'name=Pantry', expect: 415 },

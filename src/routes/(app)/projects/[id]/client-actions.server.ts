@@ -1,3 +1,4 @@
+import { readForm } from '$lib/server/form-body';
 // The project page's client actions: invite a client by e-mail (editor), take access away and
 // withdraw invitations (owner). Invitations go by mail; a failed mail withdraws the invitation.
 import { fail, type RequestEvent } from '@sveltejs/kit';
@@ -10,13 +11,15 @@ import * as access from '$lib/server/project-access';
 import { accessIdSchema, clientInviteSchema } from '$lib/schemas/client-access';
 
 async function idOf(request: Request) {
-	return accessIdSchema.safeParse(Object.fromEntries(await request.formData()));
+	return accessIdSchema.safeParse(Object.fromEntries(await readForm(request)));
 }
 
 export const clientActions = {
 	inviteClient: async ({ locals, params, request, url }: RequestEvent) => {
 		const actor = requireActor(locals.actor);
-		const form = await superValidate(request, zod4(clientInviteSchema), { id: 'client' });
+		const form = await superValidate(await readForm(request), zod4(clientInviteSchema), {
+			id: 'client'
+		});
 		if (!form.valid) return fail(400, { clientForm: form });
 		const { invitation, token, project } = access.inviteToProject(
 			actor,

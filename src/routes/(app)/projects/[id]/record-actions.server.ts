@@ -1,3 +1,4 @@
+import { readForm } from '$lib/server/form-body';
 // The record page's actions, shared by the project's record and one analysis's: make and close
 // share links, and send the record by e-mail (a failed send says so and keeps what was typed).
 import { fail, type RequestEvent } from '@sveltejs/kit';
@@ -40,21 +41,25 @@ export async function recordPanel(
 export const recordActions = {
 	share: async ({ locals, params, request, url }: RequestEvent) => {
 		const actor = requireActor(locals.actor);
-		const form = await superValidate(request, zod4(shareLinkSchema), { id: 'share' });
+		const form = await superValidate(await readForm(request), zod4(shareLinkSchema), {
+			id: 'share'
+		});
 		if (!form.valid) return fail(400, { shareForm: form });
 		const { token } = createShareLink(actor, params.id!, form.data);
 		return message(form, `${linkOrigin(url)}/shared/${token}`);
 	},
 	unshare: async ({ locals, params, request }: RequestEvent) => {
 		const actor = requireActor(locals.actor);
-		const parsed = accessIdSchema.safeParse(Object.fromEntries(await request.formData()));
+		const parsed = accessIdSchema.safeParse(Object.fromEntries(await readForm(request)));
 		if (!parsed.success) return fail(400, { error: 'Which link?' });
 		revokeShareLink(actor, params.id!, parsed.data.id);
 		return { closed: true };
 	},
 	mail: async ({ locals, params, request, url }: RequestEvent) => {
 		const actor = requireActor(locals.actor);
-		const form = await superValidate(request, zod4(recordMailSchema), { id: 'mail' });
+		const form = await superValidate(await readForm(request), zod4(recordMailSchema), {
+			id: 'mail'
+		});
 		if (!form.valid) return fail(400, { mailForm: form });
 		const link = await sendRecord(actor, params.id!, form.data, linkOrigin(url));
 		if (!link) return message(form, MAIL_UNAVAILABLE_MESSAGE, { status: 503 });
