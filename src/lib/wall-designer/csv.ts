@@ -6,7 +6,7 @@
 import Papa from 'papaparse';
 import type { CutList } from '../engine/cutlist';
 import { formatLength } from '../engine/units/length';
-import type { SheetPlan } from '../engine/sheets';
+import type { Cut, SheetPlan } from '../engine/sheets';
 import type { HardwareLine } from '../engine/wall/hardware';
 import type { UserLengthUnit } from '../workbench/lengths';
 import { tryParseLength } from '../engine/units/length';
@@ -61,20 +61,21 @@ export function cutListCsv(list: CutList, unit: UserLengthUnit): string {
 	});
 }
 
-export function cutOrderWords(
-	kind: string,
-	strip: number | undefined,
-	mark: string | undefined
-): string {
-	switch (kind) {
+/** A cut in words, as the sawyer reads the cut order. */
+export function cutOrderWords(c: Pick<Cut, 'kind' | 'strip' | 'mark' | 'marks'>): string {
+	switch (c.kind) {
 		case 'trim':
 			return 'trim a factory edge';
 		case 'rip-strip':
-			return `rip strip ${strip} off the sheet`;
+			return `rip strip ${c.strip} off the sheet`;
 		case 'crosscut':
-			return `crosscut part ${mark} off strip ${strip}`;
+			return c.marks
+				? `crosscut the stack of ${c.marks.join(', ')} off strip ${c.strip}`
+				: `crosscut part ${c.mark} off strip ${c.strip}`;
+		case 'crosscut-part':
+			return `crosscut part ${c.mark} to length`;
 		default:
-			return `rip part ${mark} to width`;
+			return `rip part ${c.mark} off its stack or to width`;
 	}
 }
 
@@ -83,14 +84,7 @@ export function sheetsCsv(plan: SheetPlan, unit: UserLengthUnit): string {
 	const rows: (string | number)[][] = [];
 	for (const s of plan.sheets)
 		s.cuts.forEach((c, i) =>
-			rows.push([
-				s.materialName,
-				s.index + 1,
-				i + 1,
-				cutOrderWords(c.kind, c.strip, c.mark),
-				c.mark ?? '',
-				L(c.sizeM)
-			])
+			rows.push([s.materialName, s.index + 1, i + 1, cutOrderWords(c), c.mark ?? '', L(c.sizeM)])
 		);
 	return Papa.unparse({
 		fields: ['Material', 'Sheet', 'Cut', 'What', 'Part', 'Leaves'],

@@ -90,11 +90,56 @@ describe('sheet layouts (property tests)', () => {
 				const reported = plan.notOnSheets.reduce((a, n) => a + n.count, 0);
 				expect(placed + reported).toBe(groups.reduce((a, g) => a + g.count, 0));
 				for (const m of plan.perMaterial) {
-					// sheet count at least the parts' area over one sheet's area
+					// sheet count at least the parts' area over one sheet's area, and at least the
+					// bound from parts too wide to lie three across
 					expect(m.sheets).toBeGreaterThanOrEqual(m.lowerBound);
+					expect(m.lowerBound).toBeGreaterThanOrEqual(m.areaBound);
 					expect(m.yield).toBeLessThanOrEqual(1);
+					// never more sheets than parts on them (every sheet holds at least one)
+					const onIt = plan.sheets
+						.filter((s) => s.materialName === m.materialName)
+						.reduce((a, s) => a + s.placements.length, 0);
+					expect(m.sheets).toBeLessThanOrEqual(onIt);
 				}
 			}),
+			{ numRuns: 150 }
+		);
+	});
+
+	it('small parts: never more sheets than 8/3 of their area (kerf included) plus one', () => {
+		// Parts at most a quarter of the sheet each way, grain locked (one way to lie), taken tallest
+		// first: a strip is closed only when a part no taller than any in it cannot fit, so its
+		// stacks cover more than three quarters of the sheet's length with parts at least as tall
+		// as the next strip; a sheet is closed only when less than a quarter of its width is left.
+		// Every sheet but the last is therefore more than 3/8 full.
+		fc.assert(
+			fc.property(
+				fc.array(
+					fc.record({
+						l: fc.double({ min: 1 * IN, max: 22 * IN, noNaN: true }),
+						w: fc.double({ min: 1 * IN, max: 10 * IN, noNaN: true }),
+						count: fc.integer({ min: 1, max: 12 })
+					}),
+					{ minLength: 1, maxLength: 12 }
+				),
+				fc.double({ min: 0, max: 0.125 * IN, noNaN: true }),
+				(raw, kerf) => {
+					const groups = raw.map((g, i) => group(i, g.l, g.w, g.count, true));
+					const plan = planSheets(groups, () => false, {
+						...DEFAULT_SHEET_OPTIONS,
+						kerfM: kerf,
+						trimM: 0,
+						defaultStock: { lengthM: 96 * IN, widthM: 48 * IN, keepGrain: false }
+					});
+					const [m] = plan.perMaterial;
+					const area = groups.reduce(
+						(a, g) => a + g.count * (g.roughLengthM + kerf) * (g.roughWidthM + kerf),
+						0
+					);
+					const sheet = (96 * IN + kerf) * (48 * IN + kerf);
+					expect(m.sheets).toBeLessThanOrEqual(Math.ceil(((8 / 3) * area) / sheet) + 1);
+				}
+			),
 			{ numRuns: 150 }
 		);
 	});
@@ -114,6 +159,18 @@ describe('sheet layouts (property tests)', () => {
 
 describe('sheet layouts of the demo wall', () => {
 	const { cutList, sheets } = wallSheets(DEMO_WALL);
+	it('the demo’s MDO: 6 sheets, within one of the lower bound (5: its 22 panels 17" wide cannot lie three across a 48" sheet; the area alone says 4)', () => {
+		const mdo = sheets.perMaterial.find((m) => m.materialName.startsWith('MDO'))!;
+		expect(mdo.areaBound).toBe(4);
+		expect(mdo.lowerBound).toBe(5);
+		expect(mdo.sheets).toBeLessThanOrEqual(mdo.lowerBound + 1);
+		// parts stacked within a strip: some crosscut frees a stack of several parts
+		expect(
+			sheets.sheets.some((s) =>
+				s.cuts.some((c) => c.kind === 'crosscut' && (c.marks?.length ?? 0) > 1)
+			)
+		).toBe(true);
+	});
 	it('sheets per material at least the area bound, every part on a sheet, cut order rips before crosscuts in each strip', () => {
 		for (const m of sheets.perMaterial) {
 			const area = sheets.sheets

@@ -1,13 +1,21 @@
 /**
- * Sheet layouts a track saw and a table saw can follow. Parts are packed in strips across the
- * sheet (a general-purpose shelf packer places them); the rules of the shop are ours: every part
- * at its rough size plus a saw kerf, a trim at the factory edges, the sheet's grain along its
- * length, parts that must keep their grain never turned, and only edge-to-edge cuts: rip a strip,
- * crosscut its parts, rip a part narrower than its strip. The cut order follows from the strips.
+ * Sheet layouts a track saw and a table saw can follow. Parts are packed in strips ripped off the
+ * sheet, stacks crosscut off each strip and parts ripped off each stack (strips.ts, with a
+ * general-purpose shelf packer filling each strip); the rules of the shop are ours: every part at
+ * its rough size plus a saw kerf, a trim at the factory edges, the sheet's grain along its length,
+ * parts that must keep their grain never turned, and only edge-to-edge cuts. The cut order follows
+ * from the strips and stacks.
  */
-import ShelfPack from '@mapbox/shelf-pack';
 import type { CutGroup } from '../cutlist';
 import { METRES_PER_INCH } from '../units/length';
+import {
+	crossingBound,
+	packStrips,
+	type Item,
+	type Lie,
+	type Order,
+	type PackedSheet
+} from './strips';
 
 export interface SheetStock {
 	materialName: string;
@@ -45,12 +53,15 @@ export interface Placement {
 }
 
 export interface Cut {
-	/** trim a factory edge; rip a strip off the sheet along its length; crosscut a part off its
-	 * strip; rip a part narrower than its strip to width */
-	kind: 'trim' | 'rip-strip' | 'crosscut' | 'rip-part';
+	/** trim a factory edge; rip a strip off the sheet along its length; crosscut a part (or a
+	 * stack of parts) off its strip; rip a part off its stack, or to width; crosscut a part shorter
+	 * than its stack to length */
+	kind: 'trim' | 'rip-strip' | 'crosscut' | 'rip-part' | 'crosscut-part';
 	/** the strip (1 up) the cut belongs to, and the part's mark */
 	strip?: number;
 	mark?: string;
+	/** a crosscut that frees a stack: the marks of its parts, lowest first */
+	marks?: string[];
 	/** the width or length the cut leaves: the trim, the strip's width, the part's length or width */
 	sizeM: number;
 	/** the cut line: x = constant (crosscut) or y = constant (rip), from x0 to x1 or y0 to y1 */
@@ -85,7 +96,10 @@ export interface SheetPlan {
 		widthM: number;
 		partAreaM2: number;
 		yield: number;
-		/** no fewer sheets can hold the parts: their area over one sheet's (rounded up) */
+		/** the parts' area over one sheet's, rounded up */
+		areaBound: number;
+		/** no layout can use fewer sheets: the larger of the area bound (on the sheet less its
+		 * trim) and the bound from parts too wide to lie three across (strips.ts) */
 		lowerBound: number;
 	}[];
 	/** parts too large for their sheet, or solid wood cut from boards */
@@ -108,14 +122,6 @@ export const DEFAULT_SHEET_OPTIONS: SheetOptions = {
 const U = 1e6;
 const up = (m: number) => Math.ceil(m * U - 1e-6);
 const si = (u: number) => u / U;
-
-interface Item {
-	group: number;
-	mark: string;
-	l: number;
-	w: number;
-	locked: boolean;
-}
 
 /** Nest the sheet-good groups of a cut list onto sheets, one material at a time. */
 export function planSheets(
@@ -145,6 +151,12 @@ export function planSheets(
 		const mine = nest(materialName, items, stock, options, notOnSheets);
 		sheets.push(...mine);
 		const sheetArea = stock.lengthM * stock.widthM;
+		const trim = up(options.trimM);
+		const L = Math.floor(stock.lengthM * U) - 2 * trim;
+		const W = Math.floor(stock.widthM * U) - 2 * trim;
+		const fits = items.filter(
+			(it) => (it.l <= L && it.w <= W) || (!it.locked && it.w <= L && it.l <= W)
+		);
 		const partArea = mine.reduce(
 			(a, s) => a + s.placements.reduce((b, p) => b + p.wM * p.hM, 0),
 			0
@@ -156,7 +168,11 @@ export function planSheets(
 			widthM: stock.widthM,
 			partAreaM2: partArea,
 			yield: mine.length ? partArea / (mine.length * sheetArea) : 0,
-			lowerBound: Math.ceil(partArea / sheetArea - 1e-9)
+			areaBound: Math.ceil(partArea / sheetArea - 1e-9),
+			lowerBound: Math.max(
+				Math.ceil(partArea / (si(L) * si(W)) - 1e-9),
+				crossingBound(fits, L, W, up(options.kerfM))
+			)
 		});
 	}
 	return { sheets, perMaterial, notOnSheets, options };
@@ -179,91 +195,36 @@ function nest(
 	const trim = up(o.trimM);
 	const L = Math.floor(stock.lengthM * U) - 2 * trim;
 	const W = Math.floor(stock.widthM * U) - 2 * trim;
-	// Several plans, keep the one with the fewest sheets (then the emptiest last sheet): free parts
-	// lie narrow side across the strip or wide side across; parts go in by strip height or by area.
-	let best: ReturnType<typeof packAll> | null = null;
-	for (const lie of ['narrow', 'wide'] as const)
-		for (const order of ['height', 'area'] as const) {
-			const trial = packAll(items, lie, order, L, W, kerf, trim);
-			if (
-				!best ||
-				trial.packs.length < best.packs.length ||
-				(trial.packs.length === best.packs.length && trial.lastArea < best.lastArea)
-			)
-				best = trial;
+	// Several plans, keep the one with the fewest sheets (then the least used on the last sheet,
+	// which leaves the largest offcut): free parts lie narrow side across the strip or wide side
+	// across; parts go in by their height across the strip, by area or by length.
+	let best: ReturnType<typeof packStrips> | null = null;
+	let bestLast = Infinity;
+	for (const lie of ['narrow', 'wide'] as Lie[])
+		for (const order of ['height', 'area', 'length'] as Order[]) {
+			const trial = packStrips(items, lie, order, L, W, kerf);
+			const last = trial.sheets.at(-1)?.used ?? 0;
+			if (!best || trial.sheets.length < best.sheets.length) [best, bestLast] = [trial, last];
+			else if (trial.sheets.length === best.sheets.length && last < bestLast)
+				[best, bestLast] = [trial, last];
 		}
-	const { packs, placed, tooBig } = best!;
+	const tooBig = new Map<string, number>();
+	for (const it of best!.tooBig) tooBig.set(it.mark, (tooBig.get(it.mark) ?? 0) + 1);
 	for (const [mark, count] of tooBig)
 		notOnSheets.push({
 			mark,
 			count,
 			reason: `larger than a ${materialName} sheet less its trim (or its grain cannot turn to fit)`
 		});
-	return packs.map((p, i) => layoutOf(materialName, i, stock, p, placed[i], o));
+	return best!.sheets.map((p, i) => layoutOf(materialName, i, stock, p, o));
 }
 
-function packAll(
-	items: Item[],
-	lie: 'narrow' | 'wide',
-	order: 'height' | 'area',
-	L: number,
-	W: number,
-	kerf: number,
-	trim: number
-) {
-	// grain-locked parts run along the sheet; a free part turns when it fits only turned, or to lie
-	// as the plan asks
-	const laid = items.map((it) => {
-		const along = { ...it, x: it.l, y: it.w, turned: false };
-		const across = { ...it, x: it.w, y: it.l, turned: true };
-		if (it.locked) return along;
-		const fitsAlong = along.x <= L && along.y <= W;
-		const fitsAcross = across.x <= L && across.y <= W;
-		if (fitsAlong && fitsAcross) return along.y <= across.y === (lie === 'narrow') ? along : across;
-		return fitsAcross ? across : along;
-	});
-	laid.sort((a, b) =>
-		order === 'height' ? b.y - a.y || b.x - a.x : b.x * b.y - a.x * a.y || b.y - a.y
-	);
-	const packs: ShelfPack[] = [];
-	const placed: Placement[][] = [];
-	const tooBig = new Map<string, number>();
-	for (const it of laid) {
-		if (it.x > L || it.y > W) {
-			tooBig.set(it.mark, (tooBig.get(it.mark) ?? 0) + 1);
-			continue;
-		}
-		let bin = null;
-		let s = 0;
-		for (; s < packs.length && !bin; s++) bin = packs[s].packOne(it.x + kerf, it.y + kerf);
-		if (!bin) {
-			packs.push(new ShelfPack(L + kerf, W + kerf, { autoResize: false }));
-			placed.push([]);
-			s = packs.length;
-			bin = packs[s - 1].packOne(it.x + kerf, it.y + kerf)!;
-		}
-		placed[s - 1].push({
-			mark: it.mark,
-			group: it.group,
-			xM: si(bin.x + trim),
-			yM: si(bin.y + trim),
-			wM: si(it.x),
-			hM: si(it.y),
-			turned: it.turned
-		});
-	}
-	const last = packs[packs.length - 1];
-	const lastArea = last ? last.shelves.reduce((a, sh) => a + sh.h, 0) : 0;
-	return { packs, placed, tooBig, lastArea };
-}
-
-/** The cuts in order and the leftovers, from the strips the packer made. */
+/** The placements, the cuts in order and the usable leftovers of one packed sheet. */
 function layoutOf(
 	materialName: string,
 	index: number,
 	stock: SheetStock,
-	pack: ShelfPack,
-	placements: Placement[],
+	packed: PackedSheet,
 	o: SheetOptions
 ): SheetLayout {
 	const kerf = o.kerfM;
@@ -272,8 +233,10 @@ function layoutOf(
 	const Wd = stock.widthM;
 	const cuts: Cut[] = [];
 	const offcuts: Offcut[] = [];
+	const placements: Placement[] = [];
 	const xMax = L - trim;
 	const yMax = Wd - trim;
+	const at = (u: number) => si(u) + trim;
 	if (trim > 0)
 		cuts.push(
 			{ kind: 'trim', sizeM: trim, line: { x0: 0, y0: trim, x1: L, y1: trim } },
@@ -288,41 +251,68 @@ function layoutOf(
 			offcuts.push({ xM: x, yM: y, wM: w, hM: h });
 	};
 	let yEnd = trim;
-	pack.shelves.forEach((shelf, k) => {
-		const y = si(shelf.y) + trim;
-		const inStrip = placements.filter((p) => Math.abs(p.yM - y) < 1e-7).sort((a, b) => a.xM - b.xM);
-		const h = Math.max(...inStrip.map((p) => p.hM));
+	packed.strips.forEach((strip, k) => {
+		const n = k + 1;
+		const y = at(strip.y);
+		const h = si(strip.h);
 		cuts.push({
 			kind: 'rip-strip',
-			strip: k + 1,
+			strip: n,
 			sizeM: h,
 			line: { x0: trim, y0: y + h + kerf / 2, x1: xMax, y1: y + h + kerf / 2 }
 		});
 		let xEnd = trim;
-		for (const p of inStrip) {
+		for (const stack of strip.stacks) {
+			const x = at(stack.x);
+			const w = si(stack.w);
+			const marks = stack.parts.map((p) => p.item.mark);
 			cuts.push({
 				kind: 'crosscut',
-				strip: k + 1,
-				mark: p.mark,
-				sizeM: p.wM,
-				line: { x0: p.xM + p.wM + kerf / 2, y0: y, x1: p.xM + p.wM + kerf / 2, y1: y + h }
+				strip: n,
+				...(marks.length === 1 ? { mark: marks[0] } : { marks }),
+				sizeM: w,
+				line: { x0: x + w + kerf / 2, y0: y, x1: x + w + kerf / 2, y1: y + h }
 			});
-			if (p.hM < h - 1e-9) {
-				cuts.push({
-					kind: 'rip-part',
-					strip: k + 1,
-					mark: p.mark,
-					sizeM: p.hM,
-					line: {
-						x0: p.xM,
-						y0: p.yM + p.hM + kerf / 2,
-						x1: p.xM + p.wM,
-						y1: p.yM + p.hM + kerf / 2
-					}
-				});
-				offcut(p.xM, p.yM + p.hM + kerf, p.wM, h - p.hM - kerf);
-			}
-			xEnd = p.xM + p.wM + kerf;
+			let top = y;
+			stack.parts.forEach((p, j) => {
+				const pm: Placement = {
+					mark: p.item.mark,
+					group: p.item.group,
+					xM: at(p.px),
+					yM: at(p.py),
+					wM: si(p.x),
+					hM: si(p.y),
+					turned: p.turned
+				};
+				placements.push(pm);
+				const last = j === stack.parts.length - 1;
+				const rest = y + h - (pm.yM + pm.hM);
+				// rip the part off what is left of the stack (the last part only if it is narrower)
+				if (!last || rest > 1e-9) {
+					const yl = pm.yM + pm.hM + kerf / 2;
+					cuts.push({
+						kind: 'rip-part',
+						strip: n,
+						mark: pm.mark,
+						sizeM: pm.hM,
+						line: { x0: x, y0: yl, x1: x + w, y1: yl }
+					});
+				}
+				if (pm.wM < w - 1e-9) {
+					const xl = pm.xM + pm.wM + kerf / 2;
+					cuts.push({
+						kind: 'crosscut-part',
+						strip: n,
+						mark: pm.mark,
+						sizeM: pm.wM,
+						line: { x0: xl, y0: pm.yM, x1: xl, y1: pm.yM + pm.hM }
+					});
+					offcut(pm.xM + pm.wM + kerf, pm.yM, w - pm.wM - kerf, pm.hM);
+				}
+				top = pm.yM + pm.hM + kerf;
+			});
+			offcut(x, top, w, y + h - top);
+			xEnd = x + w + kerf;
 		}
 		offcut(xEnd, y, xMax - xEnd, h);
 		yEnd = y + h + kerf;
