@@ -6,6 +6,7 @@ import type { CaseDesign } from '../schemas/case';
 import type { CaseMargin, CaseResult, CaseShelf } from '../engine/case/types';
 import { formatLength } from '../engine/units/length';
 import type { UserLengthUnit } from '../workbench/lengths';
+import { count } from '../kinds/words';
 import { marginWords } from './words';
 
 /** The key the elevation uses for a shelf: its index in the design, or 'top' / 'bottom'. */
@@ -34,7 +35,7 @@ export function shelfVerdicts(result: CaseResult): Record<string, { pass: boolea
 export function elevationDescription(d: CaseDesign, r: CaseResult, unit: UserLengthUnit): string {
 	const L = (m: number) => formatLength(m, { unit });
 	const failing = r.shelves.filter((s) => !s.pass).map((s) => s.name);
-	const shelves = `${d.shelves.length} shelf${d.shelves.length === 1 ? '' : 'es'}`;
+	const shelves = count(d.shelves.length, 'shelf', 'shelves');
 	const heights = d.shelves.map((s) => L(s.height)).join(', ');
 	const verdict = failing.length
 		? `Failing: ${failing.join(', ')}.`

@@ -66,3 +66,20 @@ describe('the front elevation layout', () => {
 		expect(g.base!.h).toBeCloseTo(4 * IN * g.scale, 9);
 	});
 });
+
+describe('the case elevation in words, for screen readers', () => {
+	it('counts shelves in plain English: one shelf, four shelves (never "shelfes")', async () => {
+		const { checkCaseSI: checkCase } = await import('../../../src/lib/engine/case');
+		const { elevationDescription } = await import('../../../src/lib/case-designer/shelf-verdicts');
+		const d = caseDesignSchema.parse(toDesign(defaultCase('frac16'), 'frac16'));
+		const four = {
+			...d,
+			shelves: [1, 2, 3, 4].map((k) => ({ ...d.shelves[0], height: k * 12 * IN }))
+		};
+		const text = elevationDescription(four, checkCase(four), 'frac16');
+		expect(text).toContain('with 4 shelves at 12", 24", 36", 48" from the floor');
+		expect(text).not.toContain('shelfes');
+		const one = { ...d, shelves: [d.shelves[0]] };
+		expect(elevationDescription(one, checkCase(one), 'frac16')).toMatch(/with 1 shelf at /);
+	});
+});
