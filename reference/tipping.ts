@@ -11,6 +11,20 @@ const LBF_N = 4.4482216152605;
 export const F2057_TEST_WEIGHT_N = 60 * LBF_N;
 export const F2057_MIN_HEIGHT_M = 27 * 0.0254;
 
+/** ASTM F2057-23's test conditions for drawers, as far as public summaries of the standard show
+ * them (the standard itself was not read):
+ * - its introduction: the tests simulate "a clothing storage unit on carpet, loaded drawers,
+ *   multiple open drawers, and a dynamic force" (the first page of F2057-23, as stored by a
+ *   document-sharing site);
+ * - all drawers loaded with 8.5 lb per cubic foot (SGS SafeGuardS 04/23, "US Enacts STURDY Act
+ *   for Clothing Storage Units", January 2023, describing the revision then expected);
+ * - a test block 10.9 mm thick under the rear of the unit simulates carpet; without interlocks
+ *   several drawers are opened at once; the 60 lb weight hangs on the front edge of a drawer (a test
+ *   laboratory's explanation of F2057-23, "US Dresser ASTM F2057-23 Furniture Tip Over Test").
+ * From memory, unverified: drawers open to their stops; the block tilts the unit about 1.5°. */
+export const F2057_FILL_KG_PER_M3 = (8.5 * 0.45359237) / 0.3048 ** 3;
+export const F2057_CARPET_BLOCK_M = 0.0109;
+
 /** ASTM F3096-14: the tip restraint holds a 50 lbf pull; F3096-23 raised the test to 60 lb
  * (REFERENCES.md; unverified). */
 export const F3096_14_PULL_N = 50 * LBF_N;

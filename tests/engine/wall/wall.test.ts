@@ -305,3 +305,66 @@ describe('the demo wall', () => {
 		expect(bandingTotals(shop.cutList.groups, 0)[0].lengthM).toBeCloseTo(net, 9);
 	});
 });
+
+describe('tip-over with drawers, as in ASTM F2057-23 (the nearest published test)', () => {
+	// The test's conditions as public summaries give them (reference/tipping.ts): every drawer
+	// out at once, drawers filled at 8.5 lb/ft³ (SGS SafeGuardS 04/23), a 10.9 mm block under
+	// the back (a test laboratory's explanation of F2057-23), 60 lb on a drawer front.
+	const r = checkWall(DEMO_WALL);
+	const low = r.cases[1];
+	const mine = r.parts.filter((p) => p.caseIndex === 1);
+	const setback = 3 * IN;
+	const ext = 14 * IN; // full-extension 14" slides
+
+	it('the demo’s low unit tips by itself with both drawers pulled out, empty: worked from its parts', () => {
+		// moments about the front of the plinth (3" behind the case front), level floor
+		const carcass = mine
+			.filter((p) => !p.moving)
+			.reduce((a, p) => a + p.massKg * (p.centre.fromFrontM - setback), 0);
+		const drawers = [0, 1].map((k) => mine.filter((p) => p.moving?.drawer === k));
+		const overturning = drawers.reduce((a, parts) => {
+			const m = parts.reduce((b, p) => b + p.massKg, 0);
+			const x = parts.reduce((b, p) => b + p.massKg * p.centre.fromFrontM, 0) / m;
+			return a + m * (setback - (x - ext));
+		}, 0);
+		expect(overturning).toBeGreaterThan(carcass); // it tips even before the test's tilt
+		expect(low.stability.tipsUnaided).toBe(true);
+		expect(low.stability.warnings.join(' ')).toMatch(/tips over by itself/);
+		// and the screen's worst-first list leads with a tipping failure and offers the anchoring fix
+		expect(r.margins.some((m) => m.caseIndex === 1 && !m.pass && m.key.includes('stability'))).toBe(
+			true
+		);
+		expect(r.suggestions.some((s) => s.caseIndex === 1 && s.title.includes('Fix the case'))).toBe(
+			true
+		);
+	});
+
+	it('each drawer is filled at 8.5 lb per cubic foot of its box (bottom area × side height)', () => {
+		const fill = [0, 1].reduce((a, k) => {
+			const bottom = mine.find((p) => p.moving?.drawer === k && p.role === 'drawer bottom')!;
+			const side = mine.find((p) => p.moving?.drawer === k && p.role === 'drawer side')!;
+			const ft3 = (bottom.lengthM * bottom.widthM * side.widthM) / 0.3048 ** 3;
+			return a + ft3 * 8.5 * 0.45359237;
+		}, 0);
+		const cg = low.stability.centreOfGravity;
+		expect(cg.loaded.massKg - cg.empty.massKg).toBeCloseTo(fill, 9);
+		expect(fill).toBeGreaterThan(5); // two boxes of about 1.9 ft³ each
+	});
+
+	it('the case is tilted forward as by the 10.9 mm block under its back', () => {
+		const deg = (Math.atan(0.0109 / (17 * IN - setback)) * 180) / Math.PI;
+		expect(low.stability.warnings).toContain(
+			`A forward floor tilt of ${Number(deg.toFixed(2))}° is included; carpet and shims change it.`
+		);
+		// cases without drawers stand level
+		expect(r.cases[0].stability.warnings.join(' ')).not.toMatch(/tilt/);
+	});
+
+	it('anchored into studs, the low unit passes every tipping check (the restraint holds it)', () => {
+		const fixed = structuredClone(DEMO_WALL);
+		fixed.cases[1].anchoring = { kind: 'bracket', intoStuds: true };
+		const k = checkWall(fixed).cases[1];
+		expect(k.margins.filter((m) => m.key.startsWith('stability')).every((m) => m.pass)).toBe(true);
+		expect(k.stability.restraint.requiredN).toBeGreaterThan(0);
+	});
+});

@@ -97,7 +97,9 @@ export function checkStabilitySI(req: StabilityRequest): StabilityResult {
 			'A restraint fixed into drywall alone pulls out (FEMA): fix it into a stud or blocking.'
 		);
 	if (tiltDeg > 0)
-		warnings.push(`A forward floor tilt of ${tiltDeg}° is included; carpet and shims change it.`);
+		warnings.push(
+			`A forward floor tilt of ${Number(tiltDeg.toFixed(2))}° is included; carpet and shims change it.`
+		);
 
 	return {
 		estimate: true,

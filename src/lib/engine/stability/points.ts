@@ -78,7 +78,11 @@ export function frontPoints(req: StabilityRequest, open: boolean, loaded: boolea
 		massKg:
 			nonNegative(d.massKg, `drawers.${i}.massKg`) +
 			(loaded ? nonNegative(d.contentsKg ?? 0, `drawers.${i}.contentsKg`) : 0),
-		xM: req.depthM / 2 - (open ? drawerExtension(req, i) : 0),
+		xM:
+			(d.centreFromFrontM === undefined
+				? req.depthM / 2
+				: within(d.centreFromFrontM, -req.depthM, req.depthM, `drawers.${i}.centreFromFrontM`)) -
+			(open ? drawerExtension(req, i) : 0),
 		zM: within(d.heightM, 0, req.heightM, `drawers.${i}.heightM`)
 	}));
 	doors.forEach((d, i) =>

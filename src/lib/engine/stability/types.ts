@@ -37,6 +37,8 @@ export interface Drawer {
 	contentsKg?: number;
 	/** how far it opens beyond the case front (default: 2/3 of the case depth) */
 	extensionM?: number;
+	/** its centre (box and front) behind the case front when shut (default: half the case depth) */
+	centreFromFrontM?: number;
 }
 
 export interface Door {

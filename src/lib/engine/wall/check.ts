@@ -8,6 +8,7 @@ import { JOINT_CAUTIONS } from '../joinery/cautions';
 import { planJointSI } from '../joinery/plan';
 import type { JointPlan, JointRequest } from '../joinery/types';
 import { JoineryInputError } from '../joinery/validate';
+import { F2057_CARPET_BLOCK_M, F2057_FILL_KG_PER_M3 } from '../../../../reference/tipping';
 import { STABILITY_CAUTIONS } from '../stability/cautions';
 import { checkStabilitySI } from '../stability/check';
 import type { StabilityRequest } from '../stability/types';
@@ -303,28 +304,44 @@ function dividerRequests(c: WallCaseDesign, g: WallCaseGeometry) {
 }
 
 /** Tip-over of one case: the carcass from its parts, the shelves' contents, each drawer (box and
- * front) and each door leaf by its own weight. */
+ * front, at its own centre) and each door leaf by its own weight. As in ASTM F2057-23, the nearest
+ * published test (reference/tipping.ts): every drawer pulled out at once, each filled at the test's
+ * 8.5 lb per cubic foot unless the design says it holds more, and the case tilted forward as by the
+ * test's 10.9 mm block under its back (the carpet the test simulates); the engine then tries the
+ * 60 lb test weight on each open drawer's front. */
 function stabilityRequest(
 	c: WallCaseDesign,
 	g: WallCaseGeometry,
 	shelves: WallShelfCheck[],
 	mine: WallPart[]
 ): StabilityRequest {
-	const drawers = new Map<number, { massKg: number; heightM: number; part: WallPart }>();
+	const drawers = new Map<
+		number,
+		{ massKg: number; moment: number; heightM: number; volumeM3: number; part: WallPart }
+	>();
 	const doors = new Map<number, { massKg: number; widthM: number; centreHeightM: number }>();
 	for (const p of mine) {
 		const k = p.moving?.drawer;
 		if (k !== undefined) {
-			const dr = drawers.get(k) ?? { massKg: 0, heightM: 0, part: p };
+			const dr = drawers.get(k) ?? { massKg: 0, moment: 0, heightM: 0, volumeM3: 0, part: p };
 			dr.massKg += p.massKg;
+			dr.moment += p.massKg * p.centre.fromFrontM;
 			if (p.role === 'drawer front') dr.heightM = p.elevation!.z;
+			if (p.role === 'drawer bottom') dr.volumeM3 += p.lengthM * p.widthM;
 			drawers.set(k, dr);
 		}
 		const dk = p.moving?.door;
 		if (dk !== undefined)
 			doors.set(dk, { massKg: p.massKg, widthM: p.widthM, centreHeightM: p.centre.heightM });
 	}
+	// the box's inside volume: its bottom's area times the height of its sides
+	const boxHeight = new Map<number, number>();
+	for (const p of mine)
+		if (p.role === 'drawer side' && p.moving?.drawer !== undefined)
+			boxHeight.set(p.moving.drawer, p.widthM);
 	const opening = (p: WallPart) => c.drawers[p.path[3] as number];
+	const setback = c.base?.setback ?? 0;
+	const carpetDeg = (Math.atan(F2057_CARPET_BLOCK_M / (c.depth - setback)) * 180) / Math.PI;
 	return {
 		heightM: c.height,
 		widthM: c.width,
@@ -348,18 +365,20 @@ function stabilityRequest(
 					s.path[0] === 'shelves' ? c.shelves[s.path[1] as number].itemHeight : undefined,
 				centreFromFrontM: g.insideCentreXM
 			})),
-		drawers: [...drawers.values()].map((dr) => {
+		drawers: [...drawers.entries()].map(([k, dr]) => {
 			const o = opening(dr.part);
+			const fill = dr.volumeM3 * (boxHeight.get(k) ?? 0) * F2057_FILL_KG_PER_M3;
 			return {
 				heightM: Math.max(0, dr.heightM),
 				massKg: dr.massKg,
-				contentsKg: (o.contentsWeight ?? 0) / STANDARD_GRAVITY,
-				extensionM: o.slide.length * (o.slide.extension === 'full' ? 1 : 0.75)
+				contentsKg: Math.max((o.contentsWeight ?? 0) / STANDARD_GRAVITY, fill),
+				extensionM: o.slide.length * (o.slide.extension === 'full' ? 1 : 0.75),
+				centreFromFrontM: dr.massKg > 0 ? dr.moment / dr.massKg : undefined
 			};
 		}),
 		doors: [...doors.values()].map((x) => ({ ...x, centreHeightM: Math.max(0, x.centreHeightM) })),
 		base: { setbackM: c.base?.setback },
-		floorTiltDeg: c.floorTiltDeg,
+		floorTiltDeg: c.drawers.length ? Math.max(c.floorTiltDeg ?? 0, carpetDeg) : c.floorTiltDeg,
 		anchoring: c.anchoring
 			? { kind: c.anchoring.kind, heightM: c.anchoring.height, intoStuds: c.anchoring.intoStuds }
 			: undefined,
