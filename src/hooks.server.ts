@@ -3,7 +3,7 @@ import { sequence } from '@sveltejs/kit/hooks';
 import { building, dev } from '$app/environment';
 import { actorFromBearer } from '$lib/server/accounts/api-tokens';
 import { actorForUserId } from '$lib/server/accounts/users';
-import { authHandle, authSecret } from '$lib/server/auth';
+import { authHandle, authSecret, OPEN_API } from '$lib/server/auth';
 import { apiJson } from '$lib/server/hooks/api-json';
 import { authCookies } from '$lib/server/hooks/auth-cookies';
 import { computeLimit } from '$lib/server/hooks/compute-limit';
@@ -20,10 +20,6 @@ export const init: ServerInit = () => {
 	// files left by a crash mid-upload or a deleted project; never holds up the start
 	sweepOrphanFiles().catch((e) => console.error('Sweeping orphan document files failed:', e));
 };
-
-// Open API routes that read no stored data: no session to read, no Auth.js work per request.
-const OPEN_API =
-	/^\/api\/v1\/(shelf(\/[\w-]+)?|joints|stability|cases\/check|walls\/(check|cutlist|sheets)|materials|health|openapi\.json)\/?$/;
 
 /** Who is acting: an API token on /api/ requests, else the Auth.js session cookie. */
 export const actorHandle: Handle = async ({ event, resolve }) => {

@@ -3,7 +3,7 @@
 import { eq } from 'drizzle-orm';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { createUser } from '../../src/lib/server/accounts/users';
-import { authHandle } from '../../src/lib/server/auth';
+import { authConfig, authHandle } from '../../src/lib/server/auth';
 import { schema } from '../../src/lib/server/db';
 import { apiJson } from '../../src/lib/server/hooks/api-json';
 import { authCookies } from '../../src/lib/server/hooks/auth-cookies';
@@ -175,6 +175,31 @@ describe('the Auth.js cookies', () => {
 		expect(actor).toMatchObject({ id: user.id });
 		expect(written.filter((c) => c.name.endsWith('callback-url'))).toEqual([]);
 		expect(written.filter((c) => c.secure)).toEqual([]);
+	});
+});
+
+describe('Auth.js per request', () => {
+	it('builds its configuration once, not for every request', () => {
+		expect(authConfig()).toBe(authConfig());
+	});
+
+	it('does no work for the open API routes: no session reader is set there', async () => {
+		for (const path of ['/api/v1/shelf', '/api/v1/shelf/max-span', '/api/v1/health']) {
+			const event = hookEvent(path, { method: 'POST' }) as { locals: Record<string, unknown> };
+			const res = await authHandle({
+				event: event as never,
+				resolve: (() => new Response('{}')) as Resolve
+			} as never);
+			expect(res.status).toBe(200);
+			expect(event.locals.auth).toBeUndefined();
+		}
+		// a signed-in route still gets one
+		const event = hookEvent('/api/v1/projects') as { locals: Record<string, unknown> };
+		await authHandle({
+			event: event as never,
+			resolve: (() => new Response('{}')) as Resolve
+		} as never);
+		expect(event.locals.auth).toBeTypeOf('function');
 	});
 });
 

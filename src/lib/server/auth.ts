@@ -7,7 +7,8 @@ import {
 } from '@auth/sveltekit';
 import Credentials from '@auth/sveltekit/providers/credentials';
 import Nodemailer from '@auth/sveltekit/providers/nodemailer';
-import { isRedirect, type RequestEvent } from '@sveltejs/kit';
+import { isRedirect, type Handle, type RequestEvent } from '@sveltejs/kit';
+import { AsyncLocalStorage } from 'node:async_hooks';
 import { dev } from '$app/environment';
 import { env } from '$env/dynamic/private';
 import { signInSchema } from '$lib/schemas/account';
@@ -17,7 +18,7 @@ import { endSession, newSessionId, sessionIsCurrent } from './accounts/sessions'
 import { passwordSignIn } from './accounts/sign-in';
 import { throttleMessage } from './accounts/throttle';
 import { findUserByEmail } from './accounts/users';
-import { getDb } from './db';
+import { getDb, type Db } from './db';
 import { accounts, sessions, users, verificationTokens } from './db/schema';
 import {
 	linkOrigin,
@@ -71,14 +72,34 @@ function rebase(url: string, event: RequestEvent) {
 	return u.toString();
 }
 
-// Built per request (SvelteKitAuth accepts a function of the event), so nothing opens the database at
-// build time, and the password check knows the client's address for throttling.
-async function authConfig(event: RequestEvent): Promise<SvelteKitAuthConfig> {
+// The request Auth.js is working for: the password check throttles by its client address, and the
+// mailed link is rebased on its origin. Set around every call into Auth.js (authHandle, the actions).
+const currentEvent = new AsyncLocalStorage<RequestEvent>();
+
+function requestEvent(): RequestEvent {
+	const event = currentEvent.getStore();
+	if (!event) throw new Error('Auth.js was called outside a request');
+	return event;
+}
+
+let built: { db: Db; config: SvelteKitAuthConfig } | undefined;
+
+/**
+ * Auth.js's configuration, built once on first use (so nothing opens the database at build time) and
+ * again only when the database itself is swapped (tests give each file its own).
+ */
+export function authConfig(): SvelteKitAuthConfig {
+	const db = getDb();
+	if (built?.db !== db) built = { db, config: buildAuthConfig(db) };
+	return built.config;
+}
+
+function buildAuthConfig(db: Db): SvelteKitAuthConfig {
 	return {
 		secret: authSecret(),
 		trustHost: true,
 		session: { strategy: 'jwt', maxAge: 30 * 24 * 60 * 60 },
-		adapter: DrizzleAdapter(getDb(), {
+		adapter: DrizzleAdapter(db, {
 			usersTable: users,
 			accountsTable: accounts,
 			sessionsTable: sessions,
@@ -99,7 +120,7 @@ async function authConfig(event: RequestEvent): Promise<SvelteKitAuthConfig> {
 				async authorize(credentials) {
 					const parsed = signInSchema.pick({ email: true, password: true }).safeParse(credentials);
 					if (!parsed.success) return null;
-					const result = await passwordSignIn(parsed.data, event.getClientAddress());
+					const result = await passwordSignIn(parsed.data, requestEvent().getClientAddress());
 					if (result.ok) return result.user;
 					if (result.reason === 'throttled') throw new SignInThrottled(result.retryAfterMinutes);
 					if (result.reason === 'unverified') throw new EmailUnconfirmed();
@@ -111,7 +132,7 @@ async function authConfig(event: RequestEvent): Promise<SvelteKitAuthConfig> {
 				from: mailFrom(),
 				maxAge: SIGN_IN_LINK_MAX_AGE_S,
 				async sendVerificationRequest({ identifier, url }) {
-					const link = rebase(url, event);
+					const link = rebase(url, requestEvent());
 					if (findUserByEmail(identifier)?.emailVerified) await sendSignInLink(identifier, link);
 					else await sendAddressConfirmation(identifier, link);
 				}
@@ -156,7 +177,21 @@ async function authConfig(event: RequestEvent): Promise<SvelteKitAuthConfig> {
 	};
 }
 
-export const { handle: authHandle, signIn, signOut } = SvelteKitAuth(authConfig);
+const kit = SvelteKitAuth(async () => authConfig());
+
+// Open API routes that read no stored data (the compute routes, materials, health, the API
+// document): no session to read, so Auth.js does no work for them.
+export const OPEN_API =
+	/^\/api\/v1\/(shelf(\/[\w-]+)?|joints|stability|cases\/check|walls\/(check|cutlist|sheets)|materials|health|openapi\.json)\/?$/;
+
+/** Auth.js: answers /auth/* and gives `locals.auth()`; skipped on the open API routes. */
+export const authHandle: Handle = ({ event, resolve }) => {
+	if (OPEN_API.test(event.url.pathname)) return resolve(event);
+	return currentEvent.run(event, () => kit.handle({ event, resolve }));
+};
+
+const signIn = (event: RequestEvent) => currentEvent.run(event, () => kit.signIn(event));
+const signOut = (event: RequestEvent) => currentEvent.run(event, () => kit.signOut(event));
 
 type AuthAction = typeof signIn;
 
