@@ -9,6 +9,9 @@ import { authCookies } from '$lib/server/hooks/auth-cookies';
 import { computeLimit } from '$lib/server/hooks/compute-limit';
 import { originCheck } from '$lib/server/hooks/origin-check';
 import { closeUnreadBody } from '$lib/server/hooks/unread-body';
+import { HSTS, SECURITY_HEADERS } from '$lib/server/hooks/security-headers';
+import { reportError } from '$lib/server/errors';
+import { registerFastPath } from '$lib/server/fast-path';
 import { sweepOrphanFiles } from '$lib/server/documents';
 // units beyond the trade's table (unit-table.ts) are read on the server with mathjs
 import '$lib/engine/units/quantity-full';
@@ -17,6 +20,8 @@ import '$lib/engine/units/quantity-full';
 export const init: ServerInit = () => {
 	if (building) return;
 	authSecret();
+	// the production server (server.js) answers the open compute routes with it, ahead of SvelteKit
+	registerFastPath();
 	// files left by a crash mid-upload or a deleted project; never holds up the start
 	sweepOrphanFiles().catch((e) => console.error('Sweeping orphan document files failed:', e));
 };
@@ -37,20 +42,11 @@ export const actorHandle: Handle = async ({ event, resolve }) => {
 	return resolve(event);
 };
 
-const SECURITY_HEADERS: Record<string, string> = {
-	'X-Content-Type-Options': 'nosniff',
-	'Referrer-Policy': 'strict-origin-when-cross-origin',
-	'X-Frame-Options': 'DENY',
-	'Permissions-Policy':
-		'camera=(), microphone=(), geolocation=(), payment=(), usb=(), interest-cohort=()',
-	'Cross-Origin-Opener-Policy': 'same-origin'
-};
-
 /** The usual security headers; the CSP itself comes from svelte.config.js. */
 export const securityHeaders: Handle = async ({ event, resolve }) => {
 	let response = await resolve(event);
 	const headers: Record<string, string> = { ...SECURITY_HEADERS };
-	if (!dev) headers['Strict-Transport-Security'] = 'max-age=63072000; includeSubDomains';
+	if (!dev) headers['Strict-Transport-Security'] = HSTS;
 	// what a signed-in person sees is theirs: no shared cache keeps it, no browser cache stores it
 	if (event.locals?.actor) headers['Cache-Control'] = 'private, no-store';
 	try {
@@ -64,7 +60,8 @@ export const securityHeaders: Handle = async ({ event, resolve }) => {
 };
 
 // Headers outermost, so Auth.js's own responses (it answers /auth/* itself) get them too.
-export const handle = sequence(
+/** Every request's hooks, outermost first (exported for the fast path's sameness test). */
+export const handles: Handle[] = [
 	closeUnreadBody,
 	securityHeaders,
 	originCheck,
@@ -73,18 +70,10 @@ export const handle = sequence(
 	authCookies,
 	authHandle,
 	actorHandle
-);
+];
+
+export const handle = sequence(...handles);
 
 /** Log unexpected errors with an id; the client sees only a plain message and that id. */
-export const handleError: HandleServerError = ({ error, event, status, message }) => {
-	const id = crypto.randomUUID();
-	const where = `[${id}] ${status} ${event.request.method} ${event.url.pathname}`;
-	// a refusal (4xx) is an everyday answer: one line, no stack; only server errors get the stack
-	if (status >= 500) console.error(where, error);
-	else if (status !== 404) console.warn(`${where}: ${message}`);
-	return {
-		message:
-			status === 404 ? 'Not found.' : status >= 500 ? 'Something went wrong on our side.' : message,
-		id
-	};
-};
+export const handleError: HandleServerError = ({ error, event, status, message }) =>
+	reportError({ error, status, message, method: event.request.method, path: event.url.pathname });

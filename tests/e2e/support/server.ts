@@ -20,5 +20,6 @@ const { seedDemo } = await import('../../../src/lib/server/demo/seed');
 const { startMailCatcher } = await import('../../../src/lib/server/dev/mail-catcher');
 await seedDemo();
 await startMailCatcher({ port: mailPort });
-// The built server, imported by a computed path so type checking does not follow it into build/.
-await import(pathToFileURL(join(process.cwd(), 'build', 'index.js')).href);
+// The production server (server.js: the fast path, then the build's handler), imported by a computed
+// path so type checking does not follow it into build/.
+await import(pathToFileURL(join(process.cwd(), 'server.js')).href);

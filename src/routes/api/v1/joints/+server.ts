@@ -1,18 +1,4 @@
-import type { RequestHandler } from './$types';
-import { json } from '@sveltejs/kit';
-import { api, problem, readJson } from '$lib/server/http';
-import { jointRequestSchema } from '$lib/schemas/joinery';
-import { JoineryInputError, planJointSI } from '$lib/engine/joinery';
+import { computeRoute } from '../shelf/compute';
 
-/** Plan one joint: open to anyone, nothing stored. */
-export const POST: RequestHandler = api(async ({ request }) => {
-	const body = await readJson(request, jointRequestSchema);
-	if (!body.ok) return body.response;
-	try {
-		return json(planJointSI(body.data));
-	} catch (e) {
-		if (e instanceof JoineryInputError)
-			return problem(422, 'Some fields need attention.', e.issues);
-		throw e;
-	}
-});
+/** POST /api/v1/joints: plan one joint. Open to anyone, nothing stored. */
+export const POST = computeRoute('/api/v1/joints');

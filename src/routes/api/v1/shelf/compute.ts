@@ -1,26 +1,20 @@
 import { json, type RequestHandler } from '@sveltejs/kit';
-import type { z } from 'zod';
-import { ShelfInputError } from '$lib/engine';
-import { problem, readJson } from '$lib/server/http';
+import { computeAnswer, computeEndpoint } from '$lib/server/compute-api';
+import { api, readJson } from '$lib/server/http';
 
 /**
- * A POST route that validates its body with a shared schema and returns what the engine computes.
- * Open to anyone: it reads no stored data. Problems the schema cannot see (an unknown material,
- * solid wood across the grain) come back as 422 with the field named.
+ * A POST route of an open compute endpoint (src/lib/server/compute-api.ts): validates its body with
+ * the shared schema and returns what the engine computes. Open to anyone: it reads no stored data.
+ * Problems the schema cannot see (an unknown material, solid wood across the grain) come back as 422
+ * with the field named. The production server answers the same requests on its fast path
+ * (src/lib/server/fast-path.ts) with the same code; this route answers everything else.
  */
-export function computeRoute<S extends z.ZodType, R>(
-	schema: S,
-	compute: (input: z.output<S>) => R
-): RequestHandler {
-	return async ({ request }) => {
-		const body = await readJson(request, schema);
+export function computeRoute(path: string): RequestHandler {
+	const endpoint = computeEndpoint(path);
+	return api(async ({ request }) => {
+		const body = await readJson(request, endpoint.schema);
 		if (!body.ok) return body.response;
-		try {
-			return json(compute(body.data));
-		} catch (e) {
-			if (e instanceof ShelfInputError)
-				return problem(422, 'Some fields need attention.', e.issues);
-			throw e;
-		}
-	};
+		const answer = computeAnswer(endpoint, body.data);
+		return json(answer.body, { status: answer.status });
+	});
 }

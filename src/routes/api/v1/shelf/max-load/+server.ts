@@ -1,6 +1,4 @@
-import { maxLoadInput } from '$lib/engine';
-import { maxLoadRequestSchema } from '$lib/schemas/shelf';
 import { computeRoute } from '../compute';
 
 /** POST /api/v1/shelf/max-load: the largest load of a given shape within the limit and strength. */
-export const POST = computeRoute(maxLoadRequestSchema, maxLoadInput);
+export const POST = computeRoute('/api/v1/shelf/max-load');

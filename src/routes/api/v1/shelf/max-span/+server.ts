@@ -1,6 +1,4 @@
-import { maxSpanInput } from '$lib/engine';
-import { maxSpanRequestSchema } from '$lib/schemas/shelf';
 import { computeRoute } from '../compute';
 
 /** POST /api/v1/shelf/max-span: the longest span that meets the limit. */
-export const POST = computeRoute(maxSpanRequestSchema, maxSpanInput);
+export const POST = computeRoute('/api/v1/shelf/max-span');

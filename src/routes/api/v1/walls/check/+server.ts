@@ -1,19 +1,4 @@
-import type { RequestHandler } from './$types';
-import { json } from '@sveltejs/kit';
-import { api, problem, readJson } from '$lib/server/http';
-import { toWallDesign, wallDesignSchema } from '$lib/schemas/wall';
-import { JoineryInputError } from '$lib/engine/joinery';
-import { checkWall } from '$lib/engine/wall';
+import { computeRoute } from '../../shelf/compute';
 
-/** Check a wall of cases: open to anyone, nothing stored. */
-export const POST: RequestHandler = api(async ({ request }) => {
-	const body = await readJson(request, wallDesignSchema);
-	if (!body.ok) return body.response;
-	try {
-		return json(checkWall(toWallDesign(body.data)));
-	} catch (e) {
-		if (e instanceof JoineryInputError)
-			return problem(422, 'Some fields need attention.', e.issues);
-		throw e;
-	}
-});
+/** POST /api/v1/walls/check: check a wall of cases. Open to anyone, nothing stored. */
+export const POST = computeRoute('/api/v1/walls/check');
