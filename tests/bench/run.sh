@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # npm run bench: the Node benches (vitest bench), then a fresh build, the gzipped JavaScript the
-# shelf check route loads, and the browser bench (span input to screen in Chromium).
+# shelf check route loads, the browser bench (span input to screen in Chromium), and the compute API
+# against a bare node:http server (tests/bench/api/api.ts).
 # It starts with the count of published figures still marked "from memory" or "unverified"
 # (tests/bench/unverified.ts). Benchmarks report; they never fail on a slow number.
 # One run at a time on a machine, shared with the e2e runner: the build folder is shared.
@@ -20,3 +21,4 @@ else
 	echo "route-size: tests/bench/route-size.ts not present yet, skipped"
 fi
 npx tsx tests/bench/browser/shelf-input.ts
+npx tsx tests/bench/api/api.ts

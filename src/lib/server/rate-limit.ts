@@ -14,13 +14,34 @@ export const COMPUTE_WINDOW_S = 60;
 
 let current: { db: Database.Database; limiter: RateLimiterSQLite } | undefined;
 
+/**
+ * The connection as the limiter sees it: the same database, but each statement it prepares is
+ * prepared once and kept (better-sqlite3 has no statement cache, and the limiter prepares its upsert
+ * on every call, which cost more than the upsert itself).
+ */
+function keepingStatements(db: Database.Database): Database.Database {
+	const kept = new Map<string, Database.Statement>();
+	const prepare = (sql: string) => {
+		let statement = kept.get(sql);
+		if (!statement) kept.set(sql, (statement = db.prepare(sql)));
+		return statement;
+	};
+	return new Proxy(db, {
+		get(target, name) {
+			if (name === 'prepare') return prepare;
+			const value = Reflect.get(target, name, target);
+			return typeof value === 'function' ? value.bind(target) : value;
+		}
+	});
+}
+
 function limiter() {
 	const db = getSqlite();
 	if (current?.db !== db)
 		current = {
 			db,
 			limiter: new RateLimiterSQLite({
-				storeClient: db,
+				storeClient: keepingStatements(db),
 				storeType: 'better-sqlite3',
 				tableName: 'rate_limit',
 				tableCreated: true, // by the migrations

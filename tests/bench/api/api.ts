@@ -145,7 +145,7 @@ async function main() {
 		await waitFor(`http://127.0.0.1:${BARE_PORT}/`, { method: 'POST', body: '{}' });
 
 		// warm both up (JIT, the limiter's table), then alternate: bare, app, bare, app …
-		await Promise.all([load(APP_PORT), load(BARE_PORT)].slice(0, 1));
+		await load(APP_PORT);
 		const runs: { bare: Run; app: Run; ratio: number }[] = [];
 		for (let i = 0; i < ROUNDS; i++) {
 			const b = await load(BARE_PORT);
