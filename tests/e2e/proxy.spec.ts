@@ -1,6 +1,8 @@
 // Behind a proxy: adapter-node reads the client's address from ADDRESS_HEADER (the rightmost
 // XFF_DEPTH entry of X-Forwarded-For), so one address's failed sign-ins refuse only that address.
-// A second built server, started here with those settings, on its own port and data folder.
+// A second built server (server.js, as `npm start` runs it), started here with those settings, on its
+// own port and data folder. The open compute routes answer on its fast path: the same answers as the
+// app's routes (a query sends a request to the app) and the same per-address limit.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -14,7 +16,7 @@ let dataDir: string;
 
 test.beforeAll(async () => {
 	dataDir = mkdtempSync(join(tmpdir(), 'spanwright-proxy-'));
-	server = spawn(process.execPath, ['build/index.js'], {
+	server = spawn(process.execPath, ['server.js'], {
 		cwd: process.cwd(), // the repository (npm run test:e2e runs from there)
 		env: {
 			...process.env,
@@ -59,5 +61,46 @@ test('failed sign-ins count per forwarded address; a forged left-hand entry chan
 	expect((await signIn('198.51.100.7, 203.0.113.5')).status()).toBe(429);
 	// another client behind the same proxy is not refused
 	expect((await signIn('198.51.100.7')).status()).toBe(400);
+	await api.dispose();
+});
+
+test('the compute fast path answers as the app does and counts per forwarded address', async () => {
+	const api = await request.newContext({ baseURL: ORIGIN });
+	const shelf = JSON.stringify({
+		span: '32"',
+		depth: '11 1/4"',
+		thickness: '3/4"',
+		material: 'red-oak',
+		loads: [{ kind: 'area', pressure: '40 psf' }]
+	});
+	const post = (path: string, address: string, data = shelf) =>
+		api.post(path, {
+			data: Buffer.from(data), // as written: a string would be encoded as JSON again
+			headers: { 'content-type': 'application/json', 'x-forwarded-for': address }
+		});
+	const same = async (data: string, status: number) => {
+		const fast = await post('/api/v1/shelf', '203.0.113.60', data);
+		const app = await post('/api/v1/shelf?via=app', '203.0.113.61', data);
+		expect(fast.status()).toBe(status);
+		expect(app.status()).toBe(status);
+		expect(await fast.text()).toBe(await app.text());
+		const headers = (r: typeof fast) =>
+			Object.fromEntries(Object.entries(r.headers()).filter(([k]) => k !== 'date'));
+		expect(headers(fast)).toEqual(headers(app));
+	};
+	await same(shelf, 200);
+	await same('{span', 400);
+	await same(JSON.stringify({ span: 'long' }), 422);
+	// one client's budget, then 429 with Retry-After on both ways in; another client goes on
+	const budget = 120; // COMPUTE_REQUESTS in src/lib/server/rate-limit.ts
+	for (let i = 0; i < budget; i++) await post('/api/v1/shelf', '203.0.113.62', '{');
+	const fast = await post('/api/v1/shelf', '203.0.113.62');
+	const app = await post('/api/v1/shelf?via=app', '203.0.113.62');
+	for (const r of [fast, app]) {
+		expect(r.status()).toBe(429);
+		expect(Number(r.headers()['retry-after'])).toBeGreaterThanOrEqual(1);
+		expect((await r.json()).error).toMatch(/Too many calculations/);
+	}
+	expect((await post('/api/v1/shelf', '198.51.100.62')).status()).toBe(200);
 	await api.dispose();
 });
