@@ -130,7 +130,7 @@ interface Answer {
 	text: string;
 }
 
-async function send(path: string, body: string | Buffer, init: Record<string, string>) {
+async function send(path: string, body: string, init: Record<string, string>) {
 	const res = await fetch(base + path, { method: 'POST', body, headers: init });
 	const headers: Record<string, string> = {};
 	res.headers.forEach((v, k) => {
@@ -142,7 +142,7 @@ async function send(path: string, body: string | Buffer, init: Record<string, st
 /** The same request through the fast path and through the app, from two fresh addresses. */
 async function both(
 	path: string,
-	body: string | Buffer,
+	body: string,
 	headers: Record<string, string> = { 'content-type': 'application/json' }
 ) {
 	const before = taken.length;
