@@ -5,7 +5,7 @@
  */
 import { DEMO_WALL } from '../engine/wall/demo';
 import type { WallDesignInput } from '../schemas/wall';
-import { withUnitMark } from '../components/quantity-input/reading';
+import { withLoadUnit, withUnitMark } from '../components/quantity-input/reading';
 import { formatLength, tryParseLength } from '../engine/units/length';
 import { lengthText, type UserLengthUnit } from '../workbench/lengths';
 
@@ -40,6 +40,63 @@ export const LENGTH_KEYS = new Set([
 /** Objects under these keys hold a material's figures or loads, not lengths. */
 const OPAQUE = new Set(['material', 'loads']);
 
+/** How a shelf, top, bottom or divider meets the case, in the trade's words. */
+export const JOINTS = [
+	['biscuit', 'biscuits'],
+	['pocket-screw', 'pocket screws'],
+	['screw', 'screws through the side'],
+	['dado', 'a dado']
+] as const;
+
+const LBF_N = 4.4482216152605; // lbf in newtons (exact, from the pound and standard gravity)
+const PSF_PA = 47.88025898033584; // lbf/ft² in pascals
+const exactNumber = (x: number) => String(Number(x.toPrecision(15)));
+
+/** A stored load (SI numbers) as text in the user's load units; texts stay as typed. */
+function loadText(load: Record<string, unknown>, unit: UserLengthUnit): Record<string, unknown> {
+	const metric = unit === 'mm';
+	const out = { ...load };
+	if (typeof out.pressure === 'number')
+		out.pressure = metric
+			? `${exactNumber(out.pressure / 1000)} kPa`
+			: `${exactNumber(out.pressure / PSF_PA)} lbf/ft^2`;
+	if (typeof out.intensity === 'number')
+		out.intensity = metric
+			? `${exactNumber(out.intensity)} N/m`
+			: `${exactNumber(out.intensity / (LBF_N / 0.3048))} lbf/ft`;
+	if (typeof out.force === 'number')
+		out.force = metric ? `${exactNumber(out.force)} N` : `${exactNumber(out.force / LBF_N)} lbf`;
+	return out;
+}
+
+/** A weight in newtons as text in the user's units. */
+function forceText(n: number, unit: UserLengthUnit): string {
+	return unit === 'mm' ? `${exactNumber(n)} N` : `${exactNumber(n / LBF_N)} lbf`;
+}
+
+/** The load a shelf's single field shows: its first spread load, as typed. */
+export function shelfLoadText(s: NonNullable<CaseDraft['shelves']>[number]): string {
+	const first = s.loads?.[0] as { kind?: string; pressure?: unknown } | undefined;
+	return first && first.kind === 'area' ? String(first.pressure ?? '') : '';
+}
+
+/** A face frame as the trade makes one: 3/4" poplar, 1 1/2" stiles and rails, pocket screws. */
+export function newFaceFrame(unit: UserLengthUnit) {
+	return {
+		material: 'yellow-poplar',
+		thickness: T(0.75, unit),
+		stileWidth: T(1.5, unit),
+		railWidth: T(1.5, unit),
+		joint: 'pocket-screw' as const,
+		attach: 'biscuit' as const
+	};
+}
+
+/** A 3/4" × 1 1/2" poplar nosing. */
+export function newNosing(unit: UserLengthUnit) {
+	return { material: 'yellow-poplar', height: T(1.5, unit), thickness: T(0.75, unit) };
+}
+
 function mapLengths(value: unknown, key: string, f: (x: unknown) => unknown): unknown {
 	if (OPAQUE.has(key)) return value;
 	if (Array.isArray(value))
@@ -71,6 +128,14 @@ export function fromDesign(design: unknown, unit: UserLengthUnit): WallDraft {
 		typeof v === 'number' ? exactText(v, unit) : v
 	) as WallDraft;
 	for (const c of draft.cases) {
+		for (const sh of c.shelves ?? [])
+			if (Array.isArray(sh.loads))
+				sh.loads = sh.loads.map((l) => loadText(l as Record<string, unknown>, unit)) as never;
+		for (const o of c.drawers ?? [])
+			if (typeof o.contentsWeight === 'number')
+				o.contentsWeight = forceText(o.contentsWeight, unit);
+		c.top ??= { joint: 'biscuit', loads: [] };
+		c.bottom ??= { joint: 'biscuit', loads: [] };
 		c.shelves ??= [];
 		c.dividers ??= [];
 		c.drawers ??= [];
@@ -105,15 +170,36 @@ export function newDoor(unit: UserLengthUnit) {
 		height: T(24, unit),
 		count: 1 as const,
 		hinge: 'left' as const,
-		front: { material: 'mdo', thickness: T(23 / 32, unit) }
+		front: {
+			material: 'mdo',
+			thickness: T(23 / 32, unit),
+			mount: 'overlay' as const,
+			overlay: T(0.375, unit),
+			gap: T(0.125, unit)
+		}
 	};
 }
 
 /** The schema's input: a bare number typed in a length field is in the user's unit. */
 export function toInput(draft: WallDraft, unit: UserLengthUnit): WallDesignInput {
-	return mapLengths(draft, '', (v) =>
+	const input = mapLengths(draft, '', (v) =>
 		typeof v === 'string' ? withUnitMark(v, unit) : v
 	) as WallDesignInput;
+	// a bare number in a load or a weight is in the user's load units, never SI
+	const bare = (v: unknown, kind: 'pressure' | 'lineLoad' | 'force') =>
+		typeof v === 'string' ? withLoadUnit(v, kind, unit) : v;
+	for (const c of input.cases) {
+		for (const sh of c.shelves ?? [])
+			sh.loads = sh.loads?.map((l) => {
+				const x = { ...l } as Record<string, unknown>;
+				if ('pressure' in x) x.pressure = bare(x.pressure, 'pressure');
+				if ('intensity' in x) x.intensity = bare(x.intensity, 'lineLoad');
+				if ('force' in x) x.force = bare(x.force, 'force');
+				return x as never;
+			});
+		for (const o of c.drawers ?? []) o.contentsWeight = bare(o.contentsWeight, 'force') as never;
+	}
+	return input;
 }
 
 /** The demo wall (two tall bookcases, two low units with two drawers each) in the user's unit. */

@@ -10,6 +10,7 @@ import {
 	wallShop
 } from '../../../src/lib/engine/wall';
 import type { WallCaseDesign, WallDesign, WallPart } from '../../../src/lib/engine/wall';
+import { findMaterial } from '../../../reference/materials';
 
 const IN = 0.0254;
 const inch = (m: number) => m / IN;
@@ -366,5 +367,100 @@ describe('tip-over with drawers, as in ASTM F2057-23 (the nearest published test
 		const k = checkWall(fixed).cases[1];
 		expect(k.margins.filter((m) => m.key.startsWith('stability')).every((m) => m.pass)).toBe(true);
 		expect(k.stability.restraint.requiredN).toBeGreaterThan(0);
+	});
+});
+
+describe('face-frame mid rails', () => {
+	const frame = {
+		material: 'yellow-poplar',
+		thickness: 0.75 * IN,
+		stileWidth: 1.5 * IN,
+		railWidth: 1.5 * IN,
+		joint: 'pocket-screw' as const,
+		attach: 'biscuit' as const
+	};
+	const low = { ...structuredClone(DEMO_WALL.cases[1]), faceFrame: frame };
+	const r = checkWall(wall([low]));
+	const rails = r.parts.filter((p) => p.role === 'face-frame rail');
+	it('a rail between the two drawers and one above the stack; none below it, where the bottom rail is', () => {
+		// drawers from 4 1/4" with 11" fronts: lines at 4 1/4" (in the bottom rail's place: the
+		// plinth is 3 1/2", so the frame starts there and its bottom rail reaches 5"), 15 1/4", 26 1/4"
+		const mid = rails.filter((p) => p.name.startsWith('mid rail'));
+		expect(mid.map((p) => p.name)).toEqual([
+			'mid rail (drawers 1, 1–2)',
+			'mid rail (drawers 1, above)'
+		]);
+		expect(inch(mid[0].lengthM)).toBeCloseTo(30 - 2 * 1.5, 9);
+		expect(inch(mid[0].widthM)).toBeCloseTo(1.5, 9);
+		expect(inch(mid[0].elevation!.z)).toBeCloseTo(15.25 - 0.75, 9);
+		expect(inch(mid[1].elevation!.z)).toBeCloseTo(26.25 - 0.75, 9);
+		expect(rails).toHaveLength(4);
+	});
+	it('each rail is joined at both ends: 8 rail-to-stile joints, and the cut list counts 4 rails', () => {
+		const j = r.cases[0].joints.find((x) => x.id === 'rail-to-stile')!;
+		expect(j.joints).toBe(8);
+		const list = cutList(r.parts, IN / 8);
+		const railGroups = list.groups.filter((g) => g.role === 'face-frame rail');
+		expect(railGroups.reduce((a, g) => a + g.count, 0)).toBe(4);
+	});
+});
+
+describe('a divider carries the shelves on both sides (checked as a column)', () => {
+	const books = [{ kind: 'area' as const, pressure: 40 * PSF }];
+	const shelf = (bay: number) => ({
+		height: 40 * IN,
+		kind: 'adjustable' as const,
+		joint: 'biscuit' as const,
+		ends: 'simple' as const,
+		loads: books,
+		bay
+	});
+	const withDivider = (divider: Partial<WallCaseDesign['dividers'][number]>) =>
+		oneCase({
+			shelves: [shelf(0), shelf(1)],
+			dividers: [{ at: 15 * IN, joint: 'dado', ...divider }]
+		});
+
+	it('its load is the end reactions of the shelf on each side; Euler’s load with long-term stiffness over 3 is allowed', () => {
+		const r = checkWall(wall([withDivider({})]));
+		const k = r.cases[0];
+		const d = k.dividers[0];
+		const [left, right] = k.shelves.filter((s) => s.path[0] === 'shelves');
+		const reaction = (s: typeof left, end: 'first' | 'last') =>
+			end === 'first' ? s.analysis.reactions[0].force : s.analysis.reactions.at(-1)!.force;
+		expect(d.loadN).toBeCloseTo(reaction(left, 'last') + reaction(right, 'first'), 9);
+		// a simply supported shelf: each end carries half of its load (books and own weight)
+		const total = (s: typeof left) => s.analysis.reactions.reduce((a, x) => a + x.force, 0);
+		expect(reaction(left, 'last')).toBeCloseTo(total(left) / 2, 6);
+		// by hand: softwood plywood along its grain (kept along the divider's height), k_def of
+		// service class 1, a 3/4" panel as deep as the inside (17" less the 1/4" back), from the
+		// bottom's top to the top's underside
+		const m = findMaterial('softwood-plywood')!;
+		const E = m.modulusAlongPa / (1 + m.creep[0]);
+		const I = (16.75 * IN * (0.75 * IN) ** 3) / 12;
+		const H = (80 - 0.75 - (4 + 0.75)) * IN;
+		expect(d.bucklingN).toBeCloseTo((Math.PI ** 2 * E * I) / H ** 2, 6);
+		expect(d.allowedN).toBeCloseTo(d.bucklingN / 3, 9);
+		expect(d.pass).toBe(true);
+		expect(r.margins.some((x) => x.key === 'cases.0.dividers.0:column' && x.pass)).toBe(true);
+		// the cut list keeps its grain along its height
+		expect(r.parts.find((p) => p.role === 'divider')!.grainReason).toBe('strength');
+	});
+
+	it('a thin divider of a floppy panel fails, and the suggested thickness clears it', () => {
+		const floppy = { name: 'floppy board', modulus: 0.3e9, rupture: 5e6, density: 500 };
+		const r = checkWall(wall([withDivider({ thickness: 0.125 * IN, material: floppy })]));
+		const d = r.cases[0].dividers[0];
+		expect(d.pass).toBe(false);
+		expect(r.margins.find((x) => x.key === 'cases.0.dividers.0:column')!.pass).toBe(false);
+		const fix = r.suggestions.find((s) => s.fixes.includes('cases.0.dividers.0:column'))!;
+		const t = fix.changes[0].value as number;
+		expect(fix.changes[0].path).toEqual(['cases', 0, 'dividers', 0, 'thickness']);
+		const fixed = checkWall(wall([withDivider({ thickness: t, material: floppy })]));
+		expect(fixed.cases[0].dividers[0].pass).toBe(true);
+		// the cube root of the shortfall, rounded up to a sixteenth
+		const need = 0.125 * IN * Math.cbrt(d.loadN / d.allowedN);
+		expect(t).toBeGreaterThanOrEqual(need);
+		expect(t).toBeLessThan(need + IN / 16);
 	});
 });

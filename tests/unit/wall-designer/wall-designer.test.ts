@@ -77,3 +77,97 @@ describe('the wall screen’s form', () => {
 		expect(fromDesign(stored, 'frac16').cases[0].width).toBe('30"');
 	});
 });
+
+describe('every field the engine takes, as the builder types it', () => {
+	it('a bare number in a shelf load or a drawer’s contents is in the user’s load units', () => {
+		const d = defaultWall('frac16');
+		d.cases[0].shelves![0].loads = [{ kind: 'area', pressure: '50' }];
+		d.cases[1].drawers![0].contentsWeight = '20';
+		const input = toInput(d, 'frac16');
+		expect(input.cases[0].shelves![0].loads![0]).toEqual({ kind: 'area', pressure: '50 lbf/ft²' });
+		expect(input.cases[1].drawers![0].contentsWeight).toBe('20 lbf');
+		const metric = toInput(d, 'mm');
+		expect(metric.cases[0].shelves![0].loads![0]).toEqual({ kind: 'area', pressure: '50 kPa' });
+		expect(metric.cases[1].drawers![0].contentsWeight).toBe('20 N');
+	});
+	it('hinge side, overlay or inset, slides, materials, face frame, sheet sizes and grain reach the engine and come back as typed', () => {
+		const d = defaultWall('frac16');
+		const low = d.cases[1];
+		low.doors = [
+			{
+				bottom: '4 1/4"',
+				height: '20"',
+				count: 1,
+				hinge: 'right',
+				front: { material: 'mdo', thickness: '3/4"', mount: 'inset', overlay: '3/8"', gap: '3/32"' }
+			}
+		];
+		low.drawers![0].bottom = '24 1/4"';
+		low.drawers![0].heights = ['5"'];
+		low.drawers![0].slide.sideClearance = '0.5';
+		low.drawers![0].slide.length = '12';
+		low.drawers![0].box.material = 'softwood-plywood';
+		low.drawers![0].front.material = 'birch-multiply';
+		low.back = { material: 'mdf', thickness: '1/4', fitted: 'applied' };
+		low.top = { material: 'birch-multiply', thickness: '3/4', joint: 'dado', loads: [] };
+		low.faceFrame = {
+			material: 'yellow-poplar',
+			thickness: '3/4',
+			stileWidth: '1 1/2',
+			railWidth: '1 1/2',
+			joint: 'pocket-screw',
+			attach: 'biscuit'
+		};
+		d.sharedFaceFrame = false;
+		d.sheets!.stocks = [{ material: 'mdo', length: '120', width: '60', keepGrain: true }];
+		const run = runWall(d, 'frac16');
+		expect(run.ok).toBe(true);
+		if (!run.ok) return;
+		const c = run.design.cases[1];
+		expect(c.doors[0].hinge).toBe('right');
+		expect(c.doors[0].front.mount).toBe('inset');
+		expect(c.drawers[0].slide.sideClearance).toBeCloseTo(0.5 * IN, 12);
+		expect(c.drawers[0].slide.length).toBeCloseTo(12 * IN, 12);
+		expect(c.back).toEqual({ material: 'mdf', thickness: 0.25 * IN, fitted: 'applied' });
+		expect(c.top.joint).toBe('dado');
+		expect(c.faceFrame!.stileWidth).toBeCloseTo(1.5 * IN, 12);
+		const parts = run.shop.check.parts.filter((p) => p.caseIndex === 1);
+		expect(parts.find((p) => p.role === 'back')!.material).toBe('mdf');
+		expect(parts.find((p) => p.role === 'drawer front')!.material).toBe('birch-multiply');
+		expect(parts.find((p) => p.role === 'drawer side')!.material).toBe('softwood-plywood');
+		expect(parts.filter((p) => p.role === 'face-frame rail').length).toBeGreaterThan(2);
+		const mdo = run.sheets.perMaterial.find((m) => m.materialName.startsWith('MDO'))!;
+		expect(inchOf(mdo.lengthM)).toBeCloseTo(120, 9);
+		expect(inchOf(mdo.widthM)).toBeCloseTo(60, 9);
+		expect(
+			run.sheets.sheets
+				.filter((s) => s.materialName.startsWith('MDO'))
+				.flatMap((s) => s.placements)
+				.every((p) => !p.turned)
+		).toBe(true);
+		// saved as SI and read back: the typed texts, and the loads in the user's units
+		const saved = computeAnalysis('wall', toInput(d, 'frac16'));
+		if (!saved.ok) throw new Error('not saved');
+		const back = fromDesign(saved.input, 'frac16');
+		expect(back.cases[1].doors![0].hinge).toBe('right');
+		expect(back.cases[1].drawers![0].slide.length).toBe('12"');
+		expect(back.cases[0].shelves![0].loads![0]).toEqual({ kind: 'area', pressure: '40 lbf/ft^2' });
+		expect(back.sheets!.stocks![0]).toEqual({
+			material: 'mdo',
+			length: '120"',
+			width: '60"',
+			keepGrain: true
+		});
+	});
+	it('an unreadable slide clearance is named at its own field, and the text stays as typed', () => {
+		const d = defaultWall('frac16');
+		d.cases[1].drawers![0].slide.sideClearance = 'half an inch';
+		const run = runWall(d, 'frac16');
+		expect(run.ok).toBe(false);
+		if (run.ok) return;
+		expect(run.issues.map((i) => i.field)).toContain('cases.1.drawers.0.slide.sideClearance');
+		expect(d.cases[1].drawers![0].slide.sideClearance).toBe('half an inch');
+	});
+});
+
+const inchOf = (m: number) => m / IN;

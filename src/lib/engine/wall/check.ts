@@ -17,6 +17,7 @@ import type { ShelfInput } from '../shelf/types';
 import type { ShelfResult } from '../shelf/types';
 import { ENGINE_VERSION } from '../version';
 import { asCaseDesign, shelfSpans, wallCaseGeometry, type WallCaseGeometry } from './geometry';
+import { checkDividers, dividerMargins, dividerSuggestions } from './dividers';
 import { caseParts, partSink } from './parts';
 import { runParts } from './run-parts';
 import type {
@@ -193,14 +194,22 @@ function checkOne(
 		if (!plan) plans.set(key, (plan = planJointSI(req)));
 		return plan;
 	};
+	const mine = all.filter((p) => p.caseIndex === ci);
+	// rails between openings join the stiles like the top and bottom rails: two joints each
+	const rails = mine.filter((p) => p.role === 'face-frame rail').length;
 	const joints: CaseJoint[] = requests.map(({ req, ...rest }) => ({
 		...rest,
+		...(rest.id === 'rail-to-stile' && rails > 2
+			? { joints: 2 * rails, where: `${rest.where} (${rails} rails, mid rails included)` }
+			: {}),
 		plan: planOnce(req)
 	}));
 
-	const mine = all.filter((p) => p.caseIndex === ci);
 	const stability = checkStabilitySI(stabilityRequest(c, g, shelves, mine));
-	const margins = caseMargins(shelves, joints, stability);
+	const dividers = checkDividers(c, g, xCase, shelves);
+	const margins = [...caseMargins(shelves, joints, stability), ...dividerMargins(dividers)].sort(
+		(a, b) => Number(a.pass) - Number(b.pass) || rank(a) - rank(b)
+	);
 	const failing = margins.filter((m) => !m.pass).map((m) => m.key);
 
 	const suggestions: CaseSuggestion[] = [];
@@ -217,6 +226,9 @@ function checkOne(
 	joints.forEach((j, i) => {
 		if (!j.plan.pass) suggestions.push(...jointSuggestions(j, requests[i].req, d, g, runs));
 	});
+	suggestions.push(
+		...dividerSuggestions(dividers, (i) => g.dividers.find((d) => d.index === i)!.thicknessM)
+	);
 	const tipping = failing.filter((k) => k.startsWith('stability:'));
 	if (tipping.length) suggestions.push(anchoringSuggestion(tipping));
 
@@ -252,6 +264,7 @@ function checkOne(
 		margins,
 		suggestions,
 		warnings: [...new Set(warnings)],
+		dividers,
 		touches: touchesOf(ci, n),
 		bays: g.bays,
 		drawers: fronts.map((p) => ({

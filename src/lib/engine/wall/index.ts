@@ -52,6 +52,11 @@ const VENEERED = new Set([
 	'birch-multiply'
 ]);
 
+/** Whether a material's parts keep their grain along the sheet when the user has not said. */
+export function keepsGrainByDefault(material: string): boolean {
+	return VENEERED.has(material);
+}
+
 export function wallSheets(
 	w: WallDesign,
 	req: SheetRequest = {

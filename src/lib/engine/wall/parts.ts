@@ -26,7 +26,9 @@ const STRENGTH_ROLES = new Set<PartRole>([
 	'bottom',
 	'fixed shelf',
 	'adjustable shelf',
-	'nosing'
+	'nosing',
+	// a divider carries the shelves on both sides in compression: grain along its height
+	'divider'
 ]);
 
 export interface PartSink {

@@ -1,7 +1,7 @@
 /** Face frames and bases: per case, or shared across the run. */
 import type { WallCaseGeometry } from './geometry';
 import type { PartSink } from './parts';
-import type { WallDesign } from './types';
+import type { WallCaseDesign, WallDesign } from './types';
 
 /** A board longer than this is made in pieces joined over a support (a choice of this tool: an
  * 8' sheet less trim). */
@@ -105,6 +105,7 @@ export function runParts(
 					fromFrontM: f.thickness / 2
 				}
 			});
+		midRails(c, ci, g, x, z, sink);
 	});
 
 	// bases
@@ -182,4 +183,70 @@ export function runParts(
 		if (count > 1) notes.push(`The run's toe kick is ${count} pieces, joined over a plinth end.`);
 	}
 	return notes;
+}
+
+/**
+ * Rails between openings: where one drawer front meets the next, and at the top and bottom of a
+ * stack of drawers or a door opening that do not meet the frame's top or bottom rail. Each is
+ * centred on the line between the openings and spans the opening's width (the frame opening in a
+ * case of one bay, else the bay's width); the frame's joint (pocket screws or biscuits) joins it
+ * to the stiles at both ends.
+ */
+function midRails(
+	c: WallCaseDesign,
+	ci: number,
+	g: WallCaseGeometry,
+	xCase: number,
+	zFrame: number,
+	sink: PartSink
+) {
+	const f = c.faceFrame!;
+	const seen: { z: number; bay: number }[] = [];
+	const lowest = zFrame + f.railWidth;
+	const highest = c.height - f.railWidth;
+	const near = 1e-4;
+	const lines: { z: number; bay: number; what: string }[] = [];
+	c.drawers.forEach((o, oi) => {
+		let z = o.bottom;
+		const name = o.name ?? `drawers ${oi + 1}`;
+		lines.push({ z, bay: o.bay ?? 0, what: `${name}, below` });
+		o.heights.forEach((h, k) => {
+			z += h;
+			lines.push({
+				z,
+				bay: o.bay ?? 0,
+				what: k === o.heights.length - 1 ? `${name}, above` : `${name}, ${k + 1}–${k + 2}`
+			});
+		});
+	});
+	c.doors.forEach((o, oi) => {
+		const name = o.name ?? `doors ${oi + 1}`;
+		lines.push({ z: o.bottom, bay: o.bay ?? 0, what: `${name}, below` });
+		lines.push({ z: o.bottom + o.height, bay: o.bay ?? 0, what: `${name}, above` });
+	});
+	for (const line of lines.sort((a, b) => a.z - b.z)) {
+		// the frame's own top and bottom rails already close the frame there
+		if (line.z - f.railWidth / 2 < lowest - near || line.z + f.railWidth / 2 > highest + near)
+			continue;
+		if (seen.some((s) => s.bay === line.bay && Math.abs(s.z - line.z) < f.railWidth)) continue;
+		seen.push(line);
+		const single = g.bays.length === 1;
+		const b = g.bays[line.bay] ?? g.bays[0];
+		const x0 = single ? f.stileWidth : b.xM;
+		const len = single ? c.width - 2 * f.stileWidth : b.widthM;
+		sink.add({
+			caseIndex: ci,
+			role: 'face-frame rail',
+			name: `mid rail (${line.what})`,
+			path: ['cases', ci, 'faceFrame'],
+			lengthM: len,
+			widthM: f.railWidth,
+			thicknessM: f.thickness,
+			material: f.material,
+			banding: { long: 0, short: 0 },
+			machining: [],
+			elevation: { x: xCase + x0, z: line.z - f.railWidth / 2, w: len, h: f.railWidth },
+			centre: { heightM: line.z, fromFrontM: f.thickness / 2 }
+		});
+	}
 }

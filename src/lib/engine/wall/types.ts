@@ -5,6 +5,7 @@
  */
 import type { CaseDesign, CaseJoint, CaseMargin, CaseShelf, CaseSuggestion } from '../case/types';
 import type { StabilityResult } from '../stability/types';
+import type { DividerCheck } from './dividers';
 
 export type Material = CaseDesign['sides']['material'];
 export type CaseJointKind = CaseDesign['shelves'][number]['joint'];
@@ -200,6 +201,8 @@ export interface WallCaseCheck {
 	margins: CaseMargin[];
 	suggestions: CaseSuggestion[];
 	warnings: string[];
+	/** each divider as a column under the shelves on both sides of it */
+	dividers: DividerCheck[];
 	/** the sides that touch a neighbour */
 	touches: { left: boolean; right: boolean };
 	/** bays: x of each bay's left inside face (relative to the case) and its clear width */
