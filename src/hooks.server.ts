@@ -33,11 +33,11 @@ export const actorHandle: Handle = async ({ event, resolve }) => {
 	const authorization = event.request.headers.get('authorization');
 	if (authorization && event.url.pathname.startsWith('/api/')) {
 		// a bad or revoked token is anonymous, never a fallback to the cookie
-		event.locals.actor = actorFromBearer(authorization);
+		event.locals.actor = await actorFromBearer(authorization);
 	} else {
 		const session = await event.locals.auth();
 		const userId = session?.user?.id;
-		if (userId) event.locals.actor = actorForUserId(userId, 'session');
+		if (userId) event.locals.actor = await actorForUserId(userId, 'session');
 	}
 	return resolve(event);
 };

@@ -8,7 +8,7 @@ import {
 import { sha256 } from '../../src/lib/server/accounts/secrets';
 import { createUser } from '../../src/lib/server/accounts/users';
 import type { Actor } from '../../src/lib/server/access';
-import { schema } from '../../src/lib/server/db';
+import { schema, oneRow } from '../../src/lib/server/db';
 import { actorHandle, securityHeaders } from '../../src/hooks.server';
 import { GET as getMe } from '../../src/routes/api/v1/me/+server';
 import { GET as listTokens, POST as postToken } from '../../src/routes/api/v1/tokens/+server';
@@ -72,7 +72,7 @@ describe('GET /api/v1/me', () => {
 
 	it('is 200 with a token: the user, their personal workshop and their unit', async () => {
 		const ivy = await person('Ivy');
-		const token = createApiToken(ivy, { name: 'laptop script' });
+		const token = await createApiToken(ivy, { name: 'laptop script' });
 		const res = await call(getMe, { path: '/api/v1/me', bearer: token.secret });
 		expect(res.status).toBe(200);
 		const me = await res.json();
@@ -106,18 +106,18 @@ describe('GET /api/v1/me', () => {
 describe('API tokens', () => {
 	it('keeps only the sha-256 and a prefix; the secret resolves to the actor and records its use', async () => {
 		const lu = await person('Lu');
-		const token = createApiToken(lu, { name: 'cut list export' });
+		const token = await createApiToken(lu, { name: 'cut list export' });
 		expect(token.secret).toMatch(/^spw_[A-Za-z0-9_-]{32}$/);
-		const row = db()
+		const row = await db()
 			.db.select()
 			.from(schema.apiTokens)
 			.where(eq(schema.apiTokens.id, token.id))
-			.get()!;
+			.then(oneRow);
 		expect(row.tokenHash).toBe(sha256(token.secret));
 		expect(row.tokenHash).not.toContain(token.secret);
 		expect(token.secret.startsWith(row.prefix)).toBe(true);
 		expect(row.lastUsedAt).toBeNull();
-		expect(actorFromBearer(`Bearer ${token.secret}`)).toEqual({
+		expect(await actorFromBearer(`Bearer ${token.secret}`)).toEqual({
 			id: lu.id,
 			email: lu.email,
 			name: 'Lu',
@@ -125,11 +125,11 @@ describe('API tokens', () => {
 			// the actor carries the user's length unit (the default, 1/16")
 			lengthUnit: 'frac16'
 		});
-		const used = db()
+		const used = await db()
 			.db.select()
 			.from(schema.apiTokens)
 			.where(eq(schema.apiTokens.id, token.id))
-			.get()!;
+			.then(oneRow);
 		expect(used.lastUsedAt).toBeInstanceOf(Date);
 	});
 
@@ -159,8 +159,8 @@ describe('API tokens', () => {
 		});
 		expect(revoked.status).toBe(204);
 		expect((await call(getMe, { path: '/api/v1/me', bearer: secret })).status).toBe(401);
-		expect(actorFromBearer(`Bearer ${secret}`)).toBeNull();
-		expect(listApiTokens(mo)).toEqual([]);
+		expect(await actorFromBearer(`Bearer ${secret}`)).toBeNull();
+		expect(await listApiTokens(mo)).toEqual([]);
 		const twice = await call(deleteToken, {
 			path: `/api/v1/tokens/${id}`,
 			method: 'DELETE',
@@ -172,7 +172,7 @@ describe('API tokens', () => {
 
 	it('cannot be created with a token (403), nor with a bad body (422)', async () => {
 		const ned = await person('Ned');
-		const token = createApiToken(ned, { name: 'first' });
+		const token = await createApiToken(ned, { name: 'first' });
 		const res = await call(postToken, {
 			path: '/api/v1/tokens',
 			method: 'POST',
@@ -193,7 +193,7 @@ describe('API tokens', () => {
 	it("cannot revoke someone else's token", async () => {
 		const owner = await person('Ola');
 		const other = await person('Pim');
-		const token = createApiToken(owner, { name: 'mine' });
+		const token = await createApiToken(owner, { name: 'mine' });
 		const res = await call(deleteToken, {
 			path: `/api/v1/tokens/${token.id}`,
 			method: 'DELETE',
@@ -201,7 +201,7 @@ describe('API tokens', () => {
 			params: { id: token.id }
 		});
 		expect(res.status).toBe(404);
-		expect(actorFromBearer(`Bearer ${token.secret}`)?.id).toBe(owner.id);
+		expect((await actorFromBearer(`Bearer ${token.secret}`))?.id).toBe(owner.id);
 	});
 });
 

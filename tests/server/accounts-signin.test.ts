@@ -2,7 +2,7 @@ import { eq } from 'drizzle-orm';
 import { describe, expect, it } from 'vitest';
 import { createUser } from '../../src/lib/server/accounts/users';
 import { authHandle } from '../../src/lib/server/auth';
-import { schema } from '../../src/lib/server/db';
+import { schema, oneRow } from '../../src/lib/server/db';
 import { listCaughtMail, waitForMailTo } from '../../src/lib/server/dev/caught-mail';
 import { actions as signInActions } from '../../src/routes/(public)/signin/+page.server';
 import { actions as signUpActions } from '../../src/routes/(public)/signup/+page.server';
@@ -20,11 +20,10 @@ const sessionCookie = (jar: ReturnType<typeof cookieJar>) =>
 
 async function confirmedUser(email: string, password: string) {
 	const user = await createUser({ name: 'Flo', email, password });
-	db()
+	await db()
 		.db.update(schema.users)
 		.set({ emailVerified: new Date() })
-		.where(eq(schema.users.id, user.id))
-		.run();
+		.where(eq(schema.users.id, user.id));
 	return user;
 }
 
@@ -150,11 +149,11 @@ describe('sign-up, then the mailed link', () => {
 		expect(response.headers.getSetCookie().some((c) => c.includes('authjs.session-token='))).toBe(
 			true
 		);
-		const row = db()
+		const row = await db()
 			.db.select()
 			.from(schema.users)
 			.where(eq(schema.users.email, 'hana@shop.example'))
-			.get()!;
+			.then(oneRow);
 		expect(row.emailVerified).toBeInstanceOf(Date);
 		// and the same link does not work twice
 		const again = await authHandle({
@@ -211,11 +210,10 @@ describe('sign-up, then the mailed link', () => {
 		});
 		expect(confirmation.links.some((l) => l.includes('/auth/callback/'))).toBe(true);
 		// the known account is as it was: no second user, the password unchanged
-		const rows = db()
+		const rows = await db()
 			.db.select()
 			.from(schema.users)
-			.where(eq(schema.users.email, 'flo@shop.example'))
-			.all();
+			.where(eq(schema.users.email, 'flo@shop.example'));
 		expect(rows).toHaveLength(1);
 	});
 });

@@ -18,7 +18,7 @@ import {
 } from '../../src/lib/server/accounts/users';
 import { latestMailTo, waitForMailTo } from '../../src/lib/server/dev/caught-mail';
 import { linksIn } from '../../src/lib/server/dev/mail-catcher';
-import { schema } from '../../src/lib/server/db';
+import { schema, oneRow } from '../../src/lib/server/db';
 import { listWorkshops } from '../../src/lib/server/workshops';
 import { useTempDb } from './support/db';
 import { useMailCatcher } from './support/mail';
@@ -34,15 +34,19 @@ describe('sign-up', () => {
 			password: 'long enough words'
 		});
 		expect(user.email).toBe('ada@shop.example');
-		const actor = actorForUserId(user.id)!;
-		const workshops = listWorkshops(actor);
+		const actor = (await actorForUserId(user.id))!;
+		const workshops = await listWorkshops(actor);
 		expect(workshops).toHaveLength(1);
 		expect(workshops[0]).toMatchObject({
 			personal: true,
 			role: 'owner',
 			name: 'Ada Joiner’s workshop'
 		});
-		const row = db().db.select().from(schema.users).where(eq(schema.users.id, user.id)).get()!;
+		const row = await db()
+			.db.select()
+			.from(schema.users)
+			.where(eq(schema.users.id, user.id))
+			.then(oneRow);
 		expect(row.currentWorkshopId).toBe(workshops[0].id);
 	});
 
@@ -52,7 +56,11 @@ describe('sign-up', () => {
 			email: 'ben@shop.example',
 			password: 'plain words here'
 		});
-		const row = db().db.select().from(schema.users).where(eq(schema.users.id, user.id)).get()!;
+		const row = await db()
+			.db.select()
+			.from(schema.users)
+			.where(eq(schema.users.id, user.id))
+			.then(oneRow);
 		expect(row.passwordHash).not.toContain('plain words here');
 		expect(row.passwordHash).toMatch(/^\$argon2id\$/);
 	});
@@ -81,7 +89,7 @@ describe('failed sign-in throttle', () => {
 		for (let i = 1; i <= REFUSE_AFTER_FAILURES; i++) {
 			const r = await passwordSignIn(wrong, '203.0.113.7');
 			expect(r).toEqual({ ok: false, reason: 'wrong' });
-			if (i === 3) expect(signInGate(wrong.email, '203.0.113.7').state).toBe('slow');
+			if (i === 3) expect((await signInGate(wrong.email, '203.0.113.7')).state).toBe('slow');
 		}
 		// refused from the address the failures came from, even with the right password …
 		const refused = await passwordSignIn(
@@ -91,10 +99,10 @@ describe('failed sign-in throttle', () => {
 		expect(refused).toEqual({ ok: false, reason: 'throttled', retryAfterMinutes: 15 });
 		// … but not from another address: those failures cannot lock the owner out (issue 11.4);
 		// the account is still slowed down wherever the next attempt comes from
-		expect(signInGate(wrong.email, '198.51.100.2').state).toBe('slow');
+		expect((await signInGate(wrong.email, '198.51.100.2')).state).toBe('slow');
 		// 15 minutes after the first failure the oldest one has left the window
 		expect(
-			signInGate(wrong.email, '203.0.113.7', Date.now() + 15 * 60 * 1000 + 1000).state
+			(await signInGate(wrong.email, '203.0.113.7', Date.now() + 15 * 60 * 1000 + 1000)).state
 		).not.toBe('refused');
 	});
 
@@ -104,11 +112,10 @@ describe('failed sign-in throttle', () => {
 			email: 'di@shop.example',
 			password: 'correct horse staple'
 		});
-		db()
+		await db()
 			.db.update(schema.users)
 			.set({ emailVerified: new Date() })
-			.where(eq(schema.users.id, di.id))
-			.run();
+			.where(eq(schema.users.id, di.id));
 		await passwordSignIn({ email: 'di@shop.example', password: 'nope nope' }, '192.0.2.1');
 		expect(
 			(
@@ -118,7 +125,7 @@ describe('failed sign-in throttle', () => {
 				)
 			).ok
 		).toBe(true);
-		expect(signInGate('di@shop.example', '192.0.2.9').state).toBe('open');
+		expect((await signInGate('di@shop.example', '192.0.2.9')).state).toBe('open');
 	});
 });
 
@@ -130,7 +137,7 @@ describe('an unconfirmed address', () => {
 			'192.0.2.5'
 		);
 		expect(r).toEqual({ ok: false, reason: 'unverified' });
-		expect(signInGate('fen@shop.example', '192.0.2.5').state).toBe('open');
+		expect((await signInGate('fen@shop.example', '192.0.2.5')).state).toBe('open');
 	});
 });
 
@@ -143,14 +150,14 @@ describe('password reset', () => {
 		const link = message.links.find((l) => l.startsWith('http://localhost:5173/reset/'))!;
 		expect(link).toBeTruthy();
 		const token = link.split('/reset/')[1];
-		expect(resetTokenIsLive(token)).toBe(true);
-		const ben = findUserByEmail('ben@shop.example')!;
+		expect(await resetTokenIsLive(token)).toBe(true);
+		const ben = (await findUserByEmail('ben@shop.example'))!;
 		const issuedBefore = Math.floor(Date.now() / 1000) - 60; // a session from a minute ago
-		expect(sessionIsCurrent(ben.id, issuedBefore)).toBe(true);
+		expect(await sessionIsCurrent(ben.id, issuedBefore)).toBe(true);
 		expect(await resetPassword(token, 'a fresh passphrase')).toBe(true);
 		// the reset ends every earlier session, a copied cookie included; new ones are honoured
-		expect(sessionIsCurrent(ben.id, issuedBefore)).toBe(false);
-		expect(sessionIsCurrent(ben.id, Math.floor(Date.now() / 1000) + 1)).toBe(true);
+		expect(await sessionIsCurrent(ben.id, issuedBefore)).toBe(false);
+		expect(await sessionIsCurrent(ben.id, Math.floor(Date.now() / 1000) + 1)).toBe(true);
 		expect(await verifyPassword('ben@shop.example', 'a fresh passphrase')).not.toBeNull();
 		expect(await verifyPassword('ben@shop.example', 'plain words here')).toBeNull();
 		// the same link a second time does nothing
@@ -164,7 +171,7 @@ describe('password reset', () => {
 		const token = (
 			await waitForMailTo('ada@shop.example', { dir: mail.dir, after: sent })
 		).links[0].split('/reset/')[1];
-		const rows = db().db.select().from(schema.passwordResets).all();
+		const rows = await db().db.select().from(schema.passwordResets);
 		expect(rows.some((r) => r.tokenHash === token)).toBe(false);
 		expect(rows.every((r) => /^[0-9a-f]{64}$/.test(r.tokenHash))).toBe(true);
 	});
@@ -176,7 +183,7 @@ describe('password reset', () => {
 			await waitForMailTo('di@shop.example', { dir: mail.dir, after: sent, subject: /password/ })
 		).links[0].split('/reset/')[1];
 		const later = Date.now() + PASSWORD_RESET_TTL_MS + 1000;
-		expect(resetTokenIsLive(token, later)).toBe(false);
+		expect(await resetTokenIsLive(token, later)).toBe(false);
 		expect(await resetPassword(token, 'too late passphrase', later)).toBe(false);
 		expect(await verifyPassword('di@shop.example', 'correct horse staple')).not.toBeNull();
 	});
@@ -203,10 +210,10 @@ describe('length unit preference', () => {
 			email: 'eve@shop.example',
 			password: 'metric person here'
 		});
-		const actor = actorForUserId(user.id)!;
-		expect(getProfile(actor).lengthUnit).toBe('frac16');
-		setLengthUnit(actor, 'mm');
-		expect(getProfile(actor).lengthUnit).toBe('mm');
+		const actor = (await actorForUserId(user.id))!;
+		expect((await getProfile(actor)).lengthUnit).toBe('frac16');
+		await setLengthUnit(actor, 'mm');
+		expect((await getProfile(actor)).lengthUnit).toBe('mm');
 	});
 });
 
@@ -217,16 +224,15 @@ describe('one address cannot lock anyone out (throttle per account and per addre
 			email: 'ivo@shop.example',
 			password: 'correct horse staple'
 		});
-		db()
+		await db()
 			.db.update(schema.users)
 			.set({ emailVerified: new Date() })
-			.where(eq(schema.users.id, owner.id))
-			.run();
+			.where(eq(schema.users.id, owner.id));
 		for (let i = 0; i < REFUSE_AFTER_FAILURES + 2; i++)
 			await passwordSignIn({ email: 'ivo@shop.example', password: `guess ${i}` }, '203.0.113.66');
-		expect(signInGate('ivo@shop.example', '203.0.113.66').state).toBe('refused');
+		expect((await signInGate('ivo@shop.example', '203.0.113.66')).state).toBe('refused');
 		// the owner, from home, is slowed (the account is under attack) but let in
-		const gate = signInGate('ivo@shop.example', '192.0.2.44');
+		const gate = await signInGate('ivo@shop.example', '192.0.2.44');
 		expect(gate.state).toBe('slow');
 		const r = await passwordSignIn(
 			{ email: 'ivo@shop.example', password: 'correct horse staple' },
@@ -238,7 +244,7 @@ describe('one address cannot lock anyone out (throttle per account and per addre
 	it('an address that fails for many accounts is refused for all of them, and only that address', async () => {
 		for (let i = 0; i < 20; i++)
 			await passwordSignIn({ email: `nobody${i}@shop.example`, password: 'x' }, '198.51.100.99');
-		expect(signInGate('someone@shop.example', '198.51.100.99').state).toBe('refused');
-		expect(signInGate('someone@shop.example', '198.51.100.100').state).toBe('open');
+		expect((await signInGate('someone@shop.example', '198.51.100.99')).state).toBe('refused');
+		expect((await signInGate('someone@shop.example', '198.51.100.100')).state).toBe('open');
 	}, 30_000);
 });

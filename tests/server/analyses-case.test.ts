@@ -41,9 +41,9 @@ const joint = {
 	demand: { shear: '40 lbf' }
 };
 
-function setup() {
-	const cast = makeWorkshopWithCast();
-	const project = createProject(cast.owner, cast.workshopId, {
+async function setup() {
+	const cast = await makeWorkshopWithCast();
+	const project = await createProject(cast.owner, cast.workshopId, {
 		name: 'Nook',
 		client: '',
 		siteNotes: ''
@@ -52,9 +52,9 @@ function setup() {
 }
 
 describe('case and joint analyses', () => {
-	it('saves a case design with the whole-case check, and its stored input validates again', () => {
-		const { cast, projectId } = setup();
-		const saved = createAnalysis(cast.editor, projectId, {
+	it('saves a case design with the whole-case check, and its stored input validates again', async () => {
+		const { cast, projectId } = await setup();
+		const saved = await createAnalysis(cast.editor, projectId, {
 			kind: 'case',
 			name: 'Bay 1',
 			input: bookcase
@@ -65,13 +65,13 @@ describe('case and joint analyses', () => {
 		expect(saved.pass).toBe(expected.pass);
 		expect(saved.summary).toMatch(/^(All \d+ checks pass|\d+ of \d+ checks fail)/);
 		// duplicating re-validates the stored (SI) input and recomputes the same answer
-		const copy = duplicateAnalysis(cast.editor, saved.id);
+		const copy = await duplicateAnalysis(cast.editor, saved.id);
 		expect((copy.result as CaseResult).margins).toEqual(result.margins);
 	});
 
-	it('saves a joint plan from the joinery engine', () => {
-		const { cast, projectId } = setup();
-		const saved = createAnalysis(cast.editor, projectId, {
+	it('saves a joint plan from the joinery engine', async () => {
+		const { cast, projectId } = await setup();
+		const saved = await createAnalysis(cast.editor, projectId, {
 			kind: 'joint',
 			name: 'Fixed shelf',
 			input: joint
@@ -80,14 +80,14 @@ describe('case and joint analyses', () => {
 		expect((saved.result as JointPlan).count).toBe(plan.count);
 		expect(saved.pass).toBe(plan.pass);
 		expect(saved.summary).toContain(`${plan.count} pocket screw`);
-		expect(duplicateAnalysis(cast.editor, saved.id).result).toEqual(saved.result);
-		expect(() =>
+		expect((await duplicateAnalysis(cast.editor, saved.id)).result).toEqual(saved.result);
+		await expect(
 			createAnalysis(cast.editor, projectId, {
 				kind: 'joint',
 				name: 'Bad',
 				input: { ...joint, length: 'ten' }
 			})
-		).toThrow(
+		).rejects.toThrow(
 			expect.objectContaining({
 				status: 422,
 				issues: [expect.objectContaining({ path: ['input', 'length'] })]

@@ -10,9 +10,9 @@ import type { ComparisonResult } from '../../src/lib/kinds/comparison';
 
 useTempDb();
 
-function setup() {
-	const cast = makeWorkshopWithCast();
-	const project = createProject(cast.owner, cast.workshopId, {
+async function setup() {
+	const cast = await makeWorkshopWithCast();
+	const project = await createProject(cast.owner, cast.workshopId, {
 		name: 'Reading nook',
 		client: '',
 		siteNotes: ''
@@ -31,17 +31,17 @@ const comparisonInput = {
 
 describe('the analyses of a project', () => {
 	it('lists with search, kind and verdict filters, sort and pages', async () => {
-		const { cast, projectId } = setup();
-		saveShelf(cast.editor, projectId, 'Left bay shelf');
-		saveShelf(cast.editor, projectId, 'Right bay shelf', failingShelf);
-		saveShelf(cast.editor, projectId, 'Window seat', failingShelf);
-		createAnalysis(cast.editor, projectId, {
+		const { cast, projectId } = await setup();
+		await saveShelf(cast.editor, projectId, 'Left bay shelf');
+		await saveShelf(cast.editor, projectId, 'Right bay shelf', failingShelf);
+		await saveShelf(cast.editor, projectId, 'Window seat', failingShelf);
+		await createAnalysis(cast.editor, projectId, {
 			kind: 'comparison',
 			name: 'Board choice',
 			input: comparisonInput
 		});
 		const base = { q: '', sort: 'name', dir: 'asc', page: 1, perPage: 3 } as const;
-		const first = listAnalyses(cast.viewer, projectId, base);
+		const first = await listAnalyses(cast.viewer, projectId, base);
 		expect(first.total).toBe(4);
 		expect(first.items.map((a) => a.name)).toEqual([
 			'Board choice',
@@ -50,18 +50,24 @@ describe('the analyses of a project', () => {
 		]);
 		expect(first.items[1].updatedByName).toBe(cast.editor.name);
 		expect(
-			listAnalyses(cast.viewer, projectId, { ...base, page: 2 }).items.map((a) => a.name)
+			(await listAnalyses(cast.viewer, projectId, { ...base, page: 2 })).items.map((a) => a.name)
 		).toEqual(['Window seat']);
-		const failing = listAnalyses(cast.viewer, projectId, { ...base, pass: 'fail', dir: 'desc' });
+		const failing = await listAnalyses(cast.viewer, projectId, {
+			...base,
+			pass: 'fail',
+			dir: 'desc'
+		});
 		expect(failing.items.map((a) => a.name)).toEqual(['Window seat', 'Right bay shelf']);
-		const comparisons = listAnalyses(cast.viewer, projectId, { ...base, kind: 'comparison' });
+		const comparisons = await listAnalyses(cast.viewer, projectId, { ...base, kind: 'comparison' });
 		expect(comparisons.items.map((a) => a.name)).toEqual(['Board choice']);
-		const found = listAnalyses(cast.viewer, projectId, { ...base, q: 'BAY' });
+		const found = await listAnalyses(cast.viewer, projectId, { ...base, q: 'BAY' });
 		expect(found.total).toBe(2);
 		// a typed wildcard is a literal character: '_' (any one character to LIKE) matches nothing here,
 		// and '%' matches only the summaries that say '… % to spare'
-		expect(listAnalyses(cast.viewer, projectId, { ...base, q: '_' }).total).toBe(0);
-		expect(listAnalyses(cast.viewer, projectId, { ...base, q: '% to spare' }).total).toBe(2);
+		expect((await listAnalyses(cast.viewer, projectId, { ...base, q: '_' })).total).toBe(0);
+		expect((await listAnalyses(cast.viewer, projectId, { ...base, q: '% to spare' })).total).toBe(
+			2
+		);
 		// through the API, from the query string, with the same answer
 		const res = await listApi.GET(
 			event({
@@ -80,9 +86,9 @@ describe('the analyses of a project', () => {
 		expect(bad.status).toBe(422);
 	});
 
-	it('saves a comparison with each candidate computed by the shelf engine', () => {
-		const { cast, projectId } = setup();
-		const saved = createAnalysis(cast.editor, projectId, {
+	it('saves a comparison with each candidate computed by the shelf engine', async () => {
+		const { cast, projectId } = await setup();
+		const saved = await createAnalysis(cast.editor, projectId, {
 			kind: 'comparison',
 			name: 'Board choice',
 			input: comparisonInput
@@ -102,9 +108,9 @@ describe('the analyses of a project', () => {
 		);
 	});
 
-	it('reports a bad candidate at its own path', () => {
-		const { cast, projectId } = setup();
-		expect(() =>
+	it('reports a bad candidate at its own path', async () => {
+		const { cast, projectId } = await setup();
+		await expect(
 			createAnalysis(cast.editor, projectId, {
 				kind: 'comparison',
 				name: 'Bad',
@@ -116,7 +122,7 @@ describe('the analyses of a project', () => {
 					]
 				}
 			})
-		).toThrow(
+		).rejects.toThrow(
 			expect.objectContaining({
 				status: 422,
 				issues: [expect.objectContaining({ path: ['input', 'candidates', 1, 'material'] })]

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { useTempDb } from './support/db';
+import { oneRow } from '../../src/lib/server/db';
 import { event, makeWorkshopWithCast } from './support/actors';
 import { failingShelf, HAND_SAG_M, handShelf, saveShelf } from './support/analyses';
 import * as listApi from '../../src/routes/api/v1/projects/[id]/analyses/+server';
@@ -14,9 +15,9 @@ import { getAnalysis, updateAnalysis } from '../../src/lib/server/analyses';
 
 useTempDb();
 
-function setup() {
-	const cast = makeWorkshopWithCast();
-	const project = createProject(cast.owner, cast.workshopId, {
+async function setup() {
+	const cast = await makeWorkshopWithCast();
+	const project = await createProject(cast.owner, cast.workshopId, {
 		name: 'Library wall',
 		client: '',
 		siteNotes: ''
@@ -24,11 +25,12 @@ function setup() {
 	return { cast, projectId: project.id };
 }
 
-const stored = (id: string) => getDb().select().from(analyses).where(eq(analyses.id, id)).get()!;
+const stored = async (id: string) =>
+	await getDb().select().from(analyses).where(eq(analyses.id, id)).then(oneRow);
 
 describe('saving an analysis', () => {
 	it('computes the result on the server and ignores a result sent by the client', async () => {
-		const { cast, projectId } = setup();
+		const { cast, projectId } = await setup();
 		const res = await listApi.POST(
 			event({
 				actor: cast.editor,
@@ -46,7 +48,7 @@ describe('saving an analysis', () => {
 		expect(res.status).toBe(201);
 		expect(res.headers.get('etag')).toBe('"v1"');
 		const body = await res.json();
-		const row = stored(body.id);
+		const row = await stored(body.id);
 		const result = row.result as ShelfResult;
 		// the hand-worked sag (support/analyses.ts), and exactly what the engine gives
 		expect(result.sag.instant).toBeCloseTo(HAND_SAG_M, 7);
@@ -58,23 +60,23 @@ describe('saving an analysis', () => {
 		expect(body.summary).toBe('Sags 1/16" under a brief load; within L/144 with 82% to spare.');
 	});
 
-	it('says a failing shelf fails, in the reader’s own unit', () => {
-		const { cast, projectId } = setup();
-		const saved = saveShelf(cast.editor, projectId, 'Overloaded', failingShelf);
+	it('says a failing shelf fails, in the reader’s own unit', async () => {
+		const { cast, projectId } = await setup();
+		const saved = await saveShelf(cast.editor, projectId, 'Overloaded', failingShelf);
 		expect(saved.pass).toBe(false);
 		// 700 N at mid-span: 7 × 1.25 = 8.75 mm (0.344", nearest 1/16" is 3/8") against
 		// 6.94 mm (0.273", nearest 1/4") allowed: (6.94 − 8.75) / 6.94 = 26% over
-		expect(stored(saved.id).summary).toBe(
+		expect((await stored(saved.id)).summary).toBe(
 			'Sags 3/8" under a brief load; over L/144 by 26% (1/4" allowed).'
 		);
-		getDb().update(users).set({ lengthUnit: 'mm' }).where(eq(users.id, cast.viewer.id)).run();
-		expect(getAnalysis(cast.viewer, saved.id).analysis.summary).toMatch(
+		await getDb().update(users).set({ lengthUnit: 'mm' }).where(eq(users.id, cast.viewer.id));
+		expect((await getAnalysis(cast.viewer, saved.id)).analysis.summary).toMatch(
 			/^Sags 8\.[78] mm under a brief load; over L\/144 by 26% \(6\.9 mm allowed\)\.$/
 		);
 	});
 
 	it('answers a bad input with a 422 naming the field inside the input, never a 500', async () => {
-		const { cast, projectId } = setup();
+		const { cast, projectId } = await setup();
 		const res = await listApi.POST(
 			event({
 				actor: cast.editor,
@@ -101,8 +103,8 @@ describe('saving an analysis', () => {
 
 describe('optimistic concurrency', () => {
 	it('refuses a stale version with 409 and leaves the stored analysis as it was', async () => {
-		const { cast, projectId } = setup();
-		const saved = saveShelf(cast.editor, projectId);
+		const { cast, projectId } = await setup();
+		const saved = await saveShelf(cast.editor, projectId);
 		const get = await oneApi.GET(event({ actor: cast.viewer, params: { id: saved.id } }));
 		expect(get.headers.get('etag')).toBe('"v1"');
 		// the owner saves first, from version 1
@@ -116,7 +118,7 @@ describe('optimistic concurrency', () => {
 		);
 		expect(first.status).toBe(200);
 		expect(first.headers.get('etag')).toBe('"v2"');
-		const before = stored(saved.id);
+		const before = await stored(saved.id);
 		// the editor still holds version 1
 		const req = event({
 			actor: cast.editor,
@@ -129,34 +131,34 @@ describe('optimistic concurrency', () => {
 		expect(stale.status).toBe(409);
 		const problemBody = await stale.json();
 		expect(problemBody.error).toMatch(/Nothing was overwritten/);
-		expect(stored(saved.id)).toEqual(before);
+		expect(await stored(saved.id)).toEqual(before);
 		expect(before.version).toBe(2);
 		expect(before.pass).toBe(false);
 	});
 
 	it('needs a version: without If-Match or version a write is refused (428)', async () => {
-		const { cast, projectId } = setup();
-		const saved = saveShelf(cast.editor, projectId);
+		const { cast, projectId } = await setup();
+		const saved = await saveShelf(cast.editor, projectId);
 		const res = await oneApi.PATCH(
 			event({ actor: cast.editor, method: 'PATCH', params: { id: saved.id }, body: { name: 'x' } })
 		);
 		expect(res.status).toBe(428);
-		expect(stored(saved.id).name).toBe('Hand-worked shelf');
+		expect((await stored(saved.id)).name).toBe('Hand-worked shelf');
 	});
 
-	it('the data module refuses a stale version too', () => {
-		const { cast, projectId } = setup();
-		const saved = saveShelf(cast.editor, projectId);
-		updateAnalysis(cast.editor, saved.id, { name: 'Second', version: 1 });
-		expect(() => updateAnalysis(cast.owner, saved.id, { name: 'Third', version: 1 })).toThrow(
-			/Nothing was overwritten/
-		);
-		expect(stored(saved.id).name).toBe('Second');
+	it('the data module refuses a stale version too', async () => {
+		const { cast, projectId } = await setup();
+		const saved = await saveShelf(cast.editor, projectId);
+		await updateAnalysis(cast.editor, saved.id, { name: 'Second', version: 1 });
+		await expect(
+			updateAnalysis(cast.owner, saved.id, { name: 'Third', version: 1 })
+		).rejects.toThrow(/Nothing was overwritten/);
+		expect((await stored(saved.id)).name).toBe('Second');
 	});
 
 	it('PUT replaces name and input and recomputes', async () => {
-		const { cast, projectId } = setup();
-		const saved = saveShelf(cast.editor, projectId);
+		const { cast, projectId } = await setup();
+		const saved = await saveShelf(cast.editor, projectId);
 		const res = await oneApi.PUT(
 			event({
 				actor: cast.editor,
@@ -166,7 +168,7 @@ describe('optimistic concurrency', () => {
 			})
 		);
 		expect(res.status).toBe(200);
-		const row = stored(saved.id);
+		const row = await stored(saved.id);
 		expect((row.result as ShelfResult).sag.instant).toBeCloseTo(7 * HAND_SAG_M, 7);
 		expect(row.name).toBe('Heavier');
 	});

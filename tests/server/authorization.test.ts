@@ -15,8 +15,8 @@ describe('authorization of every stored-data API route', () => {
 		for (const who of whos)
 			it(`${row.route} as ${who} → ${row.expect[who]}`, async () => {
 				// a fresh workshop and project per case, so a delete in one case cannot colour another
-				const cast = makeWorkshopWithCast();
-				const project = createProject(cast.owner, cast.workshopId, {
+				const cast = await makeWorkshopWithCast();
+				const project = await createProject(cast.owner, cast.workshopId, {
 					name: 'Bookcase',
 					client: '',
 					siteNotes: ''

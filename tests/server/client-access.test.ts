@@ -4,6 +4,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { eq } from 'drizzle-orm';
 import { useTempDb } from './support/db';
+import { oneRow } from '../../src/lib/server/db';
 import { useMailCatcher } from './support/mail';
 import { ensurePoppler, pdfText } from './support/pdf';
 import { grantProject, makeWorkshopWithCast } from './support/actors';
@@ -28,94 +29,109 @@ useTempDb();
 const mail = useMailCatcher();
 beforeAll(() => ensurePoppler(), 120_000);
 
-const status = (fn: () => unknown) => {
+const status = async (fn: () => Promise<unknown>) => {
 	try {
-		fn();
+		await fn();
 		return 200;
 	} catch (e) {
 		return (e as { status: number }).status;
 	}
 };
 
-function setting() {
-	const cast = makeWorkshopWithCast();
-	const project = createProject(cast.owner, cast.workshopId, {
+async function setting() {
+	const cast = await makeWorkshopWithCast();
+	const project = await createProject(cast.owner, cast.workshopId, {
 		name: 'Library wall',
 		client: 'Ada Client',
 		siteNotes: 'Plaster walls'
 	});
-	const other = createProject(cast.owner, cast.workshopId, {
+	const other = await createProject(cast.owner, cast.workshopId, {
 		name: 'Pantry',
 		client: 'Bo Other',
 		siteNotes: ''
 	});
-	grantProject(cast.otherClient, other.id);
+	await grantProject(cast.otherClient, other.id);
 	return { cast, project, other };
 }
 
 describe('project invitations', () => {
-	it('lets an editor invite a client, who accepts and then reads that project alone', () => {
-		const { cast, project, other } = setting();
-		expect(status(() => inviteToProject(cast.viewer, project.id, cast.client.email))).toBe(403);
-		const { token } = inviteToProject(cast.editor, project.id, cast.client.email);
+	it('lets an editor invite a client, who accepts and then reads that project alone', async () => {
+		const { cast, project, other } = await setting();
+		expect(
+			await status(async () => await inviteToProject(cast.viewer, project.id, cast.client.email))
+		).toBe(403);
+		const { token } = await inviteToProject(cast.editor, project.id, cast.client.email);
 		expect(token).toMatch(/^[A-Za-z0-9_-]{43}$/);
-		expect(status(() => acceptProjectInvitation(cast.otherClient, token))).toBe(403);
-		acceptProjectInvitation(cast.client, token);
-		expect(status(() => acceptProjectInvitation(cast.client, token))).toBe(410);
-		expect(getAnalysis(cast.client, saveShelf(cast.owner, project.id).id).role).toBe('client');
-		expect(status(() => getAnalysis(cast.client, saveShelf(cast.owner, other.id).id))).toBe(404);
-		expect(listSharedProjects(cast.client).map((p) => p.name)).toEqual(['Library wall']);
-		expect(listProjectAccess(cast.editor, project.id).people.map((p) => p.email)).toEqual([
+		expect(await status(async () => await acceptProjectInvitation(cast.otherClient, token))).toBe(
+			403
+		);
+		await acceptProjectInvitation(cast.client, token);
+		expect(await status(async () => await acceptProjectInvitation(cast.client, token))).toBe(410);
+		expect(
+			(await getAnalysis(cast.client, (await saveShelf(cast.owner, project.id)).id)).role
+		).toBe('client');
+		expect(
+			await status(
+				async () => await getAnalysis(cast.client, (await saveShelf(cast.owner, other.id)).id)
+			)
+		).toBe(404);
+		expect((await listSharedProjects(cast.client)).map((p) => p.name)).toEqual(['Library wall']);
+		expect((await listProjectAccess(cast.editor, project.id)).people.map((p) => p.email)).toEqual([
 			cast.client.email
 		]);
 		// only an owner takes access away
-		expect(status(() => revokeProjectAccess(cast.editor, project.id, cast.client.id))).toBe(403);
-		revokeProjectAccess(cast.owner, project.id, cast.client.id);
-		expect(listSharedProjects(cast.client)).toEqual([]);
+		expect(
+			await status(async () => await revokeProjectAccess(cast.editor, project.id, cast.client.id))
+		).toBe(403);
+		await revokeProjectAccess(cast.owner, project.id, cast.client.id);
+		expect(await listSharedProjects(cast.client)).toEqual([]);
 	});
 });
 
 describe('share links', () => {
-	it('opens the record without an account, stores only a hash, and closes for good', () => {
-		const { cast, project } = setting();
-		saveShelf(cast.owner, project.id);
+	it('opens the record without an account, stores only a hash, and closes for good', async () => {
+		const { cast, project } = await setting();
+		await saveShelf(cast.owner, project.id);
 		for (const who of ['viewer', 'client', 'outsider'] as const) {
-			if (who === 'client') grantProject(cast.client, project.id);
-			expect(status(() => createShareLink(cast[who], project.id, { days: 7 }))).toBe(
-				who === 'outsider' ? 404 : 403
-			);
+			if (who === 'client') await grantProject(cast.client, project.id);
+			expect(
+				await status(async () => await createShareLink(cast[who], project.id, { days: 7 }))
+			).toBe(who === 'outsider' ? 404 : 403);
 		}
-		const { link, token } = createShareLink(cast.editor, project.id, { days: 7 });
-		const stored = getDb().select().from(shareLinks).where(eq(shareLinks.id, link.id)).get()!;
+		const { link, token } = await createShareLink(cast.editor, project.id, { days: 7 });
+		const stored = await getDb()
+			.select()
+			.from(shareLinks)
+			.where(eq(shareLinks.id, link.id))
+			.then(oneRow);
 		expect(stored.tokenHash).toMatch(/^[0-9a-f]{64}$/);
 		expect(JSON.stringify(stored)).not.toContain(token);
-		const record = sharedRecord(token);
+		const record = await sharedRecord(token);
 		expect(record.project.name).toBe('Library wall');
 		expect(record.items).toHaveLength(1);
-		expect(listShareLinks(cast.editor, project.id).map((l) => l.id)).toEqual([link.id]);
-		revokeShareLink(cast.editor, project.id, link.id);
-		expect(status(() => sharedRecord(token))).toBe(404);
-		expect(listShareLinks(cast.editor, project.id)).toEqual([]);
+		expect((await listShareLinks(cast.editor, project.id)).map((l) => l.id)).toEqual([link.id]);
+		await revokeShareLink(cast.editor, project.id, link.id);
+		expect(await status(async () => await sharedRecord(token))).toBe(404);
+		expect(await listShareLinks(cast.editor, project.id)).toEqual([]);
 	});
 
-	it('answers an expired, unknown or malformed token with the same 404', () => {
-		const { cast, project } = setting();
-		const { link, token } = createShareLink(cast.editor, project.id, { days: 1 });
-		getDb()
+	it('answers an expired, unknown or malformed token with the same 404', async () => {
+		const { cast, project } = await setting();
+		const { link, token } = await createShareLink(cast.editor, project.id, { days: 1 });
+		await getDb()
 			.update(shareLinks)
 			.set({ expiresAt: new Date(Date.now() - 1000) })
-			.where(eq(shareLinks.id, link.id))
-			.run();
-		expect(status(() => sharedRecord(token))).toBe(404);
-		expect(status(() => sharedRecord('x'.repeat(43)))).toBe(404);
-		expect(status(() => sharedRecord('../../etc'))).toBe(404);
+			.where(eq(shareLinks.id, link.id));
+		expect(await status(async () => await sharedRecord(token))).toBe(404);
+		expect(await status(async () => await sharedRecord('x'.repeat(43)))).toBe(404);
+		expect(await status(async () => await sharedRecord('../../etc'))).toBe(404);
 	});
 });
 
 describe('sending the record', () => {
 	it('mails the PDF with a share link to an address without access, and the project shows it', async () => {
-		const { cast, project } = setting();
-		const shelf = saveShelf(cast.owner, project.id);
+		const { cast, project } = await setting();
+		const shelf = await saveShelf(cast.owner, project.id);
 		const to = 'ada.client@example.test';
 		const link = await sendRecord(
 			cast.editor,
@@ -133,15 +149,15 @@ describe('sending the record', () => {
 		expect(text).toContain('Library wall');
 		expect(text).toContain(shelf.name);
 		expect(text).toContain('This shelf sags about');
-		const sends = listRecordSends(cast.owner, project.id);
+		const sends = await listRecordSends(cast.owner, project.id);
 		expect(sends.map((s) => s.to)).toEqual([to]);
-		expect(sharedRecord(link!.split('/').pop()!).items[0].name).toBe(shelf.name);
+		expect((await sharedRecord(link!.split('/').pop()!)).items[0].name).toBe(shelf.name);
 	});
 
 	it('links a client who has access to the record page, and a failed send leaves no trace', async () => {
-		const { cast, project } = setting();
-		const shelf = saveShelf(cast.owner, project.id);
-		grantProject(cast.client, project.id);
+		const { cast, project } = await setting();
+		const shelf = await saveShelf(cast.owner, project.id);
+		await grantProject(cast.client, project.id);
 		const link = await sendRecord(
 			cast.editor,
 			project.id,
@@ -153,7 +169,7 @@ describe('sending the record', () => {
 			sendRecord(cast.client, project.id, { to: 'x@example.test', message: '' }, '')
 		).rejects.toMatchObject({ status: 403 });
 
-		const before = listShareLinks(cast.editor, project.id).length;
+		const before = (await listShareLinks(cast.editor, project.id)).length;
 		const saved = process.env.SMTP_URL;
 		process.env.SMTP_URL = 'smtp://127.0.0.1:9'; // nothing listens there
 		try {
@@ -167,12 +183,11 @@ describe('sending the record', () => {
 		} finally {
 			process.env.SMTP_URL = saved;
 		}
-		expect(listShareLinks(cast.editor, project.id)).toHaveLength(before);
-		const rows = getDb()
+		expect(await listShareLinks(cast.editor, project.id)).toHaveLength(before);
+		const rows = await getDb()
 			.select()
 			.from(recordSends)
-			.where(eq(recordSends.projectId, project.id))
-			.all();
+			.where(eq(recordSends.projectId, project.id));
 		expect(rows.map((r) => r.to)).toEqual([cast.client.email]);
 	});
 });

@@ -43,7 +43,7 @@ type Who =
 	| 'owner'
 	| 'outsider'
 	| 'shareHolder';
-type Cast = ReturnType<typeof makeWorkshopWithCast>;
+type Cast = Awaited<ReturnType<typeof makeWorkshopWithCast>>;
 interface Row {
 	route: string;
 	call: (actor: Actor | null, cast: Cast, projectId: string) => Promise<Response> | Response;
@@ -223,7 +223,7 @@ const read = {
 	shareHolder: 401
 };
 const write = { ...read, client: 403, viewer: 403 };
-const analysisOf = (c: Cast, projectId: string) => saveShelf(c.owner, projectId).id;
+const analysisOf = async (c: Cast, projectId: string) => (await saveShelf(c.owner, projectId)).id;
 
 table.push(
 	{
@@ -246,17 +246,18 @@ table.push(
 	},
 	{
 		route: 'GET /analyses/{id}',
-		call: (a, c, p) => analysisApi.GET(event({ actor: a, params: { id: analysisOf(c, p) } })),
+		call: async (a, c, p) =>
+			analysisApi.GET(event({ actor: a, params: { id: await analysisOf(c, p) } })),
 		expect: read
 	},
 	{
 		route: 'PATCH /analyses/{id}',
-		call: (a, c, p) =>
+		call: async (a, c, p) =>
 			analysisApi.PATCH(
 				event({
 					actor: a,
 					method: 'PATCH',
-					params: { id: analysisOf(c, p) },
+					params: { id: await analysisOf(c, p) },
 					body: { version: 1, name: 'Renamed' }
 				})
 			),
@@ -264,12 +265,12 @@ table.push(
 	},
 	{
 		route: 'PUT /analyses/{id}',
-		call: (a, c, p) =>
+		call: async (a, c, p) =>
 			analysisApi.PUT(
 				event({
 					actor: a,
 					method: 'PUT',
-					params: { id: analysisOf(c, p) },
+					params: { id: await analysisOf(c, p) },
 					body: { version: 1, name: 'Replaced', input: handShelf }
 				})
 			),
@@ -277,35 +278,38 @@ table.push(
 	},
 	{
 		route: 'DELETE /analyses/{id}',
-		call: (a, c, p) =>
-			analysisApi.DELETE(event({ actor: a, method: 'DELETE', params: { id: analysisOf(c, p) } })),
+		call: async (a, c, p) =>
+			analysisApi.DELETE(
+				event({ actor: a, method: 'DELETE', params: { id: await analysisOf(c, p) } })
+			),
 		expect: write
 	},
 	{
 		route: 'POST /analyses/{id}/undelete',
-		call: (a, c, p) => {
-			const id = analysisOf(c, p);
-			deleteAnalysis(c.owner, id);
+		call: async (a, c, p) => {
+			const id = await analysisOf(c, p);
+			await deleteAnalysis(c.owner, id);
 			return undeleteApi.POST(event({ actor: a, method: 'POST', params: { id } }));
 		},
 		expect: write
 	},
 	{
 		route: 'GET /analyses/{id}/revisions',
-		call: (a, c, p) => revisionsApi.GET(event({ actor: a, params: { id: analysisOf(c, p) } })),
+		call: async (a, c, p) =>
+			revisionsApi.GET(event({ actor: a, params: { id: await analysisOf(c, p) } })),
 		expect: read
 	},
 	{
 		route: 'GET /analyses/{id}/revisions/{version}',
-		call: (a, c, p) =>
-			revisionApi.GET(event({ actor: a, params: { id: analysisOf(c, p), version: '1' } })),
+		call: async (a, c, p) =>
+			revisionApi.GET(event({ actor: a, params: { id: await analysisOf(c, p), version: '1' } })),
 		expect: read
 	},
 	{
 		route: 'POST /analyses/{id}/revisions/{version}',
-		call: (a, c, p) => {
-			const id = analysisOf(c, p);
-			updateAnalysis(c.owner, id, { name: 'Second', version: 1 });
+		call: async (a, c, p) => {
+			const id = await analysisOf(c, p);
+			await updateAnalysis(c.owner, id, { name: 'Second', version: 1 });
 			return revisionApi.POST(
 				event({ actor: a, method: 'POST', params: { id, version: '1' }, body: {} })
 			);
@@ -314,16 +318,16 @@ table.push(
 	},
 	{
 		route: 'POST /analyses/{id}/duplicate',
-		call: (a, c, p) =>
+		call: async (a, c, p) =>
 			duplicateApi.POST(
-				event({ actor: a, method: 'POST', params: { id: analysisOf(c, p) }, body: {} })
+				event({ actor: a, method: 'POST', params: { id: await analysisOf(c, p) }, body: {} })
 			),
 		expect: { ...write, editor: 201, owner: 201 }
 	},
 	{
 		route: 'POST /analyses/{id}/move',
-		call: (a, c, p) => {
-			const target = createProject(c.owner, c.workshopId, {
+		call: async (a, c, p) => {
+			const target = await createProject(c.owner, c.workshopId, {
 				name: 'Hall',
 				client: '',
 				siteNotes: ''
@@ -332,7 +336,7 @@ table.push(
 				event({
 					actor: a,
 					method: 'POST',
-					params: { id: analysisOf(c, p) },
+					params: { id: await analysisOf(c, p) },
 					body: { projectId: target.id }
 				})
 			);
@@ -350,7 +354,8 @@ table.push(
 	},
 	{
 		route: 'GET /analyses/{id}/record.pdf',
-		call: (a, c, p) => analysisPdfApi.GET(event({ actor: a, params: { id: analysisOf(c, p) } })),
+		call: async (a, c, p) =>
+			analysisPdfApi.GET(event({ actor: a, params: { id: await analysisOf(c, p) } })),
 		expect: read
 	}
 );
@@ -443,8 +448,8 @@ table.push(
 	},
 	{
 		route: "DELETE /tokens/{id} (the owner's token)",
-		call: (a, c) => {
-			const { id } = createApiToken(c.owner, { name: 'Shop laptop' });
+		call: async (a, c) => {
+			const { id } = await createApiToken(c.owner, { name: 'Shop laptop' });
 			return tokenApi.DELETE(event({ actor: a, method: 'DELETE', params: { id } }));
 		},
 		expect: {
@@ -476,15 +481,15 @@ describe('share links: only the token opens the record', () => {
 		for (const who of whos) {
 			const expected = row.revoked ? 404 : holderOnly[who];
 			it(`${row.route} as ${who} → ${expected}`, async () => {
-				const cast = makeWorkshopWithCast();
-				const project = createProject(cast.owner, cast.workshopId, {
+				const cast = await makeWorkshopWithCast();
+				const project = await createProject(cast.owner, cast.workshopId, {
 					name: 'Bookcase',
 					client: 'Ada Client',
 					siteNotes: ''
 				});
-				saveShelf(cast.owner, project.id);
-				const { link, token } = createShareLink(cast.editor, project.id, { days: 7 });
-				if (row.revoked) revokeShareLink(cast.editor, project.id, link.id);
+				await saveShelf(cast.owner, project.id);
+				const { link, token } = await createShareLink(cast.editor, project.id, { days: 7 });
+				if (row.revoked) await revokeShareLink(cast.editor, project.id, link.id);
 				// everyone but the holder presents a token of the right shape that is not this one
 				const presented = who === 'shareHolder' ? token : randomBytes(32).toString('base64url');
 				const res = await row.open(presented);
@@ -498,19 +503,19 @@ describe('authorization of every stored-data API route', () => {
 		for (const who of whos)
 			it(`${row.route} as ${who} → ${row.expect[who]}`, async () => {
 				// a fresh workshop and project per case, so a delete in one case cannot colour another
-				const cast = makeWorkshopWithCast();
-				const project = createProject(cast.owner, cast.workshopId, {
+				const cast = await makeWorkshopWithCast();
+				const project = await createProject(cast.owner, cast.workshopId, {
 					name: 'Bookcase',
 					client: '',
 					siteNotes: ''
 				});
-				grantProject(cast.client, project.id);
-				const pantry = createProject(cast.owner, cast.workshopId, {
+				await grantProject(cast.client, project.id);
+				const pantry = await createProject(cast.owner, cast.workshopId, {
 					name: 'Pantry',
 					client: 'Another client',
 					siteNotes: ''
 				});
-				grantProject(cast.otherClient, pantry.id);
+				await grantProject(cast.otherClient, pantry.id);
 				const actor = who === 'anonymous' || who === 'shareHolder' ? null : cast[who];
 				const res = await row.call(actor, cast, project.id);
 				expect(res.status).toBe(row.expect[who]);

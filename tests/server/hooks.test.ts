@@ -126,11 +126,10 @@ describe('the Auth.js cookies', () => {
 			email: 'ola@shop.example',
 			password: 'long words here'
 		});
-		db()
+		await db()
 			.db.update(schema.users)
 			.set({ emailVerified: new Date() })
-			.where(eq(schema.users.id, user.id))
-			.run();
+			.where(eq(schema.users.id, user.id));
 		const login = cookieJar();
 		await runAction(
 			signInActions.password,

@@ -31,20 +31,25 @@ const BAD_BODIES = [
 	{ type: 'multipart/form-data; boundary=x', body: '--x\r\nbroken', expect: 400 }
 ];
 
-function setup() {
-	const cast = makeWorkshopWithCast();
-	const project = createProject(cast.owner, cast.workshopId, {
+async function setup() {
+	const cast = await makeWorkshopWithCast();
+	const project = await createProject(cast.owner, cast.workshopId, {
 		name: 'Pantry',
 		client: '',
 		siteNotes: ''
 	});
-	const analysis = saveShelf(cast.owner, project.id);
-	const { token } = createInvitation(cast.owner, cast.workshopId, 'new@example.test', 'viewer');
+	const analysis = await saveShelf(cast.owner, project.id);
+	const { token } = await createInvitation(
+		cast.owner,
+		cast.workshopId,
+		'new@example.test',
+		'viewer'
+	);
 	return { actor: cast.owner, params: { id: project.id, analysisId: analysis.id, token } };
 }
 
 async function post(action: Action, route: string, type: string, body: string) {
-	const { actor, params } = setup();
+	const { actor, params } = await setup();
 	const url = new URL(`http://localhost:5173${route.replace(/\(\w+\)\//g, '')}`);
 	const request = new Request(url, {
 		method: 'POST',

@@ -59,8 +59,8 @@ describe('every answer of the stored-data routes matches the document', () => {
 	for (const row of table)
 		it(`${row.route}`, async () => {
 			for (const who of whos) {
-				const cast = makeWorkshopWithCast();
-				const project = createProject(cast.owner, cast.workshopId, {
+				const cast = await makeWorkshopWithCast();
+				const project = await createProject(cast.owner, cast.workshopId, {
 					name: 'Bookcase',
 					client: 'Ines',
 					siteNotes: 'Stair hall'

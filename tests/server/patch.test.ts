@@ -45,8 +45,8 @@ describe('PATCH /projects/{id}', () => {
 		['siteNotes', 'Stair hall, stud wall']
 	] as const)
 		it(`with only ${changed} leaves the other fields as they were`, async () => {
-			const cast = makeWorkshopWithCast();
-			const project = createProject(cast.owner, cast.workshopId, fields);
+			const cast = await makeWorkshopWithCast();
+			const project = await createProject(cast.owner, cast.workshopId, fields);
 			const res = await patchProject(
 				event({
 					actor: cast.editor,
@@ -62,14 +62,14 @@ describe('PATCH /projects/{id}', () => {
 
 describe('PATCH /analyses/{id} and /workshops/{id}', () => {
 	it('a new analysis name keeps its input and result', async () => {
-		const cast = makeWorkshopWithCast();
-		const project = createProject(cast.owner, cast.workshopId, {
+		const cast = await makeWorkshopWithCast();
+		const project = await createProject(cast.owner, cast.workshopId, {
 			name: 'Hall',
 			client: '',
 			siteNotes: ''
 		});
-		const saved = saveShelf(cast.owner, project.id);
-		const before = getAnalysis(cast.owner, saved.id).analysis;
+		const saved = await saveShelf(cast.owner, project.id);
+		const before = (await getAnalysis(cast.owner, saved.id)).analysis;
 		const res = await patchAnalysis(
 			event({
 				actor: cast.owner,
@@ -79,14 +79,14 @@ describe('PATCH /analyses/{id} and /workshops/{id}', () => {
 			})
 		);
 		expect(res.status).toBe(200);
-		const after = getAnalysis(cast.owner, saved.id).analysis;
+		const after = (await getAnalysis(cast.owner, saved.id)).analysis;
 		expect(after.name).toBe('Renamed shelf');
 		expect(after.input).toEqual(before.input);
 		expect(after.kind).toBe(before.kind);
 	});
 
 	it('a new workshop name keeps whether it is personal', async () => {
-		const cast = makeWorkshopWithCast();
+		const cast = await makeWorkshopWithCast();
 		const res = await patchWorkshop(
 			event({
 				actor: cast.owner,

@@ -8,16 +8,16 @@ import { createProject, listProjects } from '../../src/lib/server/projects';
 useTempDb();
 
 describe('projects', () => {
-	it('lists with search, sort and pages, scoped to the workshop', () => {
-		const cast = makeWorkshopWithCast();
+	it('lists with search, sort and pages, scoped to the workshop', async () => {
+		const cast = await makeWorkshopWithCast();
 		for (const [name, client] of [
 			['Library wall', 'Whitlock'],
 			['Pantry', 'Osei'],
 			['Reading nook', 'Harbour Street'],
 			['Garage racks', 'Whitlock']
 		])
-			createProject(cast.editor, cast.workshopId, { name, client, siteNotes: '' });
-		const all = listProjects(cast.viewer, {
+			await createProject(cast.editor, cast.workshopId, { name, client, siteNotes: '' });
+		const all = await listProjects(cast.viewer, {
 			workshop: cast.workshopId,
 			q: '',
 			sort: 'name',
@@ -27,7 +27,7 @@ describe('projects', () => {
 		});
 		expect(all.total).toBe(4);
 		expect(all.items.map((p) => p.name)).toEqual(['Garage racks', 'Library wall', 'Pantry']);
-		const page2 = listProjects(cast.viewer, {
+		const page2 = await listProjects(cast.viewer, {
 			workshop: cast.workshopId,
 			q: '',
 			sort: 'name',
@@ -36,7 +36,7 @@ describe('projects', () => {
 			perPage: 3
 		});
 		expect(page2.items.map((p) => p.name)).toEqual(['Reading nook']);
-		const found = listProjects(cast.viewer, {
+		const found = await listProjects(cast.viewer, {
 			workshop: cast.workshopId,
 			q: 'whitlock',
 			sort: 'name',
@@ -46,7 +46,7 @@ describe('projects', () => {
 		});
 		expect(found.items.map((p) => p.name)).toEqual(['Library wall', 'Garage racks']);
 		// a LIKE wildcard typed by a user is a literal character, not a pattern
-		const literal = listProjects(cast.viewer, {
+		const literal = await listProjects(cast.viewer, {
 			workshop: cast.workshopId,
 			q: '%',
 			sort: 'name',
@@ -58,7 +58,7 @@ describe('projects', () => {
 	});
 
 	it('answers bad input with a JSON problem naming the field, never a 500', async () => {
-		const cast = makeWorkshopWithCast();
+		const cast = await makeWorkshopWithCast();
 		const res = await projectsApi.POST(
 			event({ actor: cast.editor, method: 'POST', body: { workshopId: cast.workshopId, name: '' } })
 		);
@@ -78,7 +78,7 @@ describe('projects', () => {
 	});
 
 	it('creates, reads, updates and deletes through the API', async () => {
-		const cast = makeWorkshopWithCast();
+		const cast = await makeWorkshopWithCast();
 		const created = await projectsApi.POST(
 			event({
 				actor: cast.editor,

@@ -4,7 +4,8 @@ import { describe, expect, it } from 'vitest';
 import { computeLimit } from '../../src/lib/server/hooks/compute-limit';
 import { COMPUTE_REQUESTS } from '../../src/lib/server/rate-limit';
 import { getDb } from '../../src/lib/server/db';
-import { sql } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
+import { rateLimits } from '../../src/lib/server/db/schema';
 import { useTempDb } from './support/db';
 
 useTempDb();
@@ -50,9 +51,10 @@ describe('the compute rate limit', () => {
 
 	it('keeps its counts in the database', async () => {
 		await call('/api/v1/joints', '192.0.2.77');
-		const row = getDb().get<{ points: number }>(
-			sql`select points from rate_limit where key = 'compute:192.0.2.77'`
-		);
+		const [row] = await getDb()
+			.select({ points: rateLimits.points })
+			.from(rateLimits)
+			.where(eq(rateLimits.key, 'compute:192.0.2.77'));
 		expect(row?.points).toBe(1);
 	});
 

@@ -26,7 +26,7 @@ describe('the record', () => {
 		const demo = await seedDemo();
 		const dana = actorOf(demo, 'client');
 		const library = demo.projectIds['Whitlock library wall'];
-		const { record, role } = projectRecord(dana, library);
+		const { record, role } = await projectRecord(dana, library);
 		expect(role).toBe('client');
 		expect(record.shop).toBe('Quillfeather Casework');
 		expect(record.project.client).toBe('Dana Whitlock');
@@ -67,20 +67,20 @@ describe('the record', () => {
 		const demo = await seedDemo();
 		const dana = actorOf(demo, 'client');
 		for (const name of ['Harbour Street school reading nook', 'Kiln Lane pantry'])
-			expect(() => projectRecord(dana, demo.projectIds[name])).toThrow(
-				expect.objectContaining({ status: 404 })
-			);
+			await expect(projectRecord(dana, demo.projectIds[name])).rejects.toMatchObject({
+				status: 404
+			});
 		const school = demo.projectIds['Harbour Street school reading nook'];
-		expect(() => analysisRecord(dana, school, demo.analysisIds[4])).toThrow(
-			expect.objectContaining({ status: 404 })
-		);
+		await expect(analysisRecord(dana, school, demo.analysisIds[4])).rejects.toMatchObject({
+			status: 404
+		});
 	});
 
 	it('renders a tall case as a PDF whose text holds the verdict, the anchoring steps and the cautions', async () => {
 		const demo = await seedDemo();
 		const ines = actorOf(demo, 'owner');
 		const school = demo.projectIds['Harbour Street school reading nook'];
-		const { record } = analysisRecord(ines, school, demo.analysisIds[4]);
+		const { record } = await analysisRecord(ines, school, demo.analysisIds[4]);
 		const item = record.items[0];
 		const r = item.result as CaseResult;
 		const pdf = await renderRecordPdf(record);
@@ -104,7 +104,7 @@ describe('the record', () => {
 		const demo = await seedDemo();
 		const dana = actorOf(demo, 'client');
 		const library = demo.projectIds['Whitlock library wall'];
-		const { record } = analysisRecord(dana, library, demo.analysisIds[0]);
+		const { record } = await analysisRecord(dana, library, demo.analysisIds[0]);
 		const r = record.items[0].result as ShelfResult;
 		const text = pdfText(await renderRecordPdf(record));
 		expect(text).toContain('Passes.');

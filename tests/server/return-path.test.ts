@@ -57,7 +57,7 @@ describe('safeRedirectPath', () => {
 async function redirectOf(load: (e: never) => unknown, next: string) {
 	const url = new URL('http://localhost:5173/signin');
 	url.searchParams.set('next', next);
-	const actor = makeUser('back');
+	const actor = await makeUser('back');
 	try {
 		await load({ url, locals: { actor }, cookies: { get: () => undefined } } as never);
 	} catch (e) {
@@ -87,8 +87,8 @@ describe('sign-in and sign-up send a signed-in visitor only to a path on this si
 
 describe("the workshop switcher's next", () => {
 	it('is checked: an off-site target goes to the projects instead', async () => {
-		const actor = makeUser('switcher');
-		const ws = createWorkshopFor(actor.id, 'Second shop');
+		const actor = await makeUser('switcher');
+		const ws = await createWorkshopFor(actor.id, 'Second shop');
 		for (const next of ['//evil.example', '/\t/evil.example', 'https://evil.example']) {
 			const event = formEvent({
 				url: `/workshop?/switch&next=${encodeURIComponent(next)}`,
@@ -102,8 +102,8 @@ describe("the workshop switcher's next", () => {
 	});
 
 	it('keeps a path on this site', async () => {
-		const actor = makeUser('switcher');
-		const ws = createWorkshopFor(actor.id, 'Third shop');
+		const actor = await makeUser('switcher');
+		const ws = await createWorkshopFor(actor.id, 'Third shop');
 		const event = formEvent({
 			url: `/workshop?/switch&next=${encodeURIComponent('/projects?page=2')}`,
 			fields: { workshopId: ws.id },

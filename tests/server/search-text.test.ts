@@ -32,12 +32,12 @@ describe('searching projects and analyses takes %, _ and \\ literally', () => {
 		expect(escapeLike('plain words')).toBe('plain words');
 	});
 
-	it('finds only the project whose name has the typed character', () => {
-		const cast = makeWorkshopWithCast();
+	it('finds only the project whose name has the typed character', async () => {
+		const cast = await makeWorkshopWithCast();
 		for (const name of NAMES)
-			createProject(cast.editor, cast.workshopId, { name, client: '', siteNotes: '' });
+			await createProject(cast.editor, cast.workshopId, { name, client: '', siteNotes: '' });
 		for (const [q, expected] of SEARCHES) {
-			const found = listProjects(cast.viewer, {
+			const found = await listProjects(cast.viewer, {
 				workshop: cast.workshopId,
 				q,
 				sort: 'name',
@@ -52,17 +52,17 @@ describe('searching projects and analyses takes %, _ and \\ literally', () => {
 		}
 	});
 
-	it('finds only the analysis whose name has the typed character', () => {
-		const cast = makeWorkshopWithCast();
-		const project = createProject(cast.owner, cast.workshopId, {
+	it('finds only the analysis whose name has the typed character', async () => {
+		const cast = await makeWorkshopWithCast();
+		const project = await createProject(cast.owner, cast.workshopId, {
 			name: 'Den',
 			client: '',
 			siteNotes: ''
 		});
-		for (const name of NAMES) saveShelf(cast.editor, project.id, name);
+		for (const name of NAMES) await saveShelf(cast.editor, project.id, name);
 		// a bare % is left out here: every shelf summary has one ("… with 82% to spare")
 		for (const [q, expected] of SEARCHES.filter(([q]) => q !== '%')) {
-			const found = listAnalyses(cast.viewer, project.id, {
+			const found = await listAnalyses(cast.viewer, project.id, {
 				q,
 				sort: 'name',
 				dir: 'asc',

@@ -1,6 +1,6 @@
 import { error } from '@sveltejs/kit';
 import { and, eq } from 'drizzle-orm';
-import { getDb } from './db';
+import { getDb, firstRow } from './db';
 import { memberships, projectAccess, type Role } from './db/schema';
 import type { LengthUnit } from '$lib/schemas/preferences';
 
@@ -24,12 +24,12 @@ export function roleAtLeast(role: Role, needed: Role) {
 }
 
 /** The actor's role in a workshop, or null when they are not a member. */
-export function roleIn(actor: Actor, workshopId: string): Role | null {
-	const row = getDb()
+export async function roleIn(actor: Actor, workshopId: string): Promise<Role | null> {
+	const row = await getDb()
 		.select({ role: memberships.role })
 		.from(memberships)
 		.where(and(eq(memberships.userId, actor.id), eq(memberships.workshopId, workshopId)))
-		.get();
+		.then(firstRow);
 	return row?.role ?? null;
 }
 
@@ -38,13 +38,13 @@ export function roleIn(actor: Actor, workshopId: string): Role | null {
  * 401 without an actor; 404 when the actor is not a member (the workshop's existence is not
  * revealed); 403 when the actor's role is below what is needed.
  */
-export function requireRole(
+export async function requireRole(
 	actor: Actor | null,
 	workshopId: string,
 	needed: Role
-): { actor: Actor; role: Role } {
+): Promise<{ actor: Actor; role: Role }> {
 	if (!actor) error(401, 'Sign in to continue.');
-	const role = roleIn(actor, workshopId);
+	const role = await roleIn(actor, workshopId);
 	if (!role) error(404, 'Not found.');
 	if (!roleAtLeast(role, needed))
 		error(403, `This needs the ${needed} role; you are a ${role} here.`);
@@ -70,17 +70,17 @@ export function canEdit(role: ProjectRole) {
 }
 
 /** The actor's role in a project: their workshop role, else 'client' when invited to it, else null. */
-export function projectRoleIn(
+export async function projectRoleIn(
 	actor: Actor,
 	project: { id: string; workshopId: string }
-): ProjectRole | null {
-	const role = roleIn(actor, project.workshopId);
+): Promise<ProjectRole | null> {
+	const role = await roleIn(actor, project.workshopId);
 	if (role) return role;
-	const invited = getDb()
+	const invited = await getDb()
 		.select({ userId: projectAccess.userId })
 		.from(projectAccess)
 		.where(and(eq(projectAccess.userId, actor.id), eq(projectAccess.projectId, project.id)))
-		.get();
+		.then(firstRow);
 	return invited ? 'client' : null;
 }
 
@@ -88,13 +88,13 @@ export function projectRoleIn(
  * requireRole for one project: 401 without an actor, 404 when the actor may not see the project
  * (neither a member of its workshop nor invited to it), 403 when their role is too low.
  */
-export function requireProjectRole(
+export async function requireProjectRole(
 	actor: Actor | null,
 	project: { id: string; workshopId: string },
 	needed: ProjectRole
-): { actor: Actor; role: ProjectRole } {
+): Promise<{ actor: Actor; role: ProjectRole }> {
 	if (!actor) error(401, 'Sign in to continue.');
-	const role = projectRoleIn(actor, project);
+	const role = await projectRoleIn(actor, project);
 	if (!role) error(404, 'Not found.');
 	if (PROJECT_RANK[role] < PROJECT_RANK[needed])
 		error(403, `This needs the ${needed} role; you are a ${role} here.`);

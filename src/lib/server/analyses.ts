@@ -3,12 +3,13 @@
  * recomputes with the engine (analysis-kinds.ts), bumps the version and records a revision; a
  * stale version is refused (409) and nothing is overwritten.
  */
+import type { LengthUnit } from '$lib/schemas/preferences';
 import { error } from '@sveltejs/kit';
 import { and, asc, count, desc, eq, gt, isNull, sql, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
 import { type Actor } from './access';
 import { computeAnalysis, describeAnalysis, describeInput } from '$lib/kinds/registry';
-import { getDb } from './db';
+import { getDb, firstRow, oneRow, transaction } from './db';
 import { containsText } from './db/contains';
 import { analyses, analysisRevisions, projects, users, type AnalysisKind } from './db/schema';
 import type { ProblemIssue } from './http';
@@ -63,14 +64,14 @@ const listColumns = {
 /** The summary in the reader's unit (the stored one was written in the author's). */
 function present<
 	T extends { kind: AnalysisKind; input: unknown; result: unknown; summary: string }
->(row: T, actor: Actor) {
-	const summary = describeAnalysis(row.kind, row.input, row.result, lengthUnitOf(actor));
+>(row: T, unit: LengthUnit) {
+	const summary = describeAnalysis(row.kind, row.input, row.result, unit);
 	return { ...row, summary: summary || row.summary };
 }
 
 /** A page of a project's analyses, searched by name and summary, filtered by kind and verdict. */
-export function listAnalyses(actor: Actor, projectId: string, query: AnalysisListQuery) {
-	getProject(actor, projectId);
+export async function listAnalyses(actor: Actor, projectId: string, query: AnalysisListQuery) {
+	await getProject(actor, projectId);
 	const db = getDb();
 	const where: SQL[] = [eq(analyses.projectId, projectId), isNull(analyses.deletedAt)];
 	if (query.q) where.push(containsText([analyses.name, analyses.summary], query.q));
@@ -79,7 +80,7 @@ export function listAnalyses(actor: Actor, projectId: string, query: AnalysisLis
 	const filter = and(...where);
 	const column = sortColumn[query.sort];
 	const order = query.dir === 'asc' ? asc(column) : desc(column);
-	const rows = db
+	const rows = await db
 		.select(listColumns)
 		.from(analyses)
 		.leftJoin(creator, eq(creator.id, analyses.createdBy))
@@ -87,11 +88,12 @@ export function listAnalyses(actor: Actor, projectId: string, query: AnalysisLis
 		.where(filter)
 		.orderBy(order, desc(analyses.updatedAt), asc(analyses.id))
 		.limit(query.perPage)
-		.offset((query.page - 1) * query.perPage)
-		.all();
-	const total = db.select({ n: count() }).from(analyses).where(filter).get()?.n ?? 0;
+		.offset((query.page - 1) * query.perPage);
+	const total =
+		(await db.select({ n: count() }).from(analyses).where(filter).then(firstRow))?.n ?? 0;
+	const unit = await lengthUnitOf(actor);
 	const items = rows.map((r) => {
-		const { input: _input, result: _result, ...rest } = present(r, actor);
+		const { input: _input, result: _result, ...rest } = present(r, unit);
 		void _input;
 		void _result;
 		return rest;
@@ -99,30 +101,30 @@ export function listAnalyses(actor: Actor, projectId: string, query: AnalysisLis
 	return { items, total, page: query.page, perPage: query.perPage };
 }
 
-function findRow(id: string, includeDeleted = false) {
-	const row = getDb()
+async function findRow(id: string, includeDeleted = false) {
+	const row = await getDb()
 		.select({ ...listColumns, deletedAt: analyses.deletedAt, workshopId: projects.workshopId })
 		.from(analyses)
 		.innerJoin(projects, eq(projects.id, analyses.projectId))
 		.leftJoin(creator, eq(creator.id, analyses.createdBy))
 		.leftJoin(updater, eq(updater.id, analyses.updatedBy))
 		.where(eq(analyses.id, id))
-		.get();
+		.then(firstRow);
 	if (!row || (row.deletedAt && !includeDeleted)) error(404, 'Not found.');
 	return row;
 }
 
 /** One analysis with its project and the actor's role; 404 when unseen or deleted. */
-export function getAnalysis(actor: Actor, id: string) {
-	const row = findRow(id);
-	const { project, role } = getProject(actor, row.projectId);
-	const { workshopId: _w, deletedAt: _d, ...analysis } = present(row, actor);
+export async function getAnalysis(actor: Actor, id: string) {
+	const row = await findRow(id);
+	const { project, role } = await getProject(actor, row.projectId);
+	const { workshopId: _w, deletedAt: _d, ...analysis } = present(row, await lengthUnitOf(actor));
 	void _w;
 	void _d;
 	return { analysis, project, role };
 }
 
-export type AnalysisView = ReturnType<typeof getAnalysis>['analysis'];
+export type AnalysisView = Awaited<ReturnType<typeof getAnalysis>>['analysis'];
 
 function computed(kind: AnalysisKind, input: unknown) {
 	const run = computeAnalysis(kind, input);
@@ -130,41 +132,42 @@ function computed(kind: AnalysisKind, input: unknown) {
 	return run;
 }
 
-function summaryOf(actor: Actor, kind: AnalysisKind, run: { input: unknown; result: unknown }) {
-	return describeAnalysis(kind, run.input, run.result, lengthUnitOf(actor));
+async function summaryOf(
+	actor: Actor,
+	kind: AnalysisKind,
+	run: { input: unknown; result: unknown }
+) {
+	return describeAnalysis(kind, run.input, run.result, await lengthUnitOf(actor));
 }
 
-function touchProject(projectId: string, at: Date) {
-	getDb().update(projects).set({ updatedAt: at }).where(eq(projects.id, projectId)).run();
+async function touchProject(projectId: string, at: Date) {
+	await getDb().update(projects).set({ updatedAt: at }).where(eq(projects.id, projectId));
 }
 
-function recordRevision(row: Row, actor: Actor) {
-	getDb()
-		.insert(analysisRevisions)
-		.values({
-			analysisId: row.id,
-			version: row.version,
-			name: row.name,
-			input: row.input,
-			result: row.result,
-			engineVersion: row.engineVersion,
-			changedBy: actor.id,
-			createdAt: row.updatedAt
-		})
-		.run();
+async function recordRevision(row: Row, actor: Actor) {
+	await getDb().insert(analysisRevisions).values({
+		analysisId: row.id,
+		version: row.version,
+		name: row.name,
+		input: row.input,
+		result: row.result,
+		engineVersion: row.engineVersion,
+		changedBy: actor.id,
+		createdAt: row.updatedAt
+	});
 }
 
 /** Save a new analysis in a project (editor); the engine computes its result. */
-export function createAnalysis(
+export async function createAnalysis(
 	actor: Actor,
 	projectId: string,
 	body: { kind: AnalysisKind; name: string; input: unknown }
 ) {
-	getProject(actor, projectId, 'editor');
+	await getProject(actor, projectId, 'editor');
 	const run = computed(body.kind, body.input);
 	const now = new Date();
-	const id = getDb().transaction(() => {
-		const row = getDb()
+	const id = await transaction(async () => {
+		const row = await getDb()
 			.insert(analyses)
 			.values({
 				projectId,
@@ -172,7 +175,7 @@ export function createAnalysis(
 				name: body.name,
 				input: run.input,
 				result: run.result,
-				summary: summaryOf(actor, body.kind, run),
+				summary: await summaryOf(actor, body.kind, run),
 				pass: run.pass,
 				engineVersion: run.engineVersion,
 				createdBy: actor.id,
@@ -181,17 +184,17 @@ export function createAnalysis(
 				updatedAt: now
 			})
 			.returning()
-			.get();
-		recordRevision(row, actor);
-		touchProject(projectId, now);
+			.then(oneRow);
+		await recordRevision(row, actor);
+		await touchProject(projectId, now);
 		return row.id;
 	});
-	return getAnalysis(actor, id).analysis;
+	return (await getAnalysis(actor, id)).analysis;
 }
 
-function editable(actor: Actor, id: string, includeDeleted = false) {
-	const row = findRow(id, includeDeleted);
-	getProject(actor, row.projectId, 'editor');
+async function editable(actor: Actor, id: string, includeDeleted = false) {
+	const row = await findRow(id, includeDeleted);
+	await getProject(actor, row.projectId, 'editor');
 	return row;
 }
 
@@ -209,16 +212,16 @@ function stale(current: { version: number; updatedByName: string | null; updated
  * Change the name and/or input, only if `version` is still the stored one (else 409, nothing
  * written). A new input is recomputed; the result is never taken from the caller.
  */
-export function updateAnalysis(
+export async function updateAnalysis(
 	actor: Actor,
 	id: string,
 	patch: { name?: string; input?: unknown; version: number }
 ) {
-	const current = editable(actor, id);
+	const current = await editable(actor, id);
 	if (current.version !== patch.version) throw stale(current);
 	const run = patch.input !== undefined ? computed(current.kind, patch.input) : null;
 	const now = new Date();
-	getDb().transaction(() => {
+	await transaction(async () => {
 		const values = {
 			name: patch.name ?? current.name,
 			version: current.version + 1,
@@ -230,30 +233,30 @@ export function updateAnalysis(
 						result: run.result,
 						pass: run.pass,
 						engineVersion: run.engineVersion,
-						summary: summaryOf(actor, current.kind, run)
+						summary: await summaryOf(actor, current.kind, run)
 					}
 				: {})
 		};
 		// the version in the WHERE makes the check and the write one step: a concurrent writer loses
-		const row = getDb()
+		const row = await getDb()
 			.update(analyses)
 			.set(values)
 			.where(
 				and(eq(analyses.id, id), eq(analyses.version, patch.version), isNull(analyses.deletedAt))
 			)
 			.returning()
-			.get();
-		if (!row) throw stale(findRow(id));
-		recordRevision(row, actor);
-		touchProject(row.projectId, now);
+			.then(firstRow);
+		if (!row) throw stale(await findRow(id));
+		await recordRevision(row, actor);
+		await touchProject(row.projectId, now);
 	});
-	return getAnalysis(actor, id).analysis;
+	return (await getAnalysis(actor, id)).analysis;
 }
 
 /** Every version of an analysis, newest first, with who saved it. */
-export function listRevisions(actor: Actor, id: string) {
-	const { analysis } = getAnalysis(actor, id);
-	const rows = getDb()
+export async function listRevisions(actor: Actor, id: string) {
+	const { analysis } = await getAnalysis(actor, id);
+	const rows = await getDb()
 		.select({
 			version: analysisRevisions.version,
 			name: analysisRevisions.name,
@@ -266,9 +269,8 @@ export function listRevisions(actor: Actor, id: string) {
 		.from(analysisRevisions)
 		.leftJoin(users, eq(users.id, analysisRevisions.changedBy))
 		.where(eq(analysisRevisions.analysisId, id))
-		.orderBy(desc(analysisRevisions.version))
-		.all();
-	const unit = lengthUnitOf(actor);
+		.orderBy(desc(analysisRevisions.version));
+	const unit = await lengthUnitOf(actor);
 	return rows.map(({ input, result, ...r }) => ({
 		...r,
 		summary: describeAnalysis(analysis.kind, input, result, unit),
@@ -277,9 +279,9 @@ export function listRevisions(actor: Actor, id: string) {
 }
 
 /** One earlier version: its inputs (stored and as readable rows), result and summary. */
-export function getRevision(actor: Actor, id: string, version: number) {
-	const { analysis, project, role } = getAnalysis(actor, id);
-	const row = getDb()
+export async function getRevision(actor: Actor, id: string, version: number) {
+	const { analysis, project, role } = await getAnalysis(actor, id);
+	const row = await getDb()
 		.select({
 			version: analysisRevisions.version,
 			name: analysisRevisions.name,
@@ -292,9 +294,9 @@ export function getRevision(actor: Actor, id: string, version: number) {
 		.from(analysisRevisions)
 		.leftJoin(users, eq(users.id, analysisRevisions.changedBy))
 		.where(and(eq(analysisRevisions.analysisId, id), eq(analysisRevisions.version, version)))
-		.get();
+		.then(firstRow);
 	if (!row) error(404, 'Not found.');
-	const unit = lengthUnitOf(actor);
+	const unit = await lengthUnitOf(actor);
 	return {
 		analysis,
 		project,
@@ -308,11 +310,16 @@ export function getRevision(actor: Actor, id: string, version: number) {
 }
 
 /** Bring back an earlier version's name and input as a new version, recomputed now. */
-export function restoreRevision(actor: Actor, id: string, version: number, expected?: number) {
-	const current = editable(actor, id);
+export async function restoreRevision(
+	actor: Actor,
+	id: string,
+	version: number,
+	expected?: number
+) {
+	const current = await editable(actor, id);
 	if (expected !== undefined && expected !== current.version) throw stale(current);
-	const { revision } = getRevision(actor, id, version);
-	return updateAnalysis(actor, id, {
+	const { revision } = await getRevision(actor, id, version);
+	return await updateAnalysis(actor, id, {
 		name: revision.name,
 		input: revision.input,
 		version: current.version
@@ -320,36 +327,39 @@ export function restoreRevision(actor: Actor, id: string, version: number, expec
 }
 
 /** A copy in the same project, recomputed with the current engine, starting at version 1. */
-export function duplicateAnalysis(actor: Actor, id: string, body: { name?: string } = {}) {
-	const source = editable(actor, id);
+export async function duplicateAnalysis(actor: Actor, id: string, body: { name?: string } = {}) {
+	const source = await editable(actor, id);
 	const name = body.name ?? `${source.name} (copy)`.slice(0, 120);
-	return createAnalysis(actor, source.projectId, { kind: source.kind, name, input: source.input });
+	return await createAnalysis(actor, source.projectId, {
+		kind: source.kind,
+		name,
+		input: source.input
+	});
 }
 
 /** Move to another project of the same workshop (editor); other workshops are refused (422). */
-export function moveAnalysis(actor: Actor, id: string, projectId: string) {
-	const row = editable(actor, id);
-	const { project: target } = getProject(actor, projectId, 'editor');
+export async function moveAnalysis(actor: Actor, id: string, projectId: string) {
+	const row = await editable(actor, id);
+	const { project: target } = await getProject(actor, projectId, 'editor');
 	if (target.workshopId !== row.workshopId)
 		throw new AnalysisProblem(422, 'An analysis moves only between projects of its workshop.', [
 			{ path: ['projectId'], message: 'Pick a project of the same workshop.' }
 		]);
 	const now = new Date();
-	getDb()
+	await getDb()
 		.update(analyses)
 		.set({ projectId, updatedBy: actor.id, updatedAt: now })
-		.where(eq(analyses.id, id))
-		.run();
-	touchProject(row.projectId, now);
-	touchProject(projectId, now);
-	return getAnalysis(actor, id).analysis;
+		.where(eq(analyses.id, id));
+	await touchProject(row.projectId, now);
+	await touchProject(projectId, now);
+	return (await getAnalysis(actor, id)).analysis;
 }
 
 /** Soft delete (editor): hidden at once, and back with undoDelete within UNDO_WINDOW_MS. */
-export function deleteAnalysis(actor: Actor, id: string) {
-	const row = editable(actor, id);
+export async function deleteAnalysis(actor: Actor, id: string) {
+	const row = await editable(actor, id);
 	const deletedAt = new Date();
-	getDb().update(analyses).set({ deletedAt }).where(eq(analyses.id, id)).run();
+	await getDb().update(analyses).set({ deletedAt }).where(eq(analyses.id, id));
 	return {
 		id,
 		projectId: row.projectId,
@@ -359,15 +369,14 @@ export function deleteAnalysis(actor: Actor, id: string) {
 }
 
 /** Undo a delete made within the window (editor); later deletes stay deleted (409). */
-export function undoDelete(actor: Actor, id: string, now = new Date()) {
-	const row = editable(actor, id, true);
-	if (!row.deletedAt) return getAnalysis(actor, id).analysis;
+export async function undoDelete(actor: Actor, id: string, now = new Date()) {
+	const row = await editable(actor, id, true);
+	if (!row.deletedAt) return (await getAnalysis(actor, id)).analysis;
 	if (+now - +row.deletedAt > UNDO_WINDOW_MS)
 		throw new AnalysisProblem(409, 'This analysis was deleted too long ago to undo.');
-	getDb()
+	await getDb()
 		.update(analyses)
 		.set({ deletedAt: null })
-		.where(and(eq(analyses.id, id), gt(analyses.deletedAt, new Date(+now - UNDO_WINDOW_MS))))
-		.run();
-	return getAnalysis(actor, id).analysis;
+		.where(and(eq(analyses.id, id), gt(analyses.deletedAt, new Date(+now - UNDO_WINDOW_MS))));
+	return (await getAnalysis(actor, id)).analysis;
 }

@@ -133,7 +133,8 @@ function buildAuthConfig(db: Db): SvelteKitAuthConfig {
 				maxAge: SIGN_IN_LINK_MAX_AGE_S,
 				async sendVerificationRequest({ identifier, url }) {
 					const link = rebase(url, requestEvent());
-					if (findUserByEmail(identifier)?.emailVerified) await sendSignInLink(identifier, link);
+					if ((await findUserByEmail(identifier))?.emailVerified)
+						await sendSignInLink(identifier, link);
 					else await sendAddressConfirmation(identifier, link);
 				}
 			})
@@ -152,9 +153,9 @@ function buildAuthConfig(db: Db): SvelteKitAuthConfig {
 				return base.origin + safeRedirectPath(path, '/');
 			},
 			// Links go only to existing accounts; sign-up (with a name and a password) makes accounts.
-			signIn({ account, email, user }) {
+			async signIn({ account, email, user }) {
 				if (account?.provider === 'nodemailer' && email?.verificationRequest)
-					return Boolean(user.email && findUserByEmail(user.email));
+					return Boolean(user.email && (await findUserByEmail(user.email)));
 				return true;
 			},
 			// each sign-in gets an id that stays in the token as Auth.js renews it, so signing out can
@@ -163,15 +164,15 @@ function buildAuthConfig(db: Db): SvelteKitAuthConfig {
 				if (user) token.sid = newSessionId();
 				return token;
 			},
-			session({ session, token }) {
-				if (token.sub && session.user && sessionIsCurrent(token.sub, token.iat, token.sid))
+			async session({ session, token }) {
+				if (token.sub && session.user && (await sessionIsCurrent(token.sub, token.iat, token.sid)))
 					session.user.id = token.sub;
 				return session;
 			}
 		},
 		events: {
-			signOut(message) {
-				if ('token' in message && message.token) endSession(message.token);
+			async signOut(message) {
+				if ('token' in message && message.token) await endSession(message.token);
 			}
 		}
 	};
@@ -262,9 +263,9 @@ export async function mailSignInLink(
 	event: RequestEvent,
 	input: { email: string; redirectTo: string }
 ): Promise<{ ok: true } | { ok: false; retryAfterMinutes: number }> {
-	const allowed = allowMailTo(input.email);
+	const allowed = await allowMailTo(input.email);
 	if (!allowed.ok) return allowed;
-	if (!findUserByEmail(input.email)) {
+	if (!(await findUserByEmail(input.email))) {
 		await sendNoAccountNotice(input.email, `${linkOrigin(event.url)}/signup`);
 		return { ok: true };
 	}

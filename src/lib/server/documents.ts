@@ -3,7 +3,7 @@ import { and, desc, eq, isNotNull, isNull, lt, sum, type SQL } from 'drizzle-orm
 import { fileTypeFromBuffer } from 'file-type';
 import sharp from 'sharp';
 import { requireRole, type Actor } from './access';
-import { getDb } from './db';
+import { getDb, firstRow, oneRow } from './db';
 import { analyses, documents, users, type DocumentType } from './db/schema';
 import { getProject } from './projects';
 import { getStore } from './storage';
@@ -61,37 +61,36 @@ export type ProjectDocument = {
 };
 
 /** Documents not deleted that match `where`, newest first, as the screens and the API show them. */
-function selectDocuments(...where: SQL[]): ProjectDocument[] {
-	return getDb()
+async function selectDocuments(...where: SQL[]): Promise<ProjectDocument[]> {
+	const rows = await getDb()
 		.select({ ...columns, thumbKey: documents.thumbKey })
 		.from(documents)
 		.leftJoin(users, eq(users.id, documents.createdBy))
 		.where(and(isNull(documents.deletedAt), ...where))
-		.orderBy(desc(documents.createdAt), desc(documents.id))
-		.all()
-		.map(({ thumbKey, ...rest }) => ({ ...rest, hasThumbnail: Boolean(thumbKey) }));
+		.orderBy(desc(documents.createdAt), desc(documents.id));
+	return rows.map(({ thumbKey, ...rest }) => ({ ...rest, hasThumbnail: Boolean(thumbKey) }));
 }
 
 /** The project's documents, newest first (anyone who may see the project). */
-export function listDocuments(actor: Actor, projectId: string, only?: { inRecord: true }) {
-	getProject(actor, projectId);
-	return selectDocuments(
+export async function listDocuments(actor: Actor, projectId: string, only?: { inRecord: true }) {
+	await getProject(actor, projectId);
+	return await selectDocuments(
 		eq(documents.projectId, projectId),
 		...(only?.inRecord ? [eq(documents.inRecord, true)] : [])
 	);
 }
 
-function documentRow(id: string) {
-	const row = getDb().select().from(documents).where(eq(documents.id, id)).get();
+async function documentRow(id: string) {
+	const row = await getDb().select().from(documents).where(eq(documents.id, id)).then(firstRow);
 	if (!row) error(404, 'Not found.');
 	return row;
 }
 
 /** One document, if the actor may see its project and it is not deleted; 404 otherwise. */
-export function getDocument(actor: Actor, id: string) {
-	const row = documentRow(id);
-	const { project, role } = getProject(actor, row.projectId);
-	const [shown] = selectDocuments(eq(documents.id, id));
+export async function getDocument(actor: Actor, id: string) {
+	const row = await documentRow(id);
+	const { project, role } = await getProject(actor, row.projectId);
+	const [shown] = await selectDocuments(eq(documents.id, id));
 	if (!shown) error(404, 'Not found.');
 	return { document: shown, project, role };
 }
@@ -102,8 +101,8 @@ export async function readDocumentFile(
 	id: string,
 	variant: 'original' | 'thumbnail'
 ) {
-	const row = documentRow(id);
-	getProject(actor, row.projectId);
+	const row = await documentRow(id);
+	await getProject(actor, row.projectId);
 	if (row.deletedAt) error(404, 'Not found.');
 	const key = variant === 'thumbnail' ? row.thumbKey : row.fileKey;
 	if (!key) error(404, 'This document has no thumbnail.');
@@ -174,18 +173,18 @@ async function cleanImage(bytes: Uint8Array, type: keyof typeof IMAGE_FORMAT) {
 	}
 }
 
-function projectBytesInUse(projectId: string) {
-	const row = getDb()
+async function projectBytesInUse(projectId: string) {
+	const row = await getDb()
 		.select({ total: sum(documents.bytes) })
 		.from(documents)
 		.where(eq(documents.projectId, projectId))
-		.get();
+		.then(firstRow);
 	return Number(row?.total ?? 0);
 }
 
-function checkAnalysis(projectId: string, analysisId: string | null) {
+async function checkAnalysis(projectId: string, analysisId: string | null) {
 	if (!analysisId) return;
-	const found = getDb()
+	const found = await getDb()
 		.select({ id: analyses.id })
 		.from(analyses)
 		.where(
@@ -195,7 +194,7 @@ function checkAnalysis(projectId: string, analysisId: string | null) {
 				isNull(analyses.deletedAt)
 			)
 		)
-		.get();
+		.then(firstRow);
 	if (!found) refuse(422, 'Choose one of this project’s analyses.');
 }
 
@@ -206,8 +205,8 @@ export async function addDocument(
 	file: { bytes: Uint8Array; name: string },
 	fields: DocumentFields
 ) {
-	const { project } = getProject(actor, projectId);
-	requireRole(actor, project.workshopId, 'editor');
+	const { project } = await getProject(actor, projectId);
+	await requireRole(actor, project.workshopId, 'editor');
 	const limits = documentLimits();
 	if (file.bytes.length > limits.fileBytes)
 		refuse(
@@ -215,13 +214,13 @@ export async function addDocument(
 			`A file may be at most ${limits.fileBytes / MB} MB; this one is ${(file.bytes.length / MB).toFixed(1)} MB.`
 		);
 	if (file.bytes.length === 0) refuse(422, 'The file is empty.');
-	checkAnalysis(projectId, fields.analysisId);
+	await checkAnalysis(projectId, fields.analysisId);
 	const type = await kindOf(file.bytes);
 	const cleaned =
 		type === 'application/pdf'
 			? { data: file.bytes, thumb: null, width: null, height: null }
 			: await cleanImage(file.bytes, type);
-	if (projectBytesInUse(projectId) + cleaned.data.length > limits.projectBytes)
+	if ((await projectBytesInUse(projectId)) + cleaned.data.length > limits.projectBytes)
 		refuse(
 			413,
 			`This project's files may take at most ${limits.projectBytes / MB} MB; delete some before adding more.`
@@ -234,7 +233,7 @@ export async function addDocument(
 	await store.put(fileKey, cleaned.data, type);
 	if (thumbKey && cleaned.thumb) await store.put(thumbKey, cleaned.thumb, 'image/webp');
 	try {
-		const row = getDb()
+		const row = await getDb()
 			.insert(documents)
 			.values({
 				projectId,
@@ -250,8 +249,8 @@ export async function addDocument(
 				createdBy: actor.id
 			})
 			.returning({ id: documents.id })
-			.get();
-		return getDocument(actor, row.id).document;
+			.then(oneRow);
+		return (await getDocument(actor, row.id)).document;
 	} catch (e) {
 		await Promise.all([store.delete(fileKey), thumbKey ? store.delete(thumbKey) : null]);
 		throw e;
@@ -259,38 +258,38 @@ export async function addDocument(
 }
 
 /** Change a document's caption, its analysis or whether the client's record shows it (editors). */
-export function updateDocument(actor: Actor, id: string, patch: DocumentPatch) {
-	const { project } = getDocument(actor, id);
-	requireRole(actor, project.workshopId, 'editor');
-	if (patch.analysisId !== undefined) checkAnalysis(project.id, patch.analysisId);
+export async function updateDocument(actor: Actor, id: string, patch: DocumentPatch) {
+	const { project } = await getDocument(actor, id);
+	await requireRole(actor, project.workshopId, 'editor');
+	if (patch.analysisId !== undefined) await checkAnalysis(project.id, patch.analysisId);
 	if (Object.keys(patch).length)
-		getDb().update(documents).set(patch).where(eq(documents.id, id)).run();
-	return getDocument(actor, id).document;
+		await getDb().update(documents).set(patch).where(eq(documents.id, id));
+	return (await getDocument(actor, id)).document;
 }
 
 /** Hide a document at once (editors); it can be brought back within DOCUMENT_UNDO_MS. */
 export async function deleteDocument(actor: Actor, id: string, now = new Date()) {
-	const { project, document } = getDocument(actor, id);
-	requireRole(actor, project.workshopId, 'editor');
-	getDb().update(documents).set({ deletedAt: now }).where(eq(documents.id, id)).run();
+	const { project, document } = await getDocument(actor, id);
+	await requireRole(actor, project.workshopId, 'editor');
+	await getDb().update(documents).set({ deletedAt: now }).where(eq(documents.id, id));
 	await purgeDeletedDocuments(now);
 	return { document, undoUntil: new Date(+now + DOCUMENT_UNDO_MS) };
 }
 
-export function undoDeleteDocument(actor: Actor, id: string, now = new Date()) {
-	const row = documentRow(id);
-	const { project } = getProject(actor, row.projectId);
-	requireRole(actor, project.workshopId, 'editor');
+export async function undoDeleteDocument(actor: Actor, id: string, now = new Date()) {
+	const row = await documentRow(id);
+	const { project } = await getProject(actor, row.projectId);
+	await requireRole(actor, project.workshopId, 'editor');
 	if (row.deletedAt && +now - +row.deletedAt > DOCUMENT_UNDO_MS)
 		refuse(409, 'This document was deleted too long ago to undo.');
-	getDb().update(documents).set({ deletedAt: null }).where(eq(documents.id, id)).run();
-	return getDocument(actor, id).document;
+	await getDb().update(documents).set({ deletedAt: null }).where(eq(documents.id, id));
+	return (await getDocument(actor, id)).document;
 }
 
 /** Remove the rows and files of documents deleted longer ago than the undo window. */
 export async function purgeDeletedDocuments(now = new Date()) {
 	const db = getDb();
-	const old = db
+	const old = await db
 		.select({ id: documents.id, fileKey: documents.fileKey, thumbKey: documents.thumbKey })
 		.from(documents)
 		.where(
@@ -298,11 +297,10 @@ export async function purgeDeletedDocuments(now = new Date()) {
 				isNotNull(documents.deletedAt),
 				lt(documents.deletedAt, new Date(+now - DOCUMENT_UNDO_MS))
 			)
-		)
-		.all();
+		);
 	for (const doc of old) {
 		// the row first: a crash after it leaves an orphan file for the sweep, never a row without a file
-		db.delete(documents).where(eq(documents.id, doc.id)).run();
+		await db.delete(documents).where(eq(documents.id, doc.id));
 		await removeFiles([doc.fileKey, doc.thumbKey]);
 	}
 	return old.length;
@@ -320,13 +318,10 @@ async function removeFiles(keys: (string | null)[]) {
  */
 export async function sweepOrphanFiles(now = new Date(), graceMs = 10 * 60 * 1000) {
 	await purgeDeletedDocuments(now);
-	const known = new Set(
-		getDb()
-			.select({ fileKey: documents.fileKey, thumbKey: documents.thumbKey })
-			.from(documents)
-			.all()
-			.flatMap((d) => [d.fileKey, d.thumbKey])
-	);
+	const rows = await getDb()
+		.select({ fileKey: documents.fileKey, thumbKey: documents.thumbKey })
+		.from(documents);
+	const known = new Set(rows.flatMap((d) => [d.fileKey, d.thumbKey]));
 	const store = getStore();
 	const stored = await store.list('documents/');
 	const orphans = stored.filter((f) => !known.has(f.key) && +now - +f.modified > graceMs);

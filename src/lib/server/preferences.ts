@@ -1,17 +1,17 @@
 import { eq } from 'drizzle-orm';
 import type { Actor } from './access';
-import { getDb } from './db';
+import { getDb, firstRow } from './db';
 import { users } from './db/schema';
 import { LENGTH_UNITS, type LengthUnit } from '$lib/schemas/preferences';
 
 /** The actor's chosen way of writing lengths (fractional inches to a precision, decimal inches, mm). */
-export function lengthUnitOf(actor: Actor): LengthUnit {
+export async function lengthUnitOf(actor: Actor): Promise<LengthUnit> {
 	if (actor.lengthUnit) return actor.lengthUnit;
-	const row = getDb()
+	const row = await getDb()
 		.select({ u: users.lengthUnit })
 		.from(users)
 		.where(eq(users.id, actor.id))
-		.get();
+		.then(firstRow);
 	return readLengthUnit(row?.u);
 }
 

@@ -7,7 +7,7 @@ import { error } from '@sveltejs/kit';
 import { and, asc, desc, eq, isNull } from 'drizzle-orm';
 import { createHash, randomBytes } from 'node:crypto';
 import type { Actor } from './access';
-import { getDb } from './db';
+import { getDb, firstRow, oneRow, transaction } from './db';
 import { projectAccess, projectInvitations, projects, users, workshops } from './db/schema';
 import { getProject } from './projects';
 
@@ -18,8 +18,8 @@ export function sha256(text: string) {
 }
 
 /** The projects the actor was invited to as a client, newest change first. */
-export function listSharedProjects(actor: Actor) {
-	return getDb()
+export async function listSharedProjects(actor: Actor) {
+	return await getDb()
 		.select({
 			id: projects.id,
 			name: projects.name,
@@ -31,15 +31,14 @@ export function listSharedProjects(actor: Actor) {
 		.innerJoin(projects, eq(projects.id, projectAccess.projectId))
 		.innerJoin(workshops, eq(workshops.id, projects.workshopId))
 		.where(eq(projectAccess.userId, actor.id))
-		.orderBy(desc(projects.updatedAt))
-		.all();
+		.orderBy(desc(projects.updatedAt));
 }
 
 /** Invite someone to read one project (editor). Returns the one-time token, never stored. */
-export function inviteToProject(actor: Actor, projectId: string, email: string) {
-	const { project } = getProject(actor, projectId, 'editor');
+export async function inviteToProject(actor: Actor, projectId: string, email: string) {
+	const { project } = await getProject(actor, projectId, 'editor');
 	const token = randomBytes(32).toString('base64url');
-	const invitation = getDb()
+	const invitation = await getDb()
 		.insert(projectInvitations)
 		.values({
 			projectId,
@@ -49,15 +48,15 @@ export function inviteToProject(actor: Actor, projectId: string, email: string) 
 			expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000)
 		})
 		.returning()
-		.get();
+		.then(oneRow);
 	return { invitation, token, project };
 }
 
 /** Who may read the project as a client, and the invitations not yet accepted (editor). */
-export function listProjectAccess(actor: Actor, projectId: string) {
-	getProject(actor, projectId, 'editor');
+export async function listProjectAccess(actor: Actor, projectId: string) {
+	await getProject(actor, projectId, 'editor');
 	const db = getDb();
-	const people = db
+	const people = await db
 		.select({
 			userId: users.id,
 			name: users.name,
@@ -67,9 +66,8 @@ export function listProjectAccess(actor: Actor, projectId: string) {
 		.from(projectAccess)
 		.innerJoin(users, eq(users.id, projectAccess.userId))
 		.where(eq(projectAccess.projectId, projectId))
-		.orderBy(asc(users.name))
-		.all();
-	const pending = db
+		.orderBy(asc(users.name));
+	const pending = await db
 		.select({
 			id: projectInvitations.id,
 			email: projectInvitations.email,
@@ -77,41 +75,43 @@ export function listProjectAccess(actor: Actor, projectId: string) {
 		})
 		.from(projectInvitations)
 		.where(and(eq(projectInvitations.projectId, projectId), isNull(projectInvitations.acceptedAt)))
-		.orderBy(desc(projectInvitations.createdAt))
-		.all();
+		.orderBy(desc(projectInvitations.createdAt));
 	return { people, pending };
 }
 
 /** Take a client's access to the project away (owner of the workshop). */
-export function revokeProjectAccess(actor: Actor, projectId: string, userId: string) {
-	getProject(actor, projectId, 'owner');
-	const gone = getDb()
+export async function revokeProjectAccess(actor: Actor, projectId: string, userId: string) {
+	await getProject(actor, projectId, 'owner');
+	const gone = await getDb()
 		.delete(projectAccess)
 		.where(and(eq(projectAccess.projectId, projectId), eq(projectAccess.userId, userId)))
 		.returning()
-		.get();
+		.then(firstRow);
 	if (!gone) error(404, 'That person has no access to this project.');
 }
 
 /** Withdraw an invitation not yet accepted (owner). */
-export function revokeProjectInvitation(actor: Actor, projectId: string, invitationId: string) {
-	getProject(actor, projectId, 'owner');
-	getDb()
+export async function revokeProjectInvitation(
+	actor: Actor,
+	projectId: string,
+	invitationId: string
+) {
+	await getProject(actor, projectId, 'owner');
+	await getDb()
 		.delete(projectInvitations)
 		.where(
 			and(eq(projectInvitations.id, invitationId), eq(projectInvitations.projectId, projectId))
-		)
-		.run();
+		);
 }
 
 /** Remove an invitation whose mail could not be sent (the caller just made it). */
-export function withdrawProjectInvitation(invitationId: string) {
-	getDb().delete(projectInvitations).where(eq(projectInvitations.id, invitationId)).run();
+export async function withdrawProjectInvitation(invitationId: string) {
+	await getDb().delete(projectInvitations).where(eq(projectInvitations.id, invitationId));
 }
 
 /** What a project invitation link points at, for the page that offers to accept it. */
-export function findProjectInvitation(token: string) {
-	const row = getDb()
+export async function findProjectInvitation(token: string) {
+	const row = await getDb()
 		.select({
 			id: projectInvitations.id,
 			email: projectInvitations.email,
@@ -126,7 +126,7 @@ export function findProjectInvitation(token: string) {
 		.innerJoin(projects, eq(projects.id, projectInvitations.projectId))
 		.innerJoin(workshops, eq(workshops.id, projects.workshopId))
 		.where(eq(projectInvitations.tokenHash, sha256(token)))
-		.get();
+		.then(firstRow);
 	if (!row) return { state: 'unknown' as const };
 	if (row.acceptedAt) return { state: 'used' as const, invitation: row };
 	if (row.expiresAt.getTime() < Date.now()) return { state: 'expired' as const, invitation: row };
@@ -134,23 +134,23 @@ export function findProjectInvitation(token: string) {
 }
 
 /** Accept a project invitation: the signed-in account must be the one it was sent to. */
-export function acceptProjectInvitation(actor: Actor, token: string) {
-	const found = findProjectInvitation(token);
+export async function acceptProjectInvitation(actor: Actor, token: string) {
+	const found = await findProjectInvitation(token);
 	if (found.state === 'unknown') error(404, 'This invitation link is not known.');
 	if (found.state !== 'open')
 		error(410, `This invitation is ${found.state}. Ask the workshop for a new one.`);
 	const inv = found.invitation;
 	if (inv.email !== actor.email.toLowerCase())
 		error(403, `This invitation was sent to ${inv.email}. Sign in with that address to accept it.`);
-	getDb().transaction((tx) => {
-		tx.insert(projectAccess)
+	await transaction(async (tx) => {
+		await tx
+			.insert(projectAccess)
 			.values({ userId: actor.id, projectId: inv.projectId, grantedBy: inv.invitedBy })
-			.onConflictDoNothing()
-			.run();
-		tx.update(projectInvitations)
+			.onConflictDoNothing();
+		await tx
+			.update(projectInvitations)
 			.set({ acceptedAt: new Date() })
-			.where(eq(projectInvitations.id, inv.id))
-			.run();
+			.where(eq(projectInvitations.id, inv.id));
 	});
 	return inv;
 }

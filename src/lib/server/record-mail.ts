@@ -6,7 +6,7 @@
  */
 import { and, desc, eq } from 'drizzle-orm';
 import type { Actor } from './access';
-import { getDb } from './db';
+import { getDb, firstRow } from './db';
 import { projectAccess, recordSends, users } from './db/schema';
 import { letterHtml, mailDown, sendMail } from './mail';
 import { getProject } from './projects';
@@ -16,13 +16,13 @@ import { createShareLink, revokeShareLink } from './share-links';
 
 const SHARE_DAYS = 30;
 
-function hasAccount(projectId: string, email: string) {
-	return !!getDb()
+async function hasAccount(projectId: string, email: string) {
+	return !!(await getDb()
 		.select({ id: users.id })
 		.from(projectAccess)
 		.innerJoin(users, eq(users.id, projectAccess.userId))
 		.where(and(eq(projectAccess.projectId, projectId), eq(users.email, email.toLowerCase())))
-		.get();
+		.then(firstRow));
 }
 
 function fileName(name: string) {
@@ -40,19 +40,19 @@ export async function sendRecord(
 	body: { to: string; message: string; analysisId?: string },
 	origin: string
 ) {
-	const { project } = getProject(actor, projectId, 'editor');
+	const { project } = await getProject(actor, projectId, 'editor');
 	const { record } = body.analysisId
-		? analysisRecord(actor, projectId, body.analysisId)
-		: projectRecord(actor, projectId);
+		? await analysisRecord(actor, projectId, body.analysisId)
+		: await projectRecord(actor, projectId);
 	const pdf = await renderRecordPdf(record);
 	let link: string;
 	let share: string | null = null;
-	if (hasAccount(projectId, body.to))
+	if (await hasAccount(projectId, body.to))
 		link = body.analysisId
 			? `${origin}/projects/${projectId}/analyses/${body.analysisId}/record`
 			: `${origin}/projects/${projectId}/record`;
 	else {
-		const made = createShareLink(actor, projectId, {
+		const made = await createShareLink(actor, projectId, {
 			days: SHARE_DAYS,
 			analysisId: body.analysisId
 		});
@@ -82,25 +82,24 @@ export async function sendRecord(
 		]
 	}).catch(mailDown);
 	if (!sent) {
-		if (share) revokeShareLink(actor, projectId, share);
+		if (share) await revokeShareLink(actor, projectId, share);
 		return null;
 	}
-	getDb()
+	await getDb()
 		.insert(recordSends)
 		.values({
 			projectId,
 			analysisId: body.analysisId ?? null,
 			to: body.to.toLowerCase(),
 			sentBy: actor.id
-		})
-		.run();
+		});
 	return link;
 }
 
 /** When and to whom the project's records were sent, newest first (anyone who reads the project). */
-export function listRecordSends(actor: Actor, projectId: string) {
-	getProject(actor, projectId, 'viewer');
-	return getDb()
+export async function listRecordSends(actor: Actor, projectId: string) {
+	await getProject(actor, projectId, 'viewer');
+	return await getDb()
 		.select({
 			id: recordSends.id,
 			to: recordSends.to,
@@ -112,6 +111,5 @@ export function listRecordSends(actor: Actor, projectId: string) {
 		.leftJoin(users, eq(users.id, recordSends.sentBy))
 		.where(eq(recordSends.projectId, projectId))
 		.orderBy(desc(recordSends.createdAt))
-		.limit(20)
-		.all();
+		.limit(20);
 }

@@ -7,7 +7,7 @@
 import { error } from '@sveltejs/kit';
 import { and, asc, eq, isNull } from 'drizzle-orm';
 import type { Actor } from './access';
-import { getDb } from './db';
+import { getDb, firstRow } from './db';
 import { analyses, projects, workshops, type AnalysisKind } from './db/schema';
 
 type Project = typeof projects.$inferSelect;
@@ -58,18 +58,20 @@ export interface RecordDoc {
 
 type Row = typeof analyses.$inferSelect;
 
-function buildRecord(
+async function buildRecord(
 	project: Project,
 	rows: Row[],
 	unit: LengthUnit,
 	scope: RecordDoc['scope']
-): RecordDoc {
+): Promise<RecordDoc> {
 	const shop =
-		getDb()
-			.select({ name: workshops.name })
-			.from(workshops)
-			.where(eq(workshops.id, project.workshopId))
-			.get()?.name ?? '';
+		(
+			await getDb()
+				.select({ name: workshops.name })
+				.from(workshops)
+				.where(eq(workshops.id, project.workshopId))
+				.then(firstRow)
+		)?.name ?? '';
 	const notes: RecordNote[] = [];
 	const noteOf = (text: string) => {
 		let note = notes.find((x) => x.text === text);
@@ -111,41 +113,49 @@ function buildRecord(
 	};
 }
 
-function savedRows(projectId: string, analysisId?: string | null) {
+async function savedRows(projectId: string, analysisId?: string | null) {
 	const where = [eq(analyses.projectId, projectId), isNull(analyses.deletedAt)];
 	if (analysisId) where.push(eq(analyses.id, analysisId));
-	const rows = getDb()
+	const rows = await getDb()
 		.select()
 		.from(analyses)
 		.where(and(...where))
-		.orderBy(asc(analyses.createdAt), asc(analyses.id))
-		.all();
+		.orderBy(asc(analyses.createdAt), asc(analyses.id));
 	if (analysisId && !rows.length) error(404, 'Not found.');
 	return rows;
 }
 
 /** The record of every saved analysis of a project (anyone who may read the project). */
-export function projectRecord(actor: Actor, projectId: string) {
-	const { project, role } = getProject(actor, projectId);
+export async function projectRecord(actor: Actor, projectId: string) {
+	const { project, role } = await getProject(actor, projectId);
 	return {
-		record: buildRecord(project, savedRows(projectId), lengthUnitOf(actor), 'project'),
+		record: await buildRecord(
+			project,
+			await savedRows(projectId),
+			await lengthUnitOf(actor),
+			'project'
+		),
 		role
 	};
 }
 
 /** The record of one analysis of a project. */
-export function analysisRecord(actor: Actor, projectId: string, analysisId: string) {
-	const { project, role } = getProject(actor, projectId);
-	const rows = savedRows(projectId, analysisId);
-	return { record: buildRecord(project, rows, lengthUnitOf(actor), 'analysis'), role };
+export async function analysisRecord(actor: Actor, projectId: string, analysisId: string) {
+	const { project, role } = await getProject(actor, projectId);
+	const rows = await savedRows(projectId, analysisId);
+	return { record: await buildRecord(project, rows, await lengthUnitOf(actor), 'analysis'), role };
 }
 
 /** The record a share link opens, in the units of whoever made the link; 404 when it is closed. */
-export function sharedRecord(token: string) {
-	const link = openShareLink(token);
-	const project = getDb().select().from(projects).where(eq(projects.id, link.projectId)).get();
+export async function sharedRecord(token: string) {
+	const link = await openShareLink(token);
+	const project = await getDb()
+		.select()
+		.from(projects)
+		.where(eq(projects.id, link.projectId))
+		.then(firstRow);
 	if (!project) error(404, 'Not found.');
-	const unit = link.createdBy ? lengthUnitOf({ id: link.createdBy } as Actor) : 'frac16';
-	const rows = savedRows(project.id, link.analysisId);
-	return buildRecord(project, rows, unit, link.analysisId ? 'analysis' : 'project');
+	const unit = link.createdBy ? await lengthUnitOf({ id: link.createdBy } as Actor) : 'frac16';
+	const rows = await savedRows(project.id, link.analysisId);
+	return await buildRecord(project, rows, unit, link.analysisId ? 'analysis' : 'project');
 }

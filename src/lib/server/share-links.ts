@@ -7,7 +7,7 @@ import { error } from '@sveltejs/kit';
 import { and, desc, eq, gt, isNull } from 'drizzle-orm';
 import { randomBytes } from 'node:crypto';
 import type { Actor } from './access';
-import { getDb } from './db';
+import { getDb, firstRow, oneRow } from './db';
 import { analyses, shareLinks, users } from './db/schema';
 import { sha256 } from './project-access';
 import { getProject } from './projects';
@@ -15,15 +15,15 @@ import { getProject } from './projects';
 const DAY_MS = 86_400_000;
 
 /** Make a link (editor). Returns the token: it is in the link and nowhere else. */
-export function createShareLink(
+export async function createShareLink(
 	actor: Actor,
 	projectId: string,
 	opts: { days: number; analysisId?: string }
 ) {
-	getProject(actor, projectId, 'editor');
-	if (opts.analysisId) analysisOf(projectId, opts.analysisId);
+	await getProject(actor, projectId, 'editor');
+	if (opts.analysisId) await analysisOf(projectId, opts.analysisId);
 	const token = randomBytes(32).toString('base64url');
-	const link = getDb()
+	const link = await getDb()
 		.insert(shareLinks)
 		.values({
 			projectId,
@@ -33,12 +33,12 @@ export function createShareLink(
 			expiresAt: new Date(Date.now() + opts.days * DAY_MS)
 		})
 		.returning()
-		.get();
+		.then(oneRow);
 	return { link, token };
 }
 
-function analysisOf(projectId: string, analysisId: string) {
-	const row = getDb()
+async function analysisOf(projectId: string, analysisId: string) {
+	const row = await getDb()
 		.select({ id: analyses.id, name: analyses.name })
 		.from(analyses)
 		.where(
@@ -48,15 +48,15 @@ function analysisOf(projectId: string, analysisId: string) {
 				isNull(analyses.deletedAt)
 			)
 		)
-		.get();
+		.then(firstRow);
 	if (!row) error(404, 'Not found.');
 	return row;
 }
 
 /** The project's links still open, newest first (editor); tokens are not kept, so not shown. */
-export function listShareLinks(actor: Actor, projectId: string) {
-	getProject(actor, projectId, 'editor');
-	return getDb()
+export async function listShareLinks(actor: Actor, projectId: string) {
+	await getProject(actor, projectId, 'editor');
+	return await getDb()
 		.select({
 			id: shareLinks.id,
 			analysisId: shareLinks.analysisId,
@@ -75,31 +75,30 @@ export function listShareLinks(actor: Actor, projectId: string) {
 				gt(shareLinks.expiresAt, new Date())
 			)
 		)
-		.orderBy(desc(shareLinks.createdAt))
-		.all();
+		.orderBy(desc(shareLinks.createdAt));
 }
 
 /** Close a link for good (editor). */
-export function revokeShareLink(actor: Actor, projectId: string, linkId: string) {
-	getProject(actor, projectId, 'editor');
-	const row = getDb()
+export async function revokeShareLink(actor: Actor, projectId: string, linkId: string) {
+	await getProject(actor, projectId, 'editor');
+	const row = await getDb()
 		.update(shareLinks)
 		.set({ revokedAt: new Date() })
 		.where(and(eq(shareLinks.id, linkId), eq(shareLinks.projectId, projectId)))
 		.returning()
-		.get();
+		.then(firstRow);
 	if (!row) error(404, 'Not found.');
 }
 
 /** What an open link shows: its project and, for a one-analysis link, the analysis. Else 404. */
-export function openShareLink(token: string) {
+export async function openShareLink(token: string) {
 	// base64url of 32 bytes is 43 characters; anything else cannot be one of ours
 	if (!/^[A-Za-z0-9_-]{43}$/.test(token)) error(404, 'Not found.');
-	const row = getDb()
+	const row = await getDb()
 		.select()
 		.from(shareLinks)
 		.where(eq(shareLinks.tokenHash, sha256(token)))
-		.get();
+		.then(firstRow);
 	if (!row || row.revokedAt || row.expiresAt.getTime() <= Date.now()) error(404, 'Not found.');
 	return { projectId: row.projectId, analysisId: row.analysisId, createdBy: row.createdBy };
 }

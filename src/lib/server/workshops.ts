@@ -2,7 +2,7 @@ import { error } from '@sveltejs/kit';
 import { and, asc, count, desc, eq, isNull } from 'drizzle-orm';
 import { createHash, randomBytes } from 'node:crypto';
 import { requireRole, type Actor } from './access';
-import { getDb } from './db';
+import { getDb, firstRow, oneRow, transaction } from './db';
 import { invitations, memberships, users, workshops, type Role } from './db/schema';
 
 export interface WorkshopSummary {
@@ -13,23 +13,22 @@ export interface WorkshopSummary {
 }
 
 /** Create a workshop with `ownerId` as its owner. Used at sign-up (personal) and by the UI. */
-export function createWorkshopFor(ownerId: string, name: string, personal = false) {
-	const db = getDb();
-	return db.transaction((tx) => {
-		const ws = tx
+export async function createWorkshopFor(ownerId: string, name: string, personal = false) {
+	return transaction(async (tx) => {
+		const ws = await tx
 			.insert(workshops)
 			.values({ name, personal, createdBy: ownerId })
 			.returning()
-			.get();
-		tx.insert(memberships).values({ userId: ownerId, workshopId: ws.id, role: 'owner' }).run();
-		tx.update(users).set({ currentWorkshopId: ws.id }).where(eq(users.id, ownerId)).run();
+			.then(oneRow);
+		await tx.insert(memberships).values({ userId: ownerId, workshopId: ws.id, role: 'owner' });
+		await tx.update(users).set({ currentWorkshopId: ws.id }).where(eq(users.id, ownerId));
 		return ws;
 	});
 }
 
 /** Every workshop the actor belongs to, with their role in it. */
-export function listWorkshops(actor: Actor): WorkshopSummary[] {
-	return getDb()
+export async function listWorkshops(actor: Actor): Promise<WorkshopSummary[]> {
+	return await getDb()
 		.select({
 			id: workshops.id,
 			name: workshops.name,
@@ -39,108 +38,116 @@ export function listWorkshops(actor: Actor): WorkshopSummary[] {
 		.from(memberships)
 		.innerJoin(workshops, eq(workshops.id, memberships.workshopId))
 		.where(eq(memberships.userId, actor.id))
-		.orderBy(asc(workshops.personal), asc(workshops.name))
-		.all();
+		.orderBy(asc(workshops.personal), asc(workshops.name));
 }
 
-export function getWorkshop(actor: Actor, workshopId: string) {
-	const { role } = requireRole(actor, workshopId, 'viewer');
-	const ws = getDb().select().from(workshops).where(eq(workshops.id, workshopId)).get();
+export async function getWorkshop(actor: Actor, workshopId: string) {
+	const { role } = await requireRole(actor, workshopId, 'viewer');
+	const ws = await getDb()
+		.select()
+		.from(workshops)
+		.where(eq(workshops.id, workshopId))
+		.then(firstRow);
 	if (!ws) throw new Error('membership without workshop');
 	return { ...ws, role };
 }
 
-export function membershipOf(userId: string, workshopId: string) {
-	return getDb()
+export async function membershipOf(userId: string, workshopId: string) {
+	return await getDb()
 		.select()
 		.from(memberships)
 		.where(and(eq(memberships.userId, userId), eq(memberships.workshopId, workshopId)))
-		.get();
+		.then(firstRow);
 }
 
 // ---- Owners' business: rename, delete, members, invitations ----
 
-export function renameWorkshop(actor: Actor, workshopId: string, name: string) {
-	requireRole(actor, workshopId, 'owner');
-	return getDb()
+export async function renameWorkshop(actor: Actor, workshopId: string, name: string) {
+	await requireRole(actor, workshopId, 'owner');
+	return await getDb()
 		.update(workshops)
 		.set({ name })
 		.where(eq(workshops.id, workshopId))
 		.returning()
-		.get();
+		.then(firstRow);
 }
 
-export function deleteWorkshop(actor: Actor, workshopId: string) {
-	requireRole(actor, workshopId, 'owner');
+export async function deleteWorkshop(actor: Actor, workshopId: string) {
+	await requireRole(actor, workshopId, 'owner');
 	const db = getDb();
-	const ws = db.select().from(workshops).where(eq(workshops.id, workshopId)).get();
+	const ws = await db.select().from(workshops).where(eq(workshops.id, workshopId)).then(firstRow);
 	if (ws?.personal) error(409, 'A personal workshop cannot be deleted.');
-	db.delete(workshops).where(eq(workshops.id, workshopId)).run();
-	db.update(users)
+	await db.delete(workshops).where(eq(workshops.id, workshopId));
+	await db
+		.update(users)
 		.set({ currentWorkshopId: null })
-		.where(eq(users.currentWorkshopId, workshopId))
-		.run();
+		.where(eq(users.currentWorkshopId, workshopId));
 }
 
 /** Make a workshop the actor's current one (they must belong to it). */
-export function switchWorkshop(actor: Actor, workshopId: string) {
-	requireRole(actor, workshopId, 'viewer');
-	getDb().update(users).set({ currentWorkshopId: workshopId }).where(eq(users.id, actor.id)).run();
+export async function switchWorkshop(actor: Actor, workshopId: string) {
+	await requireRole(actor, workshopId, 'viewer');
+	await getDb().update(users).set({ currentWorkshopId: workshopId }).where(eq(users.id, actor.id));
 }
 
 /** The actor's current workshop: the one they chose last, else their first. */
-export function currentWorkshop(actor: Actor): WorkshopSummary | null {
-	const all = listWorkshops(actor);
-	const chosen = getDb()
-		.select({ id: users.currentWorkshopId })
-		.from(users)
-		.where(eq(users.id, actor.id))
-		.get()?.id;
+export async function currentWorkshop(actor: Actor): Promise<WorkshopSummary | null> {
+	const all = await listWorkshops(actor);
+	const chosen = (
+		await getDb()
+			.select({ id: users.currentWorkshopId })
+			.from(users)
+			.where(eq(users.id, actor.id))
+			.then(firstRow)
+	)?.id;
 	return all.find((w) => w.id === chosen) ?? all[0] ?? null;
 }
 
-export function listMembers(actor: Actor, workshopId: string) {
-	requireRole(actor, workshopId, 'viewer');
-	return getDb()
+export async function listMembers(actor: Actor, workshopId: string) {
+	await requireRole(actor, workshopId, 'viewer');
+	return await getDb()
 		.select({ userId: users.id, name: users.name, email: users.email, role: memberships.role })
 		.from(memberships)
 		.innerJoin(users, eq(users.id, memberships.userId))
 		.where(eq(memberships.workshopId, workshopId))
-		.orderBy(asc(users.name))
-		.all();
+		.orderBy(asc(users.name));
 }
 
-function ownerCount(workshopId: string) {
-	return getDb()
+async function ownerCount(workshopId: string) {
+	const row = await getDb()
 		.select({ n: count() })
 		.from(memberships)
 		.where(and(eq(memberships.workshopId, workshopId), eq(memberships.role, 'owner')))
-		.get()!.n;
+		.then(oneRow);
+	return row.n;
 }
 
-export function changeMemberRole(actor: Actor, workshopId: string, userId: string, role: Role) {
-	requireRole(actor, workshopId, 'owner');
-	const member = membershipOf(userId, workshopId);
+export async function changeMemberRole(
+	actor: Actor,
+	workshopId: string,
+	userId: string,
+	role: Role
+) {
+	await requireRole(actor, workshopId, 'owner');
+	const member = await membershipOf(userId, workshopId);
 	if (!member) error(404, 'That person is not a member here.');
-	if (member.role === 'owner' && role !== 'owner' && ownerCount(workshopId) <= 1)
+	if (member.role === 'owner' && role !== 'owner' && (await ownerCount(workshopId)) <= 1)
 		error(409, 'A workshop needs at least one owner. Make someone else an owner first.');
-	getDb()
+	await getDb()
 		.update(memberships)
 		.set({ role })
-		.where(and(eq(memberships.userId, userId), eq(memberships.workshopId, workshopId)))
-		.run();
+		.where(and(eq(memberships.userId, userId), eq(memberships.workshopId, workshopId)));
 }
 
-export function removeMember(actor: Actor, workshopId: string, userId: string) {
-	requireRole(actor, workshopId, 'owner');
-	const member = membershipOf(userId, workshopId);
+export async function removeMember(actor: Actor, workshopId: string, userId: string) {
+	await requireRole(actor, workshopId, 'owner');
+	const member = await membershipOf(userId, workshopId);
 	if (!member) error(404, 'That person is not a member here.');
-	if (member.role === 'owner' && ownerCount(workshopId) <= 1)
+	if (member.role === 'owner' && (await ownerCount(workshopId)) <= 1)
 		error(409, 'A workshop needs at least one owner.');
-	getDb()
+	await getDb()
 		.delete(memberships)
-		.where(and(eq(memberships.userId, userId), eq(memberships.workshopId, workshopId)))
-		.run();
+		.where(and(eq(memberships.userId, userId), eq(memberships.workshopId, workshopId)));
 }
 
 const INVITATION_DAYS = 7;
@@ -150,10 +157,15 @@ function sha256(text: string) {
 }
 
 /** Invite someone by e-mail with a role. Returns the one-time token (sent by mail, never stored). */
-export function createInvitation(actor: Actor, workshopId: string, email: string, role: Role) {
-	requireRole(actor, workshopId, 'owner');
+export async function createInvitation(
+	actor: Actor,
+	workshopId: string,
+	email: string,
+	role: Role
+) {
+	await requireRole(actor, workshopId, 'owner');
 	const token = randomBytes(24).toString('base64url');
-	const invitation = getDb()
+	const invitation = await getDb()
 		.insert(invitations)
 		.values({
 			workshopId,
@@ -164,31 +176,29 @@ export function createInvitation(actor: Actor, workshopId: string, email: string
 			expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000)
 		})
 		.returning()
-		.get();
+		.then(oneRow);
 	return { invitation, token };
 }
 
-export function listInvitations(actor: Actor, workshopId: string) {
-	requireRole(actor, workshopId, 'owner');
-	return getDb()
+export async function listInvitations(actor: Actor, workshopId: string) {
+	await requireRole(actor, workshopId, 'owner');
+	return await getDb()
 		.select()
 		.from(invitations)
 		.where(and(eq(invitations.workshopId, workshopId), isNull(invitations.acceptedAt)))
-		.orderBy(desc(invitations.createdAt))
-		.all();
+		.orderBy(desc(invitations.createdAt));
 }
 
-export function revokeInvitation(actor: Actor, workshopId: string, invitationId: string) {
-	requireRole(actor, workshopId, 'owner');
-	getDb()
+export async function revokeInvitation(actor: Actor, workshopId: string, invitationId: string) {
+	await requireRole(actor, workshopId, 'owner');
+	await getDb()
 		.delete(invitations)
-		.where(and(eq(invitations.id, invitationId), eq(invitations.workshopId, workshopId)))
-		.run();
+		.where(and(eq(invitations.id, invitationId), eq(invitations.workshopId, workshopId)));
 }
 
 /** What an invitation link points at, for the page that offers to accept it. */
-export function findInvitation(token: string) {
-	const row = getDb()
+export async function findInvitation(token: string) {
+	const row = await getDb()
 		.select({
 			id: invitations.id,
 			email: invitations.email,
@@ -201,7 +211,7 @@ export function findInvitation(token: string) {
 		.from(invitations)
 		.innerJoin(workshops, eq(workshops.id, invitations.workshopId))
 		.where(eq(invitations.tokenHash, sha256(token)))
-		.get();
+		.then(firstRow);
 	if (!row) return { state: 'unknown' as const };
 	if (row.acceptedAt) return { state: 'used' as const, invitation: row };
 	if (row.expiresAt.getTime() < Date.now()) return { state: 'expired' as const, invitation: row };
@@ -221,46 +231,44 @@ export type InvitationOutcome =
  * role the owner chose in the invitation, except that the last owner stays owner (a workshop keeps
  * at least one); the answer says which of these happened.
  */
-export function acceptInvitation(actor: Actor, token: string) {
-	const found = findInvitation(token);
+export async function acceptInvitation(actor: Actor, token: string) {
+	const found = await findInvitation(token);
 	if (found.state === 'unknown') error(404, 'This invitation link is not known.');
 	if (found.state !== 'open')
 		error(410, `This invitation is ${found.state}. Ask the owner for a new one.`);
 	const inv = found.invitation;
 	if (inv.email !== actor.email.toLowerCase())
 		error(403, `This invitation was sent to ${inv.email}. Sign in with that address to accept it.`);
-	const db = getDb();
-	const outcome = db.transaction((tx): InvitationOutcome => {
-		const existing = tx
+	const outcome = await transaction(async (tx): Promise<InvitationOutcome> => {
+		const existing = await tx
 			.select()
 			.from(memberships)
 			.where(and(eq(memberships.userId, actor.id), eq(memberships.workshopId, inv.workshopId)))
-			.get();
+			.then(firstRow);
 		let result: InvitationOutcome;
 		if (!existing) {
-			tx.insert(memberships)
-				.values({ userId: actor.id, workshopId: inv.workshopId, role: inv.role })
-				.run();
+			await tx
+				.insert(memberships)
+				.values({ userId: actor.id, workshopId: inv.workshopId, role: inv.role });
 			result = { kind: 'joined', role: inv.role };
 		} else if (existing.role === inv.role) result = { kind: 'unchanged', role: inv.role };
 		else {
-			const owners = tx
+			const owners = await tx
 				.select({ userId: memberships.userId })
 				.from(memberships)
-				.where(and(eq(memberships.workshopId, inv.workshopId), eq(memberships.role, 'owner')))
-				.all();
+				.where(and(eq(memberships.workshopId, inv.workshopId), eq(memberships.role, 'owner')));
 			if (existing.role === 'owner' && owners.length === 1)
 				result = { kind: 'kept-last-owner', role: 'owner', invited: inv.role };
 			else {
-				tx.update(memberships)
+				await tx
+					.update(memberships)
 					.set({ role: inv.role })
-					.where(and(eq(memberships.userId, actor.id), eq(memberships.workshopId, inv.workshopId)))
-					.run();
+					.where(and(eq(memberships.userId, actor.id), eq(memberships.workshopId, inv.workshopId)));
 				result = { kind: 'role-changed', from: existing.role, role: inv.role };
 			}
 		}
-		tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, inv.id)).run();
-		tx.update(users).set({ currentWorkshopId: inv.workshopId }).where(eq(users.id, actor.id)).run();
+		await tx.update(invitations).set({ acceptedAt: new Date() }).where(eq(invitations.id, inv.id));
+		await tx.update(users).set({ currentWorkshopId: inv.workshopId }).where(eq(users.id, actor.id));
 		return result;
 	});
 	return { ...inv, outcome };

@@ -1,19 +1,19 @@
 import type { Actor } from '../../../src/lib/server/access';
-import { getDb } from '../../../src/lib/server/db';
+import { getDb, oneRow } from '../../../src/lib/server/db';
 import { memberships, projectAccess, users, workshops } from '../../../src/lib/server/db/schema';
 import type { Role } from '../../../src/lib/server/db/schema';
 
 let n = 0;
 
 /** A user row without a password (server tests act for them directly). */
-export function makeUser(label: string): Actor {
+export async function makeUser(label: string): Promise<Actor> {
 	n += 1;
 	const email = `${label}-${n}@example.test`;
-	const row = getDb()
+	const row = await getDb()
 		.insert(users)
 		.values({ name: `${label} ${n}`, email })
 		.returning()
-		.get();
+		.then(oneRow);
 	return { id: row.id, email, name: row.name, via: 'session' };
 }
 
@@ -21,39 +21,39 @@ export function makeUser(label: string): Actor {
  * A workshop with one member in each role, an outsider who belongs to another workshop, and two
  * clients who belong to no workshop of theirs yet (grant them projects with grantProject).
  */
-export function makeWorkshopWithCast() {
+export async function makeWorkshopWithCast() {
 	const db = getDb();
 	const cast = {
-		owner: makeUser('owner'),
-		editor: makeUser('editor'),
-		viewer: makeUser('viewer'),
-		outsider: makeUser('outsider'),
-		client: makeUser('client'),
-		otherClient: makeUser('other-client')
+		owner: await makeUser('owner'),
+		editor: await makeUser('editor'),
+		viewer: await makeUser('viewer'),
+		outsider: await makeUser('outsider'),
+		client: await makeUser('client'),
+		otherClient: await makeUser('other-client')
 	};
-	const ws = db
+	const ws = await db
 		.insert(workshops)
 		.values({ name: `Shop ${n}`, createdBy: cast.owner.id })
 		.returning()
-		.get();
-	const other = db
+		.then(oneRow);
+	const other = await db
 		.insert(workshops)
 		.values({ name: `Other ${n}` })
 		.returning()
-		.get();
+		.then(oneRow);
 	for (const role of ['owner', 'editor', 'viewer'] as Role[])
-		db.insert(memberships)
-			.values({ userId: cast[role as 'owner'].id, workshopId: ws.id, role })
-			.run();
-	db.insert(memberships)
-		.values({ userId: cast.outsider.id, workshopId: other.id, role: 'owner' })
-		.run();
+		await db
+			.insert(memberships)
+			.values({ userId: cast[role as 'owner'].id, workshopId: ws.id, role });
+	await db
+		.insert(memberships)
+		.values({ userId: cast.outsider.id, workshopId: other.id, role: 'owner' });
 	return { workshopId: ws.id, ...cast };
 }
 
 /** Invite a person to one project as its client (what accepting a project invitation does). */
-export function grantProject(user: Actor, projectId: string) {
-	getDb().insert(projectAccess).values({ userId: user.id, projectId }).run();
+export async function grantProject(user: Actor, projectId: string) {
+	await getDb().insert(projectAccess).values({ userId: user.id, projectId });
 }
 
 /** A RequestEvent-like object for calling a +server.ts handler directly. */

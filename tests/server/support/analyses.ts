@@ -25,11 +25,11 @@ export const HAND_SAG_M = 0.00125;
 /** The same shelf with a load that takes it past L/144: 700 N gives 8.75 mm > 1000/144 = 6.94 mm. */
 export const failingShelf = { ...handShelf, loads: [{ kind: 'point', force: 700, at: 0.5 }] };
 
-export function saveShelf(
+export async function saveShelf(
 	actor: Actor,
 	projectId: string,
 	name = 'Hand-worked shelf',
 	input: unknown = handShelf
 ) {
-	return createAnalysis(actor, projectId, { kind: 'shelf', name, input });
+	return await createAnalysis(actor, projectId, { kind: 'shelf', name, input });
 }

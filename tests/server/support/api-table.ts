@@ -45,7 +45,7 @@ const documentOf = async (c: Cast, p: string) =>
 			{ caption: 'Elevation', analysisId: null }
 		)
 	).id;
-function upload(actor: Actor | null, projectId: string) {
+async function upload(actor: Actor | null, projectId: string) {
 	const body = new FormData();
 	body.append('file', new Blob([drawingPdf]), 'section.pdf');
 	body.append('caption', 'Section A');
@@ -59,7 +59,7 @@ function upload(actor: Actor | null, projectId: string) {
 }
 
 export type Who = 'anonymous' | 'viewer' | 'editor' | 'owner' | 'outsider';
-type Cast = ReturnType<typeof makeWorkshopWithCast>;
+type Cast = Awaited<ReturnType<typeof makeWorkshopWithCast>>;
 export interface Row {
 	route: string;
 	call: (actor: Actor | null, cast: Cast, projectId: string) => Promise<Response> | Response;
@@ -138,7 +138,7 @@ export const table: Row[] = [
 // ---- saved analyses: each case saves one (as the owner) in the case's project ----
 const read = { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 404 };
 const write = { anonymous: 401, viewer: 403, editor: 200, owner: 200, outsider: 404 };
-const analysisOf = (c: Cast, projectId: string) => saveShelf(c.owner, projectId).id;
+const analysisOf = async (c: Cast, projectId: string) => (await saveShelf(c.owner, projectId)).id;
 
 table.push(
 	{
@@ -161,17 +161,18 @@ table.push(
 	},
 	{
 		route: 'GET /analyses/{id}',
-		call: (a, c, p) => analysisApi.GET(event({ actor: a, params: { id: analysisOf(c, p) } })),
+		call: async (a, c, p) =>
+			analysisApi.GET(event({ actor: a, params: { id: await analysisOf(c, p) } })),
 		expect: read
 	},
 	{
 		route: 'PATCH /analyses/{id}',
-		call: (a, c, p) =>
+		call: async (a, c, p) =>
 			analysisApi.PATCH(
 				event({
 					actor: a,
 					method: 'PATCH',
-					params: { id: analysisOf(c, p) },
+					params: { id: await analysisOf(c, p) },
 					body: { version: 1, name: 'Renamed' }
 				})
 			),
@@ -179,12 +180,12 @@ table.push(
 	},
 	{
 		route: 'PUT /analyses/{id}',
-		call: (a, c, p) =>
+		call: async (a, c, p) =>
 			analysisApi.PUT(
 				event({
 					actor: a,
 					method: 'PUT',
-					params: { id: analysisOf(c, p) },
+					params: { id: await analysisOf(c, p) },
 					body: { version: 1, name: 'Replaced', input: handShelf }
 				})
 			),
@@ -192,35 +193,38 @@ table.push(
 	},
 	{
 		route: 'DELETE /analyses/{id}',
-		call: (a, c, p) =>
-			analysisApi.DELETE(event({ actor: a, method: 'DELETE', params: { id: analysisOf(c, p) } })),
+		call: async (a, c, p) =>
+			analysisApi.DELETE(
+				event({ actor: a, method: 'DELETE', params: { id: await analysisOf(c, p) } })
+			),
 		expect: write
 	},
 	{
 		route: 'POST /analyses/{id}/undelete',
-		call: (a, c, p) => {
-			const id = analysisOf(c, p);
-			deleteAnalysis(c.owner, id);
+		call: async (a, c, p) => {
+			const id = await analysisOf(c, p);
+			await deleteAnalysis(c.owner, id);
 			return undeleteApi.POST(event({ actor: a, method: 'POST', params: { id } }));
 		},
 		expect: write
 	},
 	{
 		route: 'GET /analyses/{id}/revisions',
-		call: (a, c, p) => revisionsApi.GET(event({ actor: a, params: { id: analysisOf(c, p) } })),
+		call: async (a, c, p) =>
+			revisionsApi.GET(event({ actor: a, params: { id: await analysisOf(c, p) } })),
 		expect: read
 	},
 	{
 		route: 'GET /analyses/{id}/revisions/{version}',
-		call: (a, c, p) =>
-			revisionApi.GET(event({ actor: a, params: { id: analysisOf(c, p), version: '1' } })),
+		call: async (a, c, p) =>
+			revisionApi.GET(event({ actor: a, params: { id: await analysisOf(c, p), version: '1' } })),
 		expect: read
 	},
 	{
 		route: 'POST /analyses/{id}/revisions/{version}',
-		call: (a, c, p) => {
-			const id = analysisOf(c, p);
-			updateAnalysis(c.owner, id, { name: 'Second', version: 1 });
+		call: async (a, c, p) => {
+			const id = await analysisOf(c, p);
+			await updateAnalysis(c.owner, id, { name: 'Second', version: 1 });
 			return revisionApi.POST(
 				event({ actor: a, method: 'POST', params: { id, version: '1' }, body: {} })
 			);
@@ -229,16 +233,16 @@ table.push(
 	},
 	{
 		route: 'POST /analyses/{id}/duplicate',
-		call: (a, c, p) =>
+		call: async (a, c, p) =>
 			duplicateApi.POST(
-				event({ actor: a, method: 'POST', params: { id: analysisOf(c, p) }, body: {} })
+				event({ actor: a, method: 'POST', params: { id: await analysisOf(c, p) }, body: {} })
 			),
 		expect: { ...write, editor: 201, owner: 201 }
 	},
 	{
 		route: 'POST /analyses/{id}/move',
-		call: (a, c, p) => {
-			const target = createProject(c.owner, c.workshopId, {
+		call: async (a, c, p) => {
+			const target = await createProject(c.owner, c.workshopId, {
 				name: 'Hall',
 				client: '',
 				siteNotes: ''
@@ -247,7 +251,7 @@ table.push(
 				event({
 					actor: a,
 					method: 'POST',
-					params: { id: analysisOf(c, p) },
+					params: { id: await analysisOf(c, p) },
 					body: { projectId: target.id }
 				})
 			);
@@ -276,8 +280,8 @@ table.push(
 	},
 	{
 		route: "DELETE /tokens/{id} (the owner's token)",
-		call: (a, c) => {
-			const { id } = createApiToken(c.owner, { name: 'Shop laptop' });
+		call: async (a, c) => {
+			const { id } = await createApiToken(c.owner, { name: 'Shop laptop' });
 			return tokenApi.DELETE(event({ actor: a, method: 'DELETE', params: { id } }));
 		},
 		expect: { anonymous: 401, viewer: 404, editor: 404, owner: 204, outsider: 404 }
@@ -289,7 +293,7 @@ table.push(
 	},
 	{
 		route: 'POST /projects/{id}/documents',
-		call: (a, _c, p) => upload(a, p),
+		call: async (a, _c, p) => await upload(a, p),
 		expect: { anonymous: 401, viewer: 403, editor: 201, owner: 201, outsider: 404 }
 	},
 	{

@@ -1,5 +1,5 @@
 import { and, eq, gt, isNull, or, sql } from 'drizzle-orm';
-import { getDb } from '../db';
+import { getDb, firstRow, transaction } from '../db';
 import { apiTokens, passwordResets, signInFailures, users } from '../db/schema';
 import { mailReady, sendLater, sendPasswordReset } from '../mail';
 import { allowMailTo } from './mail-allowance';
@@ -20,29 +20,28 @@ export async function requestPasswordReset(
 	now = Date.now()
 ): Promise<{ ok: true } | { ok: false; retryAfterMinutes: number }> {
 	// counted for every address, known or not, so the answer gives nothing away
-	const allowed = allowMailTo(email, now);
+	const allowed = await allowMailTo(email, now);
 	if (!allowed.ok) return allowed;
 	// the same for every address: is mail working at all (MailUnavailable when not)
 	await mailReady();
-	const user = findUserByEmail(email);
+	const user = await findUserByEmail(email);
 	if (!user?.email) return { ok: true };
 	const token = randomSecret();
-	getDb()
+	await getDb()
 		.insert(passwordResets)
 		.values({
 			tokenHash: sha256(token),
 			userId: user.id,
 			expiresAt: new Date(now + PASSWORD_RESET_TTL_MS)
-		})
-		.run();
+		});
 	// sent after answering, so a known address takes no longer than an unknown one
 	const to = user.email;
 	sendLater('password reset', () => sendPasswordReset(to, `${origin}/reset/${token}`));
 	return { ok: true };
 }
 
-function liveReset(token: string, now: number) {
-	return getDb()
+async function liveReset(token: string, now: number) {
+	return await getDb()
 		.select()
 		.from(passwordResets)
 		.where(
@@ -52,12 +51,12 @@ function liveReset(token: string, now: number) {
 				gt(passwordResets.expiresAt, new Date(now))
 			)
 		)
-		.get();
+		.then(firstRow);
 }
 
 /** Whether a reset link can still be used (for showing the form or an "expired" note). */
-export function resetTokenIsLive(token: string, now = Date.now()) {
-	return Boolean(liveReset(token, now));
+export async function resetTokenIsLive(token: string, now = Date.now()) {
+	return Boolean(await liveReset(token, now));
 }
 
 /**
@@ -66,12 +65,11 @@ export function resetTokenIsLive(token: string, now = Date.now()) {
  * they fear their password is known, and a token made by whoever knew it must stop working too.
  */
 export async function resetPassword(token: string, newPassword: string, now = Date.now()) {
-	if (!liveReset(token, now)) return false;
+	if (!(await liveReset(token, now))) return false;
 	const passwordHash = await hashPassword(newPassword);
-	const db = getDb();
-	return db.transaction((tx) => {
+	return transaction(async (tx) => {
 		// claim the link atomically, so two tabs cannot both use it
-		const claimed = tx
+		const claimed = await tx
 			.update(passwordResets)
 			.set({ usedAt: new Date(now) })
 			.where(
@@ -82,40 +80,40 @@ export async function resetPassword(token: string, newPassword: string, now = Da
 				)
 			)
 			.returning({ userId: passwordResets.userId })
-			.get();
+			.then(firstRow);
 		if (!claimed) return false;
-		const user = tx
+		const user = await tx
 			.update(users)
 			.set({ passwordHash, sessionsValidFrom: new Date(now) })
 			.where(eq(users.id, claimed.userId))
 			.returning({ email: users.email, emailVerified: users.emailVerified })
-			.get();
+			.then(firstRow);
 		// the mail reached them, so the address is theirs
 		if (user && !user.emailVerified)
-			tx.update(users)
+			await tx
+				.update(users)
 				.set({ emailVerified: new Date(now) })
-				.where(eq(users.id, claimed.userId))
-				.run();
-		tx.update(apiTokens)
+				.where(eq(users.id, claimed.userId));
+		await tx
+			.update(apiTokens)
 			.set({ revokedAt: new Date(now) })
-			.where(and(eq(apiTokens.userId, claimed.userId), isNull(apiTokens.revokedAt)))
-			.run();
+			.where(and(eq(apiTokens.userId, claimed.userId), isNull(apiTokens.revokedAt)));
 		// other links sent earlier stop working too
-		tx.update(passwordResets)
+		await tx
+			.update(passwordResets)
 			.set({ usedAt: new Date(now) })
-			.where(and(eq(passwordResets.userId, claimed.userId), isNull(passwordResets.usedAt)))
-			.run();
+			.where(and(eq(passwordResets.userId, claimed.userId), isNull(passwordResets.usedAt)));
 		// the account's failed sign-ins, from every address, no longer count
 		if (user?.email) {
 			const pairs = pairKeyPrefix(user.email);
-			tx.delete(signInFailures)
+			await tx
+				.delete(signInFailures)
 				.where(
 					or(
 						eq(signInFailures.key, emailKey(user.email)),
 						sql`substr(${signInFailures.key}, 1, ${pairs.length}) = ${pairs}`
 					)
-				)
-				.run();
+				);
 		}
 		return true;
 	});

@@ -6,7 +6,7 @@ const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
 /** The user when the e-mail and password match; null otherwise (no hint which one was wrong). */
 export async function verifyPassword(email: string, password: string): Promise<AccountUser | null> {
-	const user = findUserByEmail(email);
+	const user = await findUserByEmail(email);
 	const ok = await passwordMatches(user?.email ? user.passwordHash : null, password);
 	return ok && user?.email ? { id: user.id, email: user.email, name: user.name } : null;
 }
@@ -22,18 +22,19 @@ export async function passwordSignIn(
 	input: { email: string; password: string },
 	clientAddress: string
 ): Promise<PasswordSignInResult> {
-	const gate = signInGate(input.email, clientAddress);
+	const gate = await signInGate(input.email, clientAddress);
 	if (gate.state === 'refused')
 		return { ok: false, reason: 'throttled', retryAfterMinutes: gate.retryAfterMinutes };
 	if (gate.state === 'slow') await sleep(gate.delayMs);
 	const user = await verifyPassword(input.email, input.password);
 	if (!user) {
-		recordSignInFailure(input.email, clientAddress);
+		await recordSignInFailure(input.email, clientAddress);
 		return { ok: false, reason: 'wrong' };
 	}
-	clearSignInFailures(input.email, clientAddress);
+	await clearSignInFailures(input.email, clientAddress);
 	// An unconfirmed address could be someone else's; invitations are matched by address, so the
 	// address must be proven (by a mailed link) before the password alone lets anyone in.
-	if (!findUserByEmail(user.email)?.emailVerified) return { ok: false, reason: 'unverified' };
+	if (!(await findUserByEmail(user.email))?.emailVerified)
+		return { ok: false, reason: 'unverified' };
 	return { ok: true, user };
 }

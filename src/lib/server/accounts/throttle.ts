@@ -1,5 +1,5 @@
 import { and, desc, eq, gt, inArray, lt } from 'drizzle-orm';
-import { getDb } from '../db';
+import { getDb, transaction } from '../db';
 import { signInFailures } from '../db/schema';
 
 export const SIGN_IN_WINDOW_MS = 15 * 60 * 1000;
@@ -27,16 +27,15 @@ export const pairKeyPrefix = (email: string) => `pair:${email.trim().toLowerCase
 const pairKey = (email: string, address: string) => pairKeyPrefix(email) + address;
 
 /** Times (ms) of the failures counted under `key` within the window, newest first. */
-export function recentFailures(key: string, now: number) {
-	return getDb()
+export async function recentFailures(key: string, now: number) {
+	const rows = await getDb()
 		.select({ at: signInFailures.at })
 		.from(signInFailures)
 		.where(
 			and(eq(signInFailures.key, key), gt(signInFailures.at, new Date(now - SIGN_IN_WINDOW_MS)))
 		)
-		.orderBy(desc(signInFailures.at))
-		.all()
-		.map((r) => r.at.getTime());
+		.orderBy(desc(signInFailures.at));
+	return rows.map((r) => r.at.getTime());
 }
 
 /**
@@ -44,10 +43,14 @@ export function recentFailures(key: string, now: number) {
  * account from this address, or for this address altogether; slowed for the account wherever the
  * failures came from.
  */
-export function signInGate(email: string, clientAddress: string, now = Date.now()): SignInGate {
-	const byEmail = recentFailures(emailKey(email), now);
-	const byPair = recentFailures(pairKey(email, clientAddress), now);
-	const byClient = recentFailures(clientKey(clientAddress), now);
+export async function signInGate(
+	email: string,
+	clientAddress: string,
+	now = Date.now()
+): Promise<SignInGate> {
+	const byEmail = await recentFailures(emailKey(email), now);
+	const byPair = await recentFailures(pairKey(email, clientAddress), now);
+	const byClient = await recentFailures(clientKey(clientAddress), now);
 	const refusedUntil = Math.max(
 		refusedUntilOf(byPair, REFUSE_AFTER_FAILURES),
 		refusedUntilOf(byClient, REFUSE_AFTER_FAILURES_PER_CLIENT)
@@ -68,29 +71,24 @@ export function refusedUntilOf(times: number[], limit: number) {
 	return times.length >= limit ? times[limit - 1] + SIGN_IN_WINDOW_MS : 0;
 }
 
-export function recordSignInFailure(email: string, clientAddress: string, now = Date.now()) {
-	const db = getDb();
+export async function recordSignInFailure(email: string, clientAddress: string, now = Date.now()) {
 	const at = new Date(now);
-	db.transaction((tx) => {
-		tx.insert(signInFailures)
-			.values([
-				{ key: emailKey(email), at },
-				{ key: pairKey(email, clientAddress), at },
-				{ key: clientKey(clientAddress), at }
-			])
-			.run();
+	await transaction(async (tx) => {
+		await tx.insert(signInFailures).values([
+			{ key: emailKey(email), at },
+			{ key: pairKey(email, clientAddress), at },
+			{ key: clientKey(clientAddress), at }
+		]);
 		// keep the table small: what has left the window no longer counts
-		tx.delete(signInFailures)
-			.where(lt(signInFailures.at, new Date(now - SIGN_IN_WINDOW_MS)))
-			.run();
+		await tx.delete(signInFailures).where(lt(signInFailures.at, new Date(now - SIGN_IN_WINDOW_MS)));
 	});
 }
 
 /** After a successful sign-in: the account's count, and its count from this address, start again. */
-export function clearSignInFailures(email: string, clientAddress?: string) {
+export async function clearSignInFailures(email: string, clientAddress?: string) {
 	const keys = [emailKey(email)];
 	if (clientAddress !== undefined) keys.push(pairKey(email, clientAddress));
-	getDb().delete(signInFailures).where(inArray(signInFailures.key, keys)).run();
+	await getDb().delete(signInFailures).where(inArray(signInFailures.key, keys));
 }
 
 export function throttleMessage(retryAfterMinutes: number) {

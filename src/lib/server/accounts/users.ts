@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
 import type { Actor } from '../access';
-import { getDb } from '../db';
+import { getDb, firstRow, isUniqueViolation, oneRow, transaction } from '../db';
 import { users } from '../db/schema';
 import { readLengthUnit } from '../preferences';
 import { createWorkshopFor } from '../workshops';
@@ -26,15 +26,14 @@ export async function createUser(input: {
 }): Promise<AccountUser> {
 	const email = input.email.trim().toLowerCase();
 	const passwordHash = await hashPassword(input.password);
-	const db = getDb();
 	try {
-		return db.transaction((tx) => {
-			const user = tx
+		return await transaction(async (tx) => {
+			const user = await tx
 				.insert(users)
 				.values({ name: input.name.trim(), email, passwordHash })
 				.returning({ id: users.id, email: users.email, name: users.name })
-				.get();
-			createWorkshopFor(user.id, `${input.name.trim()}’s workshop`, true);
+				.then(oneRow);
+			await createWorkshopFor(user.id, `${input.name.trim()}’s workshop`, true);
 			return { id: user.id, email: user.email ?? email, name: user.name };
 		});
 	} catch (e) {
@@ -43,26 +42,24 @@ export async function createUser(input: {
 	}
 }
 
-function isUniqueViolation(e: unknown) {
-	return (
-		typeof e === 'object' &&
-		e !== null &&
-		'code' in e &&
-		String(e.code).startsWith('SQLITE_CONSTRAINT')
-	);
-}
-
-export function findUserByEmail(email: string) {
-	return getDb().select().from(users).where(eq(users.email, email.trim().toLowerCase())).get();
+export async function findUserByEmail(email: string) {
+	return await getDb()
+		.select()
+		.from(users)
+		.where(eq(users.email, email.trim().toLowerCase()))
+		.then(firstRow);
 }
 
 /** The acting user for a user id (from a verified session), or null when the account is gone. */
-export function actorForUserId(id: string, via: Actor['via'] = 'session'): Actor | null {
-	const user = getDb()
+export async function actorForUserId(
+	id: string,
+	via: Actor['via'] = 'session'
+): Promise<Actor | null> {
+	const user = await getDb()
 		.select({ id: users.id, email: users.email, name: users.name, lengthUnit: users.lengthUnit })
 		.from(users)
 		.where(eq(users.id, id))
-		.get();
+		.then(firstRow);
 	if (!user?.email) return null;
 	return {
 		id: user.id,

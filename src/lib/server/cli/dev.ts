@@ -8,7 +8,7 @@ import { ensureAuthSecret } from './secrets';
 
 ensureAuthSecret();
 getDb();
-if (!demoIsSeeded()) {
+if (!(await demoIsSeeded())) {
 	await seedDemo();
 	console.log('Seeded the demo scenario.');
 }

@@ -74,7 +74,7 @@ interface DemoUser {
 }
 
 /** Save the demo analyses in the seeded projects (by name); returns the ids of what was saved. */
-export function seedDemoAnalyses(projectIds: Record<string, string>, users: DemoUser[]) {
+export async function seedDemoAnalyses(projectIds: Record<string, string>, users: DemoUser[]) {
 	const actor = (role: DemoUser['role']): Actor => {
 		const u = users.find((x) => x.role === role)!;
 		return { id: u.id, email: u.email, name: u.name, via: 'session' };
@@ -83,26 +83,31 @@ export function seedDemoAnalyses(projectIds: Record<string, string>, users: Demo
 	const library = projectIds['Whitlock library wall'];
 	const school = projectIds['Harbour Street school reading nook'];
 	const pantry = projectIds['Kiln Lane pantry'];
-	const save = (
+	const save = async (
 		projectId: string,
 		kind: 'shelf' | 'comparison' | 'joint' | 'case' | 'wall',
 		name: string,
 		input: unknown
-	) => createAnalysis(tomas, projectId, { kind, name, input }).id;
+	) => (await createAnalysis(tomas, projectId, { kind, name, input })).id;
 
-	const shelf = save(library, 'shelf', 'Left bookcase, middle shelf', {
+	const shelf = await save(library, 'shelf', 'Left bookcase, middle shelf', {
 		...libraryShelf,
 		edges: []
 	});
 	// Ines added the oak nosing after the first check: version 2 of the same shelf
-	updateAnalysis(actor('owner'), shelf, { input: libraryShelf, version: 1 });
+	await updateAnalysis(actor('owner'), shelf, { input: libraryShelf, version: 1 });
 	return [
 		shelf,
-		save(library, 'comparison', 'Shelf stock for the library wall', libraryComparison),
-		save(library, 'joint', 'Fixed shelf to case side', fixedShelfJoint),
-		save(pantry, 'shelf', 'Deep pantry shelf, appliance bay', pantryShelf),
-		save(school, 'case', 'Teacher cabinet', teacherCabinet),
+		await save(library, 'comparison', 'Shelf stock for the library wall', libraryComparison),
+		await save(library, 'joint', 'Fixed shelf to case side', fixedShelfJoint),
+		await save(pantry, 'shelf', 'Deep pantry shelf, appliance bay', pantryShelf),
+		await save(school, 'case', 'Teacher cabinet', teacherCabinet),
 		// a scenario of our own: two tall bookcases and two low drawer units, side by side
-		save(library, 'wall', 'Living-room wall, four units', toInput(defaultWall('frac16'), 'frac16'))
+		await save(
+			library,
+			'wall',
+			'Living-room wall, four units',
+			toInput(defaultWall('frac16'), 'frac16')
+		)
 	];
 }

@@ -1,6 +1,6 @@
 import { eq, inArray } from 'drizzle-orm';
 import { createUser } from '../accounts/users';
-import { getDb } from '../db';
+import { getDb, firstRow, oneRow } from '../db';
 import { memberships, projectAccess, projects, users, workshops } from '../db/schema';
 import { DEMO_ACCOUNTS } from './accounts';
 import { seedDemoAnalyses } from './analyses';
@@ -34,11 +34,11 @@ const DEMO_PROJECTS = [
 export async function seedDemo() {
 	const db = getDb();
 	const emails = DEMO_ACCOUNTS.map((a) => a.email);
-	const old = db.select({ id: users.id }).from(users).where(inArray(users.email, emails)).all();
+	const old = await db.select({ id: users.id }).from(users).where(inArray(users.email, emails));
 	if (old.length) {
 		const ids = old.map((u) => u.id);
-		db.delete(workshops).where(inArray(workshops.createdBy, ids)).run();
-		db.delete(users).where(inArray(users.id, ids)).run();
+		await db.delete(workshops).where(inArray(workshops.createdBy, ids));
+		await db.delete(users).where(inArray(users.id, ids));
 	}
 
 	const created = [];
@@ -48,28 +48,28 @@ export async function seedDemo() {
 			email: account.email,
 			password: account.password
 		});
-		db.update(users).set({ emailVerified: new Date() }).where(eq(users.id, user.id)).run();
+		await db.update(users).set({ emailVerified: new Date() }).where(eq(users.id, user.id));
 		created.push({ ...account, id: user.id });
 	}
 	const owner = created.find((a) => a.role === 'owner')!;
-	const shop = db
+	const shop = await db
 		.insert(workshops)
 		.values({ name: DEMO_WORKSHOP, createdBy: owner.id })
 		.returning()
-		.get();
+		.then(oneRow);
 	for (const member of created) {
 		if (member.role === 'client') continue;
-		db.insert(memberships)
-			.values({ userId: member.id, workshopId: shop.id, role: member.role })
-			.run();
-		db.update(users).set({ currentWorkshopId: shop.id }).where(eq(users.id, member.id)).run();
+		await db
+			.insert(memberships)
+			.values({ userId: member.id, workshopId: shop.id, role: member.role });
+		await db.update(users).set({ currentWorkshopId: shop.id }).where(eq(users.id, member.id));
 	}
 	// Dana is a client, not a builder: she reads her own project of Quillfeather's; her own
 	// workshop remains empty.
 	const editor = created.find((a) => a.role === 'editor')!;
 	const projectIds: Record<string, string> = {};
-	DEMO_PROJECTS.forEach((p, i) => {
-		const row = db
+	for (const [i, p] of DEMO_PROJECTS.entries()) {
+		const row = await db
 			.insert(projects)
 			.values({
 				...p,
@@ -78,26 +78,24 @@ export async function seedDemo() {
 				updatedAt: new Date(Date.now() - i * 86_400_000)
 			})
 			.returning()
-			.get();
+			.then(oneRow);
 		projectIds[p.name] = row.id;
-	});
+	}
 	const client = created.find((a) => a.role === 'client')!;
-	db.insert(projectAccess)
-		.values({
-			userId: client.id,
-			projectId: projectIds['Whitlock library wall'],
-			grantedBy: owner.id
-		})
-		.run();
-	const analysisIds = seedDemoAnalyses(projectIds, created);
+	await db.insert(projectAccess).values({
+		userId: client.id,
+		projectId: projectIds['Whitlock library wall'],
+		grantedBy: owner.id
+	});
+	const analysisIds = await seedDemoAnalyses(projectIds, created);
 	return { workshopId: shop.id, users: created, projectIds, analysisIds };
 }
 
 /** True when the demo scenario is already in the database. */
-export function demoIsSeeded() {
-	return !!getDb()
+export async function demoIsSeeded() {
+	return !!(await getDb()
 		.select({ id: users.id })
 		.from(users)
 		.where(eq(users.email, DEMO_ACCOUNTS[0].email))
-		.get();
+		.then(firstRow));
 }

@@ -22,7 +22,7 @@ import { readForm } from '$lib/server/form-body';
 
 export const load: PageServerLoad = async ({ locals }) => {
 	if (!locals.actor) redirect(303, '/signin?next=/account');
-	const profile = getProfile(locals.actor);
+	const profile = await getProfile(locals.actor);
 	return {
 		email: profile.email,
 		profile: await superValidate(
@@ -31,7 +31,7 @@ export const load: PageServerLoad = async ({ locals }) => {
 			{ id: 'profile' }
 		),
 		newToken: await superValidate(zod4(apiTokenCreateSchema), { id: 'token' }),
-		tokens: listApiTokens(locals.actor),
+		tokens: await listApiTokens(locals.actor),
 		everywhere: await superValidate({ revokeTokens: true }, zod4(signOutEverywhereSchema), {
 			id: 'everywhere'
 		})
@@ -45,7 +45,7 @@ export const actions: Actions = {
 			id: 'profile'
 		});
 		if (!form.valid) return fail(400, { form });
-		updateProfile(actor, form.data);
+		await updateProfile(actor, form.data);
 		return message(form, 'Saved.');
 	},
 
@@ -55,7 +55,7 @@ export const actions: Actions = {
 			id: 'token'
 		});
 		if (!form.valid) return fail(400, { form });
-		const token = createApiToken(actor, form.data);
+		const token = await createApiToken(actor, form.data);
 		// Shown once, in this answer only (not in a redirect URL): it is stored only as a hash.
 		return message(form, { name: token.name, secret: token.secret });
 	},
@@ -64,7 +64,7 @@ export const actions: Actions = {
 		const actor = requireActor(locals.actor);
 		const form = await superValidate(await readForm(request), zod4(apiTokenRevokeSchema));
 		if (!form.valid) return fail(400, { form });
-		if (!revokeApiToken(actor, form.data.id))
+		if (!(await revokeApiToken(actor, form.data.id)))
 			return fail(404, {
 				form,
 				revokeError: 'That token was not found; it may be revoked already.'
@@ -79,8 +79,8 @@ export const actions: Actions = {
 			id: 'everywhere'
 		});
 		if (!form.valid) return fail(400, { everywhere: form });
-		endAllSessions(actor.id);
-		if (form.data.revokeTokens) revokeAllApiTokens(actor.id);
+		await endAllSessions(actor.id);
+		if (form.data.revokeTokens) await revokeAllApiTokens(actor.id);
 		await signOutOf(event);
 		redirect(
 			303,

@@ -14,18 +14,18 @@ export const load: PageServerLoad = async ({ locals }) => {
 	return {
 		createForm: await superValidate(zod4(projectSchema)),
 		// projects of other workshops the actor was invited to as a client
-		shared: listSharedProjects(actor)
+		shared: await listSharedProjects(actor)
 	};
 };
 
 export const actions: Actions = {
 	create: async ({ locals, request }) => {
 		const actor = requireActor(locals.actor);
-		const ws = currentWorkshop(actor);
+		const ws = await currentWorkshop(actor);
 		if (!ws) error(404, 'You belong to no workshop yet.');
 		const form = await superValidate(await readForm(request), zod4(projectSchema));
 		if (!form.valid) return fail(400, { createForm: form });
-		const project = createProject(actor, ws.id, form.data);
+		const project = await createProject(actor, ws.id, form.data);
 		redirect(303, `/projects/${project.id}`);
 	}
 };

@@ -12,11 +12,11 @@ import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/form-body';
 
 export const load: PageServerLoad = async ({ locals }) => {
-	const { actor, ws } = current(locals);
+	const { actor, ws } = await current(locals);
 	const isOwner = ws.role === 'owner';
 	return {
-		members: workshops.listMembers(actor, ws.id),
-		invitations: isOwner ? workshops.listInvitations(actor, ws.id) : [],
+		members: await workshops.listMembers(actor, ws.id),
+		invitations: isOwner ? await workshops.listInvitations(actor, ws.id) : [],
 		renameForm: await superValidate({ name: ws.name }, zod4(workshopNameSchema), { id: 'rename' }),
 		createForm: await superValidate(zod4(workshopNameSchema), { id: 'create' }),
 		inviteForm: await superValidate(zod4(invitationSchema), { id: 'invite' })
@@ -27,16 +27,16 @@ export const actions: Actions = {
 	switch: async ({ locals, request, url }) => {
 		const actor = requireActor(locals.actor);
 		const id = String((await readForm(request)).get('workshopId') ?? '');
-		workshops.switchWorkshop(actor, id);
+		await workshops.switchWorkshop(actor, id);
 		redirect(303, safeRedirectPath(url.searchParams.get('next'), '/projects'));
 	},
 	rename: async ({ locals, request }) => {
-		const { actor, ws } = current(locals);
+		const { actor, ws } = await current(locals);
 		const form = await superValidate(await readForm(request), zod4(workshopNameSchema), {
 			id: 'rename'
 		});
 		if (!form.valid) return fail(400, { renameForm: form });
-		workshops.renameWorkshop(actor, ws.id, form.data.name);
+		await workshops.renameWorkshop(actor, ws.id, form.data.name);
 		return message(form, 'Renamed.');
 	},
 	create: async ({ locals, request }) => {
@@ -45,16 +45,16 @@ export const actions: Actions = {
 			id: 'create'
 		});
 		if (!form.valid) return fail(400, { createForm: form });
-		workshops.createWorkshopFor(actor.id, form.data.name);
+		await workshops.createWorkshopFor(actor.id, form.data.name);
 		redirect(303, '/workshop');
 	},
 	invite: async ({ locals, request, url }) => {
-		const { actor, ws } = current(locals);
+		const { actor, ws } = await current(locals);
 		const form = await superValidate(await readForm(request), zod4(invitationSchema), {
 			id: 'invite'
 		});
 		if (!form.valid) return fail(400, { inviteForm: form });
-		const { invitation, token } = workshops.createInvitation(
+		const { invitation, token } = await workshops.createInvitation(
 			actor,
 			ws.id,
 			form.data.email,
@@ -68,7 +68,7 @@ export const actions: Actions = {
 			link: `${linkOrigin(url)}/invite/${token}`
 		});
 		if (!sent) {
-			workshops.revokeInvitation(actor, ws.id, invitation.id);
+			await workshops.revokeInvitation(actor, ws.id, invitation.id);
 			return message(form, MAIL_UNAVAILABLE_MESSAGE, { status: 503 });
 		}
 		return message(form, `Invitation sent to ${form.data.email}.`);
@@ -76,10 +76,10 @@ export const actions: Actions = {
 	...memberActions,
 	// without JavaScript the first press asks again on the page (the dialog does it in the browser)
 	delete: async ({ locals, request }) => {
-		const { actor, ws } = current(locals);
+		const { actor, ws } = await current(locals);
 		const form = await superValidate(await readForm(request), zod4(confirmSchema));
 		if (form.data.confirm !== 'yes') return { confirmDelete: true };
-		workshops.deleteWorkshop(actor, ws.id);
+		await workshops.deleteWorkshop(actor, ws.id);
 		redirect(303, '/projects');
 	}
 };

@@ -13,33 +13,33 @@ import {
 } from '$lib/schemas/workshop';
 
 /** The actor and their current workshop (404 when they belong to none). */
-export function current(locals: App.Locals) {
+export async function current(locals: App.Locals) {
 	const actor = requireActor(locals.actor);
-	const ws = workshops.currentWorkshop(actor);
+	const ws = await workshops.currentWorkshop(actor);
 	if (!ws) error(404, 'You belong to no workshop yet.');
 	return { actor, ws };
 }
 
 export const memberActions = {
 	role: async ({ locals, request }: RequestEvent) => {
-		const { actor, ws } = current(locals);
+		const { actor, ws } = await current(locals);
 		const form = await superValidate(await readForm(request), zod4(memberRoleSchema));
 		if (!form.valid) return fail(400, { memberError: 'Choose a role.' });
-		workshops.changeMemberRole(actor, ws.id, form.data.userId, form.data.role);
+		await workshops.changeMemberRole(actor, ws.id, form.data.userId, form.data.role);
 		return { memberMessage: 'Role changed.' };
 	},
 	remove: async ({ locals, request }: RequestEvent) => {
-		const { actor, ws } = current(locals);
+		const { actor, ws } = await current(locals);
 		const form = await superValidate(await readForm(request), zod4(memberRemoveSchema));
 		if (!form.valid) return fail(400, { memberError: 'Choose a member.' });
-		workshops.removeMember(actor, ws.id, form.data.userId);
+		await workshops.removeMember(actor, ws.id, form.data.userId);
 		return { memberMessage: 'Member removed.' };
 	},
 	revoke: async ({ locals, request }: RequestEvent) => {
-		const { actor, ws } = current(locals);
+		const { actor, ws } = await current(locals);
 		const form = await superValidate(await readForm(request), zod4(invitationRevokeSchema));
 		if (!form.valid) return fail(400, { memberError: 'Choose an invitation.' });
-		workshops.revokeInvitation(actor, ws.id, form.data.id);
+		await workshops.revokeInvitation(actor, ws.id, form.data.id);
 		return { memberMessage: 'Invitation withdrawn.' };
 	}
 };

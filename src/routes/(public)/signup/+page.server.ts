@@ -44,7 +44,7 @@ export const actions: Actions = {
 		// The same answer, in the same time, whether or not the address has an account: the letters
 		// go after answering, and a known address costs a password hash too.
 		let created = false;
-		if (!findUserByEmail(email)) {
+		if (!(await findUserByEmail(email))) {
 			try {
 				await createUser({ name: form.data.name, email, password: form.data.password });
 				created = true;

@@ -3,8 +3,8 @@ import { requireActor } from '$lib/server/access';
 import { acceptInvitation, findInvitation } from '$lib/server/workshops';
 import type { Actions, PageServerLoad } from './$types';
 
-export const load: PageServerLoad = ({ params, locals }) => {
-	const found = findInvitation(params.token);
+export const load: PageServerLoad = async ({ params, locals }) => {
+	const found = await findInvitation(params.token);
 	if (found.state === 'unknown') error(404, 'This invitation link is not known.');
 	const inv = found.invitation;
 	return {
@@ -18,7 +18,7 @@ export const load: PageServerLoad = ({ params, locals }) => {
 
 export const actions: Actions = {
 	accept: async ({ params, locals }) => {
-		const { outcome } = acceptInvitation(requireActor(locals.actor), params.token);
+		const { outcome } = await acceptInvitation(requireActor(locals.actor), params.token);
 		// a newcomer goes straight in; a member whose role changed (or could not) is told first
 		if (outcome.kind === 'joined') redirect(303, '/projects');
 		return { outcome };

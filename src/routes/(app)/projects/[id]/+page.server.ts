@@ -15,29 +15,31 @@ import { readForm } from '$lib/server/form-body';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
 	const actor = requireActor(locals.actor);
-	const { project, role } = getProject(actor, params.id);
+	const { project, role } = await getProject(actor, params.id);
 	// where an editor may move an analysis: the other projects of this workshop
 	const otherProjects = !canEdit(role)
 		? []
-		: listProjects(actor, {
-				workshop: project.workshopId,
-				q: '',
-				sort: 'name',
-				dir: 'asc',
-				page: 1,
-				perPage: 100
-			})
-				.items.filter((p) => p.id !== project.id)
+		: (
+				await listProjects(actor, {
+					workshop: project.workshopId,
+					q: '',
+					sort: 'name',
+					dir: 'asc',
+					page: 1,
+					perPage: 100
+				})
+			).items
+				.filter((p) => p.id !== project.id)
 				.map((p) => ({ id: p.id, name: p.name }));
 	return {
 		project,
 		role,
 		otherProjects,
-		documents: listDocuments(actor, project.id),
+		documents: await listDocuments(actor, project.id),
 		editForm: await superValidate(project, zod4(projectSchema)),
 		// who reads it as a client, and where its records went (editors and owners)
-		clients: canEdit(role) ? listProjectAccess(actor, project.id) : null,
-		sends: canEdit(role) ? listRecordSends(actor, project.id) : [],
+		clients: canEdit(role) ? await listProjectAccess(actor, project.id) : null,
+		sends: canEdit(role) ? await listRecordSends(actor, project.id) : [],
 		clientForm: await superValidate(zod4(clientInviteSchema), { id: 'client' })
 	};
 };
@@ -47,7 +49,7 @@ export const actions: Actions = {
 		const actor = requireActor(locals.actor);
 		const form = await superValidate(await readForm(request), zod4(projectSchema));
 		if (!form.valid) return fail(400, { editForm: form });
-		updateProject(actor, params.id, form.data);
+		await updateProject(actor, params.id, form.data);
 		return message(form, 'Saved.');
 	},
 	// without JavaScript the first press asks again on the page (the dialog does it in the browser)

@@ -22,9 +22,9 @@ async function read<S extends z.ZodType>(event: RequestEvent, schema: S) {
 }
 
 /** Run a data-module call; its refusals (409, 422) become the table's notice, not an error page. */
-function attempt<T>(run: () => T) {
+async function attempt<T>(run: () => Promise<T>) {
 	try {
-		return { ok: true as const, value: run() };
+		return { ok: true as const, value: await run() };
 	} catch (e) {
 		if (e instanceof AnalysisProblem)
 			return { ok: false as const, failure: fail(e.status, notice(e.message)) };
@@ -43,33 +43,35 @@ export const analysisRowActions = {
 	duplicate: async (event: RequestEvent) => {
 		const { actor, parsed } = await read(event, analysisRowSchema);
 		if (!parsed.success) return invalid('Choose an analysis to copy.');
-		const done = attempt(() => duplicateAnalysis(actor, parsed.data.analysisId));
+		const done = await attempt(async () => await duplicateAnalysis(actor, parsed.data.analysisId));
 		if (!done.ok) return done.failure;
 		return notice(`Copied as “${done.value.name}”.`);
 	},
 	move: async (event: RequestEvent) => {
 		const { actor, parsed } = await read(event, analysisRowMoveSchema);
 		if (!parsed.success) return invalid('Choose the project to move it to.');
-		const done = attempt(() => moveAnalysis(actor, parsed.data.analysisId, parsed.data.projectId));
+		const done = await attempt(
+			async () => await moveAnalysis(actor, parsed.data.analysisId, parsed.data.projectId)
+		);
 		if (!done.ok) return done.failure;
-		const to = getProject(actor, parsed.data.projectId).project.name;
+		const to = (await getProject(actor, parsed.data.projectId)).project.name;
 		return notice(`Moved “${done.value.name}” to ${to}.`);
 	},
 	deleteAnalysis: async (event: RequestEvent) => {
 		const { actor, parsed } = await read(event, analysisRowSchema);
 		if (!parsed.success) return invalid('Choose an analysis to delete.');
-		const { analysis } = getAnalysis(actor, parsed.data.analysisId);
+		const { analysis } = await getAnalysis(actor, parsed.data.analysisId);
 		const row = { id: analysis.id, name: analysis.name };
 		// without JavaScript, the first press asks again on the page
 		if (parsed.data.confirm !== 'yes') return { confirmDelete: row };
-		const done = attempt(() => deleteAnalysis(actor, row.id));
+		const done = await attempt(async () => await deleteAnalysis(actor, row.id));
 		if (!done.ok) return done.failure;
 		return notice(`Deleted “${row.name}”.`, row);
 	},
 	undelete: async (event: RequestEvent) => {
 		const { actor, parsed } = await read(event, analysisRowSchema);
 		if (!parsed.success) return invalid('Choose an analysis to bring back.');
-		const done = attempt(() => undoDelete(actor, parsed.data.analysisId));
+		const done = await attempt(async () => await undoDelete(actor, parsed.data.analysisId));
 		if (!done.ok) return done.failure;
 		return notice(`Brought back “${done.value.name}”.`);
 	}

@@ -21,7 +21,7 @@ export const clientActions = {
 			id: 'client'
 		});
 		if (!form.valid) return fail(400, { clientForm: form });
-		const { invitation, token, project } = access.inviteToProject(
+		const { invitation, token, project } = await access.inviteToProject(
 			actor,
 			params.id!,
 			form.data.email
@@ -33,7 +33,7 @@ export const clientActions = {
 			link: `${linkOrigin(url)}/invite/project/${token}`
 		});
 		if (!sent) {
-			access.withdrawProjectInvitation(invitation.id);
+			await access.withdrawProjectInvitation(invitation.id);
 			return message(form, MAIL_UNAVAILABLE_MESSAGE, { status: 503 });
 		}
 		return message(form, `Invitation sent to ${form.data.email}.`);
@@ -41,13 +41,13 @@ export const clientActions = {
 	revokeClient: async ({ locals, params, request }: RequestEvent) => {
 		const parsed = await idOf(request);
 		if (!parsed.success) return fail(400, { error: 'Whose access?' });
-		access.revokeProjectAccess(requireActor(locals.actor), params.id!, parsed.data.id);
+		await access.revokeProjectAccess(requireActor(locals.actor), params.id!, parsed.data.id);
 		return { revoked: true };
 	},
 	withdrawClientInvite: async ({ locals, params, request }: RequestEvent) => {
 		const parsed = await idOf(request);
 		if (!parsed.success) return fail(400, { error: 'Which invitation?' });
-		access.revokeProjectInvitation(requireActor(locals.actor), params.id!, parsed.data.id);
+		await access.revokeProjectInvitation(requireActor(locals.actor), params.id!, parsed.data.id);
 		return { withdrawn: true };
 	}
 };

@@ -21,7 +21,7 @@ export async function recordPanel(
 ) {
 	if (!canEdit(role)) return null;
 	const actor = requireActor(event.locals.actor);
-	const links = listShareLinks(actor, event.params.id!).filter(
+	const links = (await listShareLinks(actor, event.params.id!)).filter(
 		(l) => (l.analysisId ?? undefined) === analysisId
 	);
 	return {
@@ -45,14 +45,14 @@ export const recordActions = {
 			id: 'share'
 		});
 		if (!form.valid) return fail(400, { shareForm: form });
-		const { token } = createShareLink(actor, params.id!, form.data);
+		const { token } = await createShareLink(actor, params.id!, form.data);
 		return message(form, `${linkOrigin(url)}/shared/${token}`);
 	},
 	unshare: async ({ locals, params, request }: RequestEvent) => {
 		const actor = requireActor(locals.actor);
 		const parsed = accessIdSchema.safeParse(Object.fromEntries(await readForm(request)));
 		if (!parsed.success) return fail(400, { error: 'Which link?' });
-		revokeShareLink(actor, params.id!, parsed.data.id);
+		await revokeShareLink(actor, params.id!, parsed.data.id);
 		return { closed: true };
 	},
 	mail: async ({ locals, params, request, url }: RequestEvent) => {

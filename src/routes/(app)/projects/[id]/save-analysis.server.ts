@@ -43,11 +43,11 @@ export async function saveAnalysis(event: RequestEvent, kind: AnalysisKind, anal
 	let id: string;
 	try {
 		if (analysisId) {
-			const saved = updateAnalysis(actor, analysisId, { name, input, version: version ?? 1 });
+			const saved = await updateAnalysis(actor, analysisId, { name, input, version: version ?? 1 });
 			form.data.version = saved.version;
 			return message(form, { text: 'Saved.', ok: true });
 		}
-		id = createAnalysis(actor, projectId, { kind, name, input }).id;
+		id = (await createAnalysis(actor, projectId, { kind, name, input })).id;
 	} catch (e) {
 		if (e instanceof AnalysisProblem)
 			return message(form, { text: refusal(e), ok: false } satisfies SaveMessage, {
@@ -64,8 +64,8 @@ export async function loadNewAnalysis(
 	kind: AnalysisKind
 ) {
 	const actor = requireActor(event.locals.actor);
-	const { project } = getProject(actor, event.params.id!);
-	const { role } = requireRole(actor, project.workshopId, 'editor');
+	const { project } = await getProject(actor, event.params.id!);
+	const { role } = await requireRole(actor, project.workshopId, 'editor');
 	return {
 		project: { id: project.id, name: project.name },
 		role,
@@ -78,7 +78,7 @@ export async function loadSavedAnalysis(
 	event: Pick<RequestEvent, 'locals' | 'params'>,
 	kind: AnalysisKind
 ) {
-	const { analysis, project, role } = getAnalysis(
+	const { analysis, project, role } = await getAnalysis(
 		requireActor(event.locals.actor),
 		event.params.analysisId!
 	);

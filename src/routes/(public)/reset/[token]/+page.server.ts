@@ -9,7 +9,7 @@ import { readForm } from '$lib/server/form-body';
 const EXPIRED = 'This link has expired or was already used. Ask for a new one.';
 
 export const load: PageServerLoad = async ({ params }) => ({
-	live: resetTokenIsLive(params.token),
+	live: await resetTokenIsLive(params.token),
 	form: await superValidate(zod4(resetPasswordSchema))
 });
 

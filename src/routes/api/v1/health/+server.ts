@@ -1,9 +1,8 @@
 import { json } from '@sveltejs/kit';
-import { sql } from 'drizzle-orm';
-import { getDb } from '$lib/server/db';
+import { ping } from '$lib/server/db';
 import { version } from '../../../../../package.json';
 
-export const GET = () => {
-	getDb().get(sql`select 1`);
+export const GET = async () => {
+	await ping();
 	return json({ status: 'ok', version });
 };

@@ -5,11 +5,11 @@ import { api, readJson, readQuery } from '$lib/server/http';
 import { createProject, listProjects } from '$lib/server/projects';
 import { projectCreateSchema, projectListQuerySchema } from '$lib/schemas/project';
 
-export const GET: RequestHandler = api(({ locals, url }) => {
+export const GET: RequestHandler = api(async ({ locals, url }) => {
 	const actor = requireActor(locals.actor);
 	const query = readQuery(url, projectListQuerySchema);
 	if (!query.ok) return query.response;
-	return json(listProjects(actor, query.data));
+	return json(await listProjects(actor, query.data));
 });
 
 export const POST: RequestHandler = api(async ({ locals, request }) => {
@@ -17,5 +17,5 @@ export const POST: RequestHandler = api(async ({ locals, request }) => {
 	const body = await readJson(request, projectCreateSchema);
 	if (!body.ok) return body.response;
 	const { workshopId, ...input } = body.data;
-	return json(createProject(actor, workshopId, input), { status: 201 });
+	return json(await createProject(actor, workshopId, input), { status: 201 });
 });

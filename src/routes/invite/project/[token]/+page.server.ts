@@ -5,8 +5,8 @@ import type { Actions, PageServerLoad } from './$types';
 
 // An invitation to read one project as its client: sign in or sign up with the address it was
 // sent to, then accept; the project opens.
-export const load: PageServerLoad = ({ params, locals }) => {
-	const found = findProjectInvitation(params.token);
+export const load: PageServerLoad = async ({ params, locals }) => {
+	const found = await findProjectInvitation(params.token);
 	if (found.state === 'unknown') error(404, 'This invitation link is not known.');
 	const inv = found.invitation;
 	return {
@@ -20,7 +20,7 @@ export const load: PageServerLoad = ({ params, locals }) => {
 
 export const actions: Actions = {
 	accept: async ({ params, locals }) => {
-		const inv = acceptProjectInvitation(requireActor(locals.actor), params.token);
+		const inv = await acceptProjectInvitation(requireActor(locals.actor), params.token);
 		redirect(303, `/projects/${inv.projectId}`);
 	}
 };

@@ -6,11 +6,11 @@ import { getProject } from '$lib/server/projects';
 import { documentFieldsSchema } from '$lib/schemas/document';
 import type { Actions, PageServerLoad } from './$types';
 
-export const load: PageServerLoad = ({ locals, params, url }) => {
+export const load: PageServerLoad = async ({ locals, params, url }) => {
 	const actor = requireActor(locals.actor);
-	const { project, role } = getProject(actor, params.id);
+	const { project, role } = await getProject(actor, params.id);
 	const deleted = url.searchParams.get('deleted');
-	return { project, role, documents: listDocuments(actor, params.id), deleted };
+	return { project, role, documents: await listDocuments(actor, params.id), deleted };
 };
 
 const statusOf = (e: unknown) => (e as { status?: number }).status;
@@ -41,7 +41,7 @@ export const actions: Actions = {
 		const actor = requireActor(locals.actor);
 		const id = String((await readForm(request)).get('id') ?? '');
 		if (!id) return fail(400, { message: 'Which document?' });
-		undoDeleteDocument(actor, id);
+		await undoDeleteDocument(actor, id);
 		redirect(303, `/projects/${params.id}/documents`);
 	}
 };

@@ -4,7 +4,7 @@ import { recordActions, recordPanel } from '../record-actions.server';
 import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async (event) => {
-	const { record, role } = projectRecord(requireActor(event.locals.actor), event.params.id);
+	const { record, role } = await projectRecord(requireActor(event.locals.actor), event.params.id);
 	return { record, role, panel: await recordPanel(event, role, record) };
 };
 

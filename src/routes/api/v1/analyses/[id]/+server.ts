@@ -6,8 +6,8 @@ import { analysisApi, baseVersion, versionTag } from '$lib/server/analysis-http'
 import { readJson } from '$lib/server/http';
 import { analysisPatchSchema, analysisPutSchema } from '$lib/schemas/analysis';
 
-export const GET: RequestHandler = analysisApi(({ locals, params }) => {
-	const { analysis, role } = getAnalysis(requireActor(locals.actor), params.id);
+export const GET: RequestHandler = analysisApi(async ({ locals, params }) => {
+	const { analysis, role } = await getAnalysis(requireActor(locals.actor), params.id);
 	return json({ ...analysis, role }, { headers: { etag: versionTag(analysis.version) } });
 });
 
@@ -15,13 +15,13 @@ export const GET: RequestHandler = analysisApi(({ locals, params }) => {
 function write(schema: typeof analysisPatchSchema | typeof analysisPutSchema): RequestHandler {
 	return analysisApi(async ({ locals, params, request }) => {
 		const actor = requireActor(locals.actor);
-		getAnalysis(actor, params.id);
+		await getAnalysis(actor, params.id);
 		const body = await readJson(request, schema);
 		if (!body.ok) return body.response;
 		const base = baseVersion(request, body.data.version);
 		if (!base.ok) return base.response;
 		const { name, input } = body.data;
-		const analysis = updateAnalysis(actor, params.id, { name, input, version: base.version });
+		const analysis = await updateAnalysis(actor, params.id, { name, input, version: base.version });
 		return json(analysis, { headers: { etag: versionTag(analysis.version) } });
 	});
 }
@@ -29,6 +29,6 @@ function write(schema: typeof analysisPatchSchema | typeof analysisPutSchema): R
 export const PATCH = write(analysisPatchSchema);
 export const PUT = write(analysisPutSchema);
 
-export const DELETE: RequestHandler = analysisApi(({ locals, params }) => {
-	return json(deleteAnalysis(requireActor(locals.actor), params.id));
+export const DELETE: RequestHandler = analysisApi(async ({ locals, params }) => {
+	return json(await deleteAnalysis(requireActor(locals.actor), params.id));
 });

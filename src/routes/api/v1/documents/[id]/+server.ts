@@ -5,16 +5,16 @@ import { deleteDocument, getDocument, updateDocument } from '$lib/server/documen
 import { api, readJson } from '$lib/server/http';
 import { documentPatchSchema } from '$lib/schemas/document';
 
-export const GET: RequestHandler = api(({ locals, params }) =>
-	json(getDocument(requireActor(locals.actor), params.id).document)
+export const GET: RequestHandler = api(async ({ locals, params }) =>
+	json((await getDocument(requireActor(locals.actor), params.id)).document)
 );
 
 export const PATCH: RequestHandler = api(async ({ locals, params, request }) => {
 	const actor = requireActor(locals.actor);
-	getDocument(actor, params.id);
+	await getDocument(actor, params.id);
 	const body = await readJson(request, documentPatchSchema);
 	if (!body.ok) return body.response;
-	return json(updateDocument(actor, params.id, body.data));
+	return json(await updateDocument(actor, params.id, body.data));
 });
 
 export const DELETE: RequestHandler = api(async ({ locals, params }) => {

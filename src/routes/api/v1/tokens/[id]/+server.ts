@@ -4,8 +4,8 @@ import { api, problem } from '$lib/server/http';
 import type { RequestHandler } from './$types';
 
 /** Revoke one of the caller's own tokens (a token may revoke itself). */
-export const DELETE: RequestHandler = api(({ locals, params }) => {
+export const DELETE: RequestHandler = api(async ({ locals, params }) => {
 	const actor = requireActor(locals.actor);
-	if (!revokeApiToken(actor, params.id)) return problem(404, 'No such token of yours.');
+	if (!(await revokeApiToken(actor, params.id))) return problem(404, 'No such token of yours.');
 	return new Response(null, { status: 204 });
 });

@@ -5,21 +5,21 @@ import { api, readJson } from '$lib/server/http';
 import { deleteWorkshop, getWorkshop, listMembers, renameWorkshop } from '$lib/server/workshops';
 import { workshopNameSchema } from '$lib/schemas/workshop';
 
-export const GET: RequestHandler = api(({ locals, params }) => {
+export const GET: RequestHandler = api(async ({ locals, params }) => {
 	const actor = requireActor(locals.actor);
-	const ws = getWorkshop(actor, params.id);
-	return json({ ...ws, members: listMembers(actor, params.id) });
+	const ws = await getWorkshop(actor, params.id);
+	return json({ ...ws, members: await listMembers(actor, params.id) });
 });
 
 export const PATCH: RequestHandler = api(async ({ locals, params, request }) => {
 	const actor = requireActor(locals.actor);
-	getWorkshop(actor, params.id);
+	await getWorkshop(actor, params.id);
 	const body = await readJson(request, workshopNameSchema);
 	if (!body.ok) return body.response;
-	return json(renameWorkshop(actor, params.id, body.data.name));
+	return json(await renameWorkshop(actor, params.id, body.data.name));
 });
 
-export const DELETE: RequestHandler = api(({ locals, params }) => {
-	deleteWorkshop(requireActor(locals.actor), params.id);
+export const DELETE: RequestHandler = api(async ({ locals, params }) => {
+	await deleteWorkshop(requireActor(locals.actor), params.id);
 	return new Response(null, { status: 204 });
 });

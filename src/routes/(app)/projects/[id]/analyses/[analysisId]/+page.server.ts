@@ -5,8 +5,8 @@ import { kindScreenPath } from '$lib/kinds/names';
 import type { PageServerLoad } from './$types';
 
 /** An analysis opens in its kind's own screen; for a client, in its record. */
-export const load: PageServerLoad = ({ locals, params }) => {
-	const { analysis, role } = getAnalysis(requireActor(locals.actor), params.analysisId);
+export const load: PageServerLoad = async ({ locals, params }) => {
+	const { analysis, role } = await getAnalysis(requireActor(locals.actor), params.analysisId);
 	if (analysis.projectId !== params.id) error(404, 'Not found.');
 	if (role === 'client')
 		redirect(303, `/projects/${analysis.projectId}/analyses/${analysis.id}/record`);

@@ -10,18 +10,20 @@ import type { Actions, PageServerLoad } from './$types';
 
 export const load: PageServerLoad = async ({ locals, params }) => {
 	const actor = requireActor(locals.actor);
-	const { document, project, role } = getDocument(actor, params.documentId);
+	const { document, project, role } = await getDocument(actor, params.documentId);
 	if (document.projectId !== params.id)
 		redirect(308, `/projects/${project.id}/documents/${document.id}`);
 	const analyses = !canEdit(role)
 		? []
-		: listAnalyses(actor, project.id, {
-				q: '',
-				sort: 'name',
-				dir: 'asc',
-				page: 1,
-				perPage: 100
-			}).items.map((a) => ({ id: a.id, name: a.name }));
+		: (
+				await listAnalyses(actor, project.id, {
+					q: '',
+					sort: 'name',
+					dir: 'asc',
+					page: 1,
+					perPage: 100
+				})
+			).items.map((a) => ({ id: a.id, name: a.name }));
 	const form = await superValidate(
 		{
 			caption: document.caption,
@@ -39,7 +41,7 @@ export const actions: Actions = {
 		const form = await superValidate(await readForm(request), zod4(documentFormSchema));
 		if (!form.valid) return fail(400, { form });
 		const { analysisId, ...rest } = form.data;
-		updateDocument(actor, params.documentId, { ...rest, analysisId: analysisId || null });
+		await updateDocument(actor, params.documentId, { ...rest, analysisId: analysisId || null });
 		return message(form, 'Saved.');
 	},
 	delete: async ({ locals, params, request }) => {

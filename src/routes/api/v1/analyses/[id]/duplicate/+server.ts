@@ -10,7 +10,7 @@ export const POST: RequestHandler = analysisApi(async ({ locals, params, request
 	const actor = requireActor(locals.actor);
 	const body = await readJson(request, analysisDuplicateSchema);
 	if (!body.ok) return body.response;
-	const copy = duplicateAnalysis(actor, params.id, body.data);
+	const copy = await duplicateAnalysis(actor, params.id, body.data);
 	return json(copy, {
 		status: 201,
 		headers: { etag: versionTag(copy.version), location: `/api/v1/analyses/${copy.id}` }

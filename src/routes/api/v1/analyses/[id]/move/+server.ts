@@ -10,5 +10,5 @@ export const POST: RequestHandler = analysisApi(async ({ locals, params, request
 	const actor = requireActor(locals.actor);
 	const body = await readJson(request, analysisMoveSchema);
 	if (!body.ok) return body.response;
-	return json(moveAnalysis(actor, params.id, body.data.projectId));
+	return json(await moveAnalysis(actor, params.id, body.data.projectId));
 });

@@ -6,8 +6,8 @@ import { recordPdfResponse } from '$lib/server/record-http';
 import { analysisRecord } from '$lib/server/records';
 
 /** One analysis's record as a PDF: members of its workshop and the project's clients. */
-export const GET: RequestHandler = api(({ locals, params }) => {
+export const GET: RequestHandler = api(async ({ locals, params }) => {
 	const actor = requireActor(locals.actor);
-	const { analysis } = getAnalysis(actor, params.id);
-	return recordPdfResponse(analysisRecord(actor, analysis.projectId, analysis.id).record);
+	const { analysis } = await getAnalysis(actor, params.id);
+	return recordPdfResponse((await analysisRecord(actor, analysis.projectId, analysis.id)).record);
 });

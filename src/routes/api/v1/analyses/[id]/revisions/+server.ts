@@ -4,6 +4,6 @@ import { requireActor } from '$lib/server/access';
 import { listRevisions } from '$lib/server/analyses';
 import { analysisApi } from '$lib/server/analysis-http';
 
-export const GET: RequestHandler = analysisApi(({ locals, params }) => {
-	return json({ items: listRevisions(requireActor(locals.actor), params.id) });
+export const GET: RequestHandler = analysisApi(async ({ locals, params }) => {
+	return json({ items: await listRevisions(requireActor(locals.actor), params.id) });
 });

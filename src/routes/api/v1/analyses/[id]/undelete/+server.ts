@@ -5,6 +5,6 @@ import { undoDelete } from '$lib/server/analyses';
 import { analysisApi } from '$lib/server/analysis-http';
 
 /** The Undo of a delete, within the window the DELETE answer names (undoUntil). */
-export const POST: RequestHandler = analysisApi(({ locals, params }) => {
-	return json(undoDelete(requireActor(locals.actor), params.id));
+export const POST: RequestHandler = analysisApi(async ({ locals, params }) => {
+	return json(await undoDelete(requireActor(locals.actor), params.id));
 });

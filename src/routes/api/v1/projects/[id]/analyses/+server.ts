@@ -6,18 +6,18 @@ import { analysisApi, versionTag } from '$lib/server/analysis-http';
 import { readJson, readQuery } from '$lib/server/http';
 import { analysisCreateSchema, analysisListQuerySchema } from '$lib/schemas/analysis';
 
-export const GET: RequestHandler = analysisApi(({ locals, params, url }) => {
+export const GET: RequestHandler = analysisApi(async ({ locals, params, url }) => {
 	const actor = requireActor(locals.actor);
 	const query = readQuery(url, analysisListQuerySchema);
 	if (!query.ok) return query.response;
-	return json(listAnalyses(actor, params.id, query.data));
+	return json(await listAnalyses(actor, params.id, query.data));
 });
 
 export const POST: RequestHandler = analysisApi(async ({ locals, params, request }) => {
 	const actor = requireActor(locals.actor);
 	const body = await readJson(request, analysisCreateSchema);
 	if (!body.ok) return body.response;
-	const analysis = createAnalysis(actor, params.id, body.data);
+	const analysis = await createAnalysis(actor, params.id, body.data);
 	return json(analysis, {
 		status: 201,
 		headers: { etag: versionTag(analysis.version), location: `/api/v1/analyses/${analysis.id}` }

@@ -5,8 +5,8 @@ import { addDocument, listDocuments } from '$lib/server/documents';
 import { api } from '$lib/server/http';
 import { readUpload } from '$lib/server/uploads';
 
-export const GET: RequestHandler = api(({ locals, params }) =>
-	json({ items: listDocuments(requireActor(locals.actor), params.id) })
+export const GET: RequestHandler = api(async ({ locals, params }) =>
+	json({ items: await listDocuments(requireActor(locals.actor), params.id) })
 );
 
 export const POST: RequestHandler = api(async ({ locals, params, request }) => {

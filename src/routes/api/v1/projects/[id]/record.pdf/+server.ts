@@ -5,6 +5,6 @@ import { recordPdfResponse } from '$lib/server/record-http';
 import { projectRecord } from '$lib/server/records';
 
 /** The project's record as a PDF: members of its workshop and its clients. */
-export const GET: RequestHandler = api(({ locals, params }) =>
-	recordPdfResponse(projectRecord(requireActor(locals.actor), params.id).record)
+export const GET: RequestHandler = api(async ({ locals, params }) =>
+	recordPdfResponse((await projectRecord(requireActor(locals.actor), params.id)).record)
 );

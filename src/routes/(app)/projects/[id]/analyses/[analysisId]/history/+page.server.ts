@@ -17,13 +17,13 @@ const versionSchema = z.coerce.number().int().min(1);
 /** Restore: the version to bring back, and the version the page showed as current. */
 const restoreSchema = z.object({ version: versionSchema, current: versionSchema });
 
-export const load: PageServerLoad = ({ locals, params, url }) => {
+export const load: PageServerLoad = async ({ locals, params, url }) => {
 	const actor = requireActor(locals.actor);
-	const { analysis, project, role } = getAnalysis(actor, params.analysisId);
+	const { analysis, project, role } = await getAnalysis(actor, params.analysisId);
 	if (analysis.projectId !== params.id) error(404, 'Not found.');
-	const revisions = listRevisions(actor, analysis.id);
+	const revisions = await listRevisions(actor, analysis.id);
 	const asked = versionSchema.safeParse(url.searchParams.get('v') ?? analysis.version);
-	const shown = asked.success ? getRevision(actor, analysis.id, asked.data).revision : null;
+	const shown = asked.success ? (await getRevision(actor, analysis.id, asked.data)).revision : null;
 	return {
 		analysis: {
 			id: analysis.id,
@@ -57,7 +57,7 @@ export const actions: Actions = {
 		const form = await superValidate(await readForm(request), zod4(restoreSchema));
 		if (!form.valid) return fail(400, { problem: 'Pick a version to restore.' });
 		try {
-			restoreRevision(actor, params.analysisId, form.data.version, form.data.current);
+			await restoreRevision(actor, params.analysisId, form.data.version, form.data.current);
 		} catch (e) {
 			if (e instanceof AnalysisProblem) return fail(e.status, { problem: e.message });
 			throw e;

@@ -6,7 +6,7 @@ import type { Actions, PageServerLoad } from './$types';
 export const load: PageServerLoad = async (event) => {
 	const { params } = event;
 	const actor = requireActor(event.locals.actor);
-	const { record, role } = analysisRecord(actor, params.id, params.analysisId);
+	const { record, role } = await analysisRecord(actor, params.id, params.analysisId);
 	return { record, role, panel: await recordPanel(event, role, record, params.analysisId) };
 };
 

@@ -14,10 +14,10 @@ function versionOf(raw: string) {
 	return parsed.success ? parsed.data : null;
 }
 
-export const GET: RequestHandler = analysisApi(({ locals, params }) => {
+export const GET: RequestHandler = analysisApi(async ({ locals, params }) => {
 	const version = versionOf(params.version);
 	if (version === null) return problem(404, 'Not found.');
-	const { revision } = getRevision(requireActor(locals.actor), params.id, version);
+	const { revision } = await getRevision(requireActor(locals.actor), params.id, version);
 	return json(revision);
 });
 
@@ -31,6 +31,11 @@ export const POST: RequestHandler = analysisApi(async ({ locals, params, request
 	// the guard is optional here: a restore loses nothing, the current version stays in history
 	const base = baseVersion(request, body.data.version);
 	if (!base.ok && base.response.status !== 428) return base.response;
-	const analysis = restoreRevision(actor, params.id, version, base.ok ? base.version : undefined);
+	const analysis = await restoreRevision(
+		actor,
+		params.id,
+		version,
+		base.ok ? base.version : undefined
+	);
 	return json(analysis, { headers: { etag: versionTag(analysis.version) } });
 });
