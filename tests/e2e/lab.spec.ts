@@ -75,6 +75,33 @@ test('a teacher steps through the span experiment from the keyboard', async ({ p
 	);
 	await page.screenshot({ path: 'test-results/lab-projector.png' });
 	expect(await seriousViolations(page)).toEqual([]);
+
+	// large type for the back of the room: the drawing's stated exaggeration and the chart's
+	// numbers at least 20 px, the laws larger still
+	const note = await page.locator('svg.lab-shelf text.note').first().boundingBox();
+	expect(note!.height).toBeGreaterThanOrEqual(20);
+	const tick = await page.locator('.lab-chart text.tick').first().boundingBox();
+	expect(tick!.height).toBeGreaterThanOrEqual(18);
+	const law = await page.locator('.laws strong').first().boundingBox();
+	expect(law!.height).toBeGreaterThanOrEqual(24);
+});
+
+test('choosing an experiment hands the keyboard to it at once', async ({ page }) => {
+	await page.setViewportSize({ width: 1920, height: 1080 });
+	await page.goto('/lab?view=projector');
+	await page.getByRole('combobox', { name: 'Experiment' }).selectOption('thickness');
+	// no click anywhere: space steps and the arrows move the chosen variable
+	await page.keyboard.press(' ');
+	await expect(page.getByText('Step 2 of 2')).toBeVisible();
+	await expect(readout(page)).toContainText('A 36" Red oak shelf, 1 1/2" thick');
+	await page.keyboard.press('ArrowRight');
+	await expect(readout(page)).toContainText('A 36 1/2" Red oak shelf, 1 1/2" thick');
+	// a focused button keeps space for itself but lets the arrows through
+	await page.getByRole('button', { name: 'Back' }).focus();
+	await page.keyboard.press('ArrowRight');
+	await expect(readout(page)).toContainText('A 37" Red oak shelf');
+	await page.keyboard.press(' ');
+	await expect(page.getByText('Step 1 of 2')).toBeVisible();
 });
 
 test('the lab works on a phone', async ({ page }) => {
@@ -85,4 +112,19 @@ test('the lab works on a phone', async ({ page }) => {
 	await page.getByRole('button', { name: 'More span' }).click();
 	await expect(readout(page)).toContainText('A 36 1/2" Red oak shelf');
 	expect(await seriousViolations(page)).toEqual([]);
+
+	// the last control, moved at the bottom of the list: the drawing stays in view above it
+	const time = page.getByRole('slider', { name: 'Time under load' });
+	await time.focus();
+	await page.keyboard.press('Home');
+	await expect(time).toHaveAttribute('aria-valuetext', 'the moment it is loaded');
+	const drawing = (await page.locator('svg.lab-shelf').boundingBox())!;
+	const slider = (await time.boundingBox())!;
+	expect(drawing.y).toBeGreaterThanOrEqual(0);
+	expect(drawing.y + drawing.height).toBeLessThanOrEqual(slider.y);
+	expect(slider.y + slider.height).toBeLessThanOrEqual(800);
+	await expect(page.locator('svg.lab-shelf text.sag')).toHaveText(/when loaded/);
+	// its words stay readable on the small screen (at least 12 px)
+	const label = await page.locator('svg.lab-shelf text.load').boundingBox();
+	expect(label!.height).toBeGreaterThanOrEqual(12);
 });

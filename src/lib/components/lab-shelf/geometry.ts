@@ -93,3 +93,53 @@ export function shareAt(xUnits: number, spanM: number, s: Scales): number {
 	const share = (xUnits - VIEW.left) / (spanM * s.scale);
 	return Math.min(1, Math.max(0, share));
 }
+
+/** Sizes of the drawing's words in its own units at a text scale of 1 (a drawing ~800 px wide). */
+export const TEXT = { note: 15, label: 18 };
+
+/**
+ * How much the drawing's words grow so they stay `notePx` tall on screen (the smallest, the
+ * notes) when the drawing is `widthPx` wide: 1 on a desktop, about 2.5 on a 375 px phone. Never
+ * below 1, so a wide projector keeps the drawing's own proportions; 1 before the width is known.
+ */
+export function textScale(widthPx: number, notePx = 13): number {
+	if (!(widthPx > 0)) return 1;
+	return Math.max(1, (notePx * VIEW.width) / (TEXT.note * widthPx));
+}
+
+export interface TextLayout {
+	/** the viewBox: room above for larger words, and below for the sag line (and the clip note) */
+	viewBox: string;
+	/** baseline of the stated exaggeration, top right */
+	noteY: number;
+	/** baseline of the sag line under the shelf */
+	sagY: number;
+	/** baseline of the note that the sag runs past the drawing */
+	clipY: number;
+}
+
+/** Where the words go at text scale `k`, so larger words never run into the shelf or each other. */
+export function textLayout(k: number, isClipped: boolean): TextLayout {
+	const floor = VIEW.top + VIEW.maxSagPx + 30;
+	const padTop = Math.round((k - 1) * 2.4 * TEXT.note);
+	const sagY = floor + 10 + 0.9 * TEXT.label * k;
+	const clipY = sagY + 1.3 * TEXT.note * k;
+	const bottom = Math.max(VIEW.height, (isClipped ? clipY : sagY) + 0.4 * TEXT.label * k);
+	return {
+		viewBox: `0 ${-padTop} ${VIEW.width} ${Math.round(bottom + padTop)}`,
+		noteY: -padTop + 1.45 * TEXT.note * k,
+		sagY,
+		clipY
+	};
+}
+
+/**
+ * The x at which a centred line of monospaced words (`chars` long, `size` tall, in drawing units)
+ * stays inside the drawing: its wanted centre, moved in from an edge it would run past.
+ */
+export function centredX(wanted: number, chars: number, size: number): number {
+	const half = (chars * 0.62 * size) / 2;
+	const lo = 4 + half;
+	const hi = VIEW.width - 4 - half;
+	return lo > hi ? VIEW.width / 2 : Math.min(hi, Math.max(lo, wanted));
+}
