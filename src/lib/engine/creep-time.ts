@@ -3,10 +3,19 @@
  * load goes on) and the long-term sag the engine reports (after a year under the same load).
  *
  * Creep of wood and wood panels under constant load follows a power of time: it grows fast in the
- * first hours and days, then ever more slowly (Tong, Brown, Corr and Cusatis, "Wood creep data
+ * first hours and days, then ever more slowly. Tong, Brown, Corr and Cusatis, "Wood creep data
  * collection and unbiased parameter identification of compliance functions", Holzforschung 74(11),
- * 2020: a power law fits the collected test curves best). The exponent is an estimate: 1/4 is a
- * typical value for wood in bending (from memory; the fitted values scatter widely).
+ * 2020, collected published creep curves into one database, fitted several compliance functions to
+ * each, and report that "a power law trend in wood creep, with lognormal parameter distribution,
+ * was confirmed" (abstract, checked against a stored copy of the publisher's page). That abstract
+ * gives no exponent, and no stored copy of the Wood Handbook's creep section or of a panel creep
+ * model gave one either: 1/4 is a typical value for wood in bending (from memory; fitted values
+ * scatter widely between boards and climates).
+ *
+ * What the exponent can change is bounded: the share is 0 when loaded and 1 after a year, so the
+ * lab never shows more than the engine's long-term sag, which is the figure every check uses (NDS
+ * §3.5.2 and EN 1995-1-1 Table 3.2 give only that end value, see the material library). Between
+ * the two a smaller exponent would show more of the creep early; the lab says "an estimate".
  */
 
 /** the exponent n in creep(t) ∝ tⁿ (from memory, see above) */
