@@ -33,7 +33,7 @@ import {
 } from './engine';
 import { caseDesignSchema, type CaseDesignInput } from './schemas/case';
 import { jointRequestSchema, type JointInput } from './schemas/joinery';
-import { parseOrThrow, parseRequest } from './schemas/parse';
+import { parseRequest } from './schemas/parse';
 import {
 	maxLoadRequestSchema,
 	maxSpanRequestSchema,
@@ -91,19 +91,19 @@ export function maxLoad(request: MaxLoadRequest): MaxLoadResult {
 
 /** Plan one joint: fasteners, where they go, what each holds and what the joint must carry. */
 export function planJoint(request: JointInput): JointPlan {
-	const input: JointRequest = parseOrThrow(jointRequestSchema, request);
+	const input: JointRequest = parseRequest(jointRequestSchema, request);
 	return planJointSI(input);
 }
 
 /** Tip-over of a case standing on the floor. */
 export function checkStability(request: StabilityInput): StabilityResult {
-	const input: StabilityRequest = parseOrThrow(stabilityRequestSchema, request);
+	const input: StabilityRequest = parseRequest(stabilityRequestSchema, request);
 	return checkStabilitySI(input);
 }
 
 /** A whole case: shelves, joints, tip-over, cut list, margins and suggestions. */
 export function checkCase(request: CaseDesignInput): CaseResult {
-	const input: CaseDesign = parseOrThrow(caseDesignSchema, request);
+	const input: CaseDesign = parseRequest(caseDesignSchema, request);
 	return checkCaseSI(input);
 }
 

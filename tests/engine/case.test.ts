@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { type DesignChange } from '../../src/lib/engine/case';
 import { checkCase, type CaseDesignInput } from '../../src/lib/compute';
-import { JoineryInputError } from '../../src/lib/engine/joinery';
+import { InputError } from '../../src/lib/engine';
 import { findMaterial } from '../../reference/materials';
 import { STOCK_HOLDING } from '../../reference/stock-holding';
 import { materials } from '../../reference/materials';
@@ -223,8 +223,8 @@ describe('checkCase: requests', () => {
 			checkCase({ ...bookcase(), width: '1"', shelves: [{ height: '90"' }] });
 			expect.unreachable();
 		} catch (e) {
-			expect(e).toBeInstanceOf(JoineryInputError);
-			const paths = (e as JoineryInputError).issues.map((i) => i.path.join('.'));
+			expect(e).toBeInstanceOf(InputError);
+			const paths = (e as InputError).issues.map((i) => i.path.join('.'));
 			expect(paths).toEqual(expect.arrayContaining(['sides.thickness', 'shelves.0.height']));
 		}
 	});

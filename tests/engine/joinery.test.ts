@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { InputError } from '../../src/lib/engine';
 import {
-	JoineryInputError,
 	chooseBiscuit,
 	planJointSI,
 	pocketPlaces,
@@ -268,8 +268,8 @@ describe('requests and errors', () => {
 			});
 			expect.unreachable();
 		} catch (e) {
-			expect(e).toBeInstanceOf(JoineryInputError);
-			const paths = (e as JoineryInputError).issues.map((i) => i.path.join('.'));
+			expect(e).toBeInstanceOf(InputError);
+			const paths = (e as InputError).issues.map((i) => i.path.join('.'));
 			expect(paths).toContain('length');
 			expect(paths).toContain('endPiece.material');
 		}

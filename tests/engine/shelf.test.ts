@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { ShelfInputError } from '../../src/lib/engine';
+import { InputError } from '../../src/lib/engine';
 import {
 	analyzeShelf,
 	maxLoad,
@@ -321,8 +321,8 @@ describe('clear errors', () => {
 			try {
 				analyzeShelf(req);
 			} catch (e) {
-				expect(e).toBeInstanceOf(ShelfInputError);
-				return (e as ShelfInputError).issues[0].path;
+				expect(e).toBeInstanceOf(InputError);
+				return (e as InputError).issues[0].path;
 			}
 			return null;
 		};

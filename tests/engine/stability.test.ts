@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { checkStabilitySI, type StabilityRequest } from '../../src/lib/engine/stability';
 import { checkStability } from '../../src/lib/compute';
-import { JoineryInputError } from '../../src/lib/engine/joinery';
+import { InputError } from '../../src/lib/engine';
 
 const IN = 0.0254;
 const LBF = 4.4482216152605;
@@ -155,8 +155,8 @@ describe('stability requests', () => {
 			});
 			expect.unreachable();
 		} catch (e) {
-			expect(e).toBeInstanceOf(JoineryInputError);
-			expect((e as JoineryInputError).issues[0].path).toEqual(['height']);
+			expect(e).toBeInstanceOf(InputError);
+			expect((e as InputError).issues[0].path).toEqual(['height']);
 		}
 	});
 });

@@ -7,7 +7,7 @@ import { caseDesignSchema, type CaseDesign, type CaseDesignInput } from '../sche
 import { cleanPath, fieldIssues } from '../schemas/issues';
 import { checkCaseSI } from '../engine/case/check';
 import type { CaseResult } from '../engine/case/types';
-import { JoineryInputError } from '../engine/joinery/validate';
+import { InputError } from '../engine/errors';
 
 export interface FieldIssue {
 	/** the form field: `width`, `shelves.2.thickness`, `shelves.2.load` */
@@ -38,7 +38,7 @@ export function runCase(input: CaseDesignInput): CaseRun {
 	try {
 		return { ok: true, design: read.data, result: checkCaseSI(read.data) };
 	} catch (e) {
-		if (e instanceof JoineryInputError)
+		if (e instanceof InputError)
 			return {
 				ok: false,
 				issues: e.issues.map((i) => ({ field: fieldKey(i.path), message: i.message }))

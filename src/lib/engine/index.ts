@@ -5,6 +5,7 @@
  * Reading what people and programs send (quantity strings, defaults) is src/lib/schemas' work, and
  * src/lib/compute.ts parses, then calls these.
  */
+export { InputError, type InputIssue } from './errors';
 export * from './units';
 export * from './shelf';
 export { ENGINE_VERSION } from './version';
@@ -17,7 +18,7 @@ export {
 } from '../../../reference/materials';
 
 // Joinery, stability and the whole-case check (issue 4)
-export { planJointSI, JoineryInputError, type InputIssue } from './joinery';
+export { planJointSI } from './joinery';
 export type {
 	JointRequest,
 	JointPlan,

@@ -8,7 +8,8 @@ import type { z } from 'zod';
 import { analyzeInput, safely, type ShelfResult } from '../engine/index';
 import { checkCaseSI } from '../engine/case/index';
 import type { CaseResult } from '../engine/case/types';
-import { JoineryInputError, planJointSI } from '../engine/joinery/index';
+import { InputError } from '../engine/errors';
+import { planJointSI } from '../engine/joinery/index';
 import type { JointPlan } from '../engine/joinery/types';
 import { checkStabilitySI } from '../engine/stability/index';
 import type { StabilityResult } from '../engine/stability/types';
@@ -54,7 +55,7 @@ function engine<T>(run: () => T): EngineRun<T> {
 	try {
 		return { ok: true, result: run() };
 	} catch (e) {
-		if (e instanceof JoineryInputError) return { ok: false, issues: e.issues };
+		if (e instanceof InputError) return { ok: false, issues: e.issues };
 		return {
 			ok: false,
 			issues: [{ path: [], message: 'This could not be computed. Check the figures.' }]

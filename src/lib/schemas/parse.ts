@@ -2,25 +2,13 @@
  * Reading a request with its shared schema, or one error naming every field that needs attention.
  */
 import type { z } from 'zod';
-import { ShelfInputError, type ShelfIssue } from '../engine/shelf';
-import { JoineryInputError } from '../engine/joinery';
+import { InputError } from '../engine/errors';
 import { fieldIssues } from './issues';
 
-const issuesOf = (error: z.ZodError): ShelfIssue[] => fieldIssues(error);
-
-/** Validate a shelf request with its schema; throws ShelfInputError naming each bad field. */
+/** Read a request (shelf, joint, tipping, case, wall) with its schema into the engine's typed
+ * input; throws the engine's InputError naming every bad field. */
 export function parseRequest<S extends z.ZodType>(schema: S, request: unknown): z.output<S> {
 	const parsed = schema.safeParse(request);
-	if (!parsed.success) throw new ShelfInputError(issuesOf(parsed.error));
+	if (!parsed.success) throw new InputError(fieldIssues(parsed.error));
 	return parsed.data;
-}
-
-/** Parse a joint, stability or case request, or throw one error that lists every issue. */
-export function parseOrThrow<S extends z.ZodType>(schema: S, input: unknown): z.output<S> {
-	const read = schema.safeParse(input);
-	if (read.success) return read.data;
-	const issues = issuesOf(read.error);
-	const first = issues[0];
-	const more = issues.length > 1 ? ` (and ${issues.length - 1} more)` : '';
-	throw new JoineryInputError(first.path.join('.'), first.message + more, issues);
 }

@@ -5,10 +5,10 @@ import {
 	maxSpanInput,
 	minEdgeInput,
 	minThicknessInput,
-	ShelfInputError
+	InputError
 } from '$lib/engine';
 import { checkCaseSI } from '$lib/engine/case';
-import { JoineryInputError, planJointSI } from '$lib/engine/joinery';
+import { planJointSI } from '$lib/engine/joinery';
 import { checkStabilitySI } from '$lib/engine/stability';
 import { checkWall, wallSheets, wallShop } from '$lib/engine/wall';
 import { caseDesignSchema } from '$lib/schemas/case';
@@ -45,20 +45,20 @@ function endpoint<S extends z.ZodType>(
 
 /** The open compute routes by path: free to call, nothing stored, limited per address. */
 export const COMPUTE_ENDPOINTS: ReadonlyMap<string, ComputeEndpoint> = new Map([
-	['/api/v1/shelf', endpoint(shelfRequestSchema, analyzeInput, ShelfInputError)],
-	['/api/v1/shelf/max-span', endpoint(maxSpanRequestSchema, maxSpanInput, ShelfInputError)],
+	['/api/v1/shelf', endpoint(shelfRequestSchema, analyzeInput, InputError)],
+	['/api/v1/shelf/max-span', endpoint(maxSpanRequestSchema, maxSpanInput, InputError)],
 	[
 		'/api/v1/shelf/min-thickness',
-		endpoint(minThicknessRequestSchema, minThicknessInput, ShelfInputError)
+		endpoint(minThicknessRequestSchema, minThicknessInput, InputError)
 	],
-	['/api/v1/shelf/min-edge', endpoint(minEdgeRequestSchema, minEdgeInput, ShelfInputError)],
-	['/api/v1/shelf/max-load', endpoint(maxLoadRequestSchema, maxLoadInput, ShelfInputError)],
-	['/api/v1/joints', endpoint(jointRequestSchema, planJointSI, JoineryInputError)],
-	['/api/v1/stability', endpoint(stabilityRequestSchema, checkStabilitySI, JoineryInputError)],
-	['/api/v1/cases/check', endpoint(caseDesignSchema, checkCaseSI, JoineryInputError)],
+	['/api/v1/shelf/min-edge', endpoint(minEdgeRequestSchema, minEdgeInput, InputError)],
+	['/api/v1/shelf/max-load', endpoint(maxLoadRequestSchema, maxLoadInput, InputError)],
+	['/api/v1/joints', endpoint(jointRequestSchema, planJointSI, InputError)],
+	['/api/v1/stability', endpoint(stabilityRequestSchema, checkStabilitySI, InputError)],
+	['/api/v1/cases/check', endpoint(caseDesignSchema, checkCaseSI, InputError)],
 	[
 		'/api/v1/walls/check',
-		endpoint(wallDesignSchema, (d) => checkWall(toWallDesign(d)), JoineryInputError)
+		endpoint(wallDesignSchema, (d) => checkWall(toWallDesign(d)), InputError)
 	],
 	[
 		'/api/v1/walls/cutlist',
@@ -68,16 +68,12 @@ export const COMPUTE_ENDPOINTS: ReadonlyMap<string, ComputeEndpoint> = new Map([
 				const { cutList, banding, hardware } = wallShop(toWallDesign(d));
 				return { estimate: true, cutList, banding, hardware };
 			},
-			JoineryInputError
+			InputError
 		)
 	],
 	[
 		'/api/v1/walls/sheets',
-		endpoint(
-			wallDesignSchema,
-			(d) => wallSheets(toWallDesign(d), toSheetRequest(d)),
-			JoineryInputError
-		)
+		endpoint(wallDesignSchema, (d) => wallSheets(toWallDesign(d), toSheetRequest(d)), InputError)
 	]
 ]);
 

@@ -4,7 +4,7 @@
  * form field it belongs to (never a thrown error in the middle of typing).
  */
 import { fieldKey, type FieldIssue } from '../case-designer/check';
-import { JoineryInputError } from '../engine/joinery/validate';
+import { InputError } from '../engine/errors';
 import { wallShop, wallSheets, type WallShop } from '../engine/wall';
 import type { SheetPlan } from '../engine/sheets';
 import type { WallDesign } from '../engine/wall/types';
@@ -29,7 +29,7 @@ export function runWall(draft: WallDraft, unit: UserLengthUnit): WallRun {
 		const { sheets } = wallSheets(design, toSheetRequest(read.data));
 		return { ok: true, design, shop, sheets };
 	} catch (e) {
-		if (e instanceof JoineryInputError)
+		if (e instanceof InputError)
 			return {
 				ok: false,
 				issues: e.issues.map((i) => ({ field: fieldKey(i.path), message: i.message }))

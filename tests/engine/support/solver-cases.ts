@@ -189,7 +189,7 @@ export function answersOf() {
 						reactions: s.analysis.reactions
 					})),
 					joints: r.joints.map((j) => ({ id: j.id, count: j.plan.count, pass: j.plan.pass })),
-					stability: r.stability.pass,
+					stability: { centreOfGravity: r.stability.centreOfGravity, tipForceAtTopN: r.stability.tipForceAtTopN },
 					margins: r.margins,
 					suggestions: r.suggestions,
 					parts: r.parts

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyzeShelf } from '../../../src/lib/compute';
 import { bandingTotals, cutList } from '../../../src/lib/engine/cutlist';
-import { JoineryInputError } from '../../../src/lib/engine/joinery/validate';
+import { InputError } from '../../../src/lib/engine';
 import {
 	checkWall,
 	DEMO_WALL,
@@ -234,11 +234,11 @@ describe('dividers', () => {
 			],
 			dividers: [{ at: 24 * IN, joint: 'dado' }]
 		});
-		expect(() => checkWall(wall([bad]))).toThrow(JoineryInputError);
+		expect(() => checkWall(wall([bad]))).toThrow(InputError);
 		try {
 			checkWall(wall([bad]));
 		} catch (e) {
-			expect((e as JoineryInputError).field).toBe('cases.0.shelves.0.bay');
+			expect((e as InputError).field).toBe('cases.0.shelves.0.bay');
 		}
 	});
 });

@@ -58,7 +58,7 @@ function forAll(x: CaseSuggestion, first: CaseShelf, group: CaseShelf[]): CaseSu
  * Check a whole case (SI numbers): every shelf's analysis, every joint's plan
  * and capacity, tip-over and anchoring, the cut list, the margins worst first, and suggestions that
  * fix each failure as changes to the design. An estimate for planning; the cautions always come
- * with it. Throws JoineryInputError naming a bad field.
+ * with it. Throws InputError naming a bad field.
  */
 export function checkCaseSI(d: CaseDesign): CaseResult {
 	const g = caseGeometry(d);

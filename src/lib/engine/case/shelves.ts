@@ -1,6 +1,5 @@
-import { JoineryInputError } from '../joinery/validate';
 import { analyzeInput } from '../shelf/analyze';
-import { ShelfInputError } from '../shelf/errors';
+import { InputError } from '../errors';
 import { DEFAULT_SHELF_OPTIONS, type ShelfInput, type ShelfResult } from '../shelf/types';
 import { geometryIssues } from '../shelf/validate';
 import type { CaseGeometry } from './geometry';
@@ -51,18 +50,14 @@ export class ShelfAnalyses {
 		if (hit) return hit;
 		try {
 			const issues = shelfIssues(request);
-			if (issues.length) throw new ShelfInputError(issues);
+			if (issues.length) throw new InputError(issues);
 			const result = analyzeInput(request);
 			this.memo.set(key, result);
 			return result;
 		} catch (e) {
-			if (e instanceof ShelfInputError) {
+			if (e instanceof InputError) {
 				const issues = e.issues.map((i) => ({ path: [...path, ...i.path], message: i.message }));
-				throw new JoineryInputError(
-					issues[0]?.path.join('.') ?? path.join('.'),
-					issues[0]?.message ?? e.message,
-					issues
-				);
+				throw new InputError(issues);
 			}
 			throw e;
 		}

@@ -1,5 +1,5 @@
 import { findMaterial } from '../../../../reference/materials';
-import { ShelfInputError } from '../shelf/errors';
+import { InputError } from '../errors';
 import { formatLength } from '../units/length';
 import { planJointSI } from '../joinery/plan';
 import type { JointRequest } from '../joinery/types';
@@ -87,7 +87,7 @@ export function shelfSuggestions(
 			}
 		} catch (e) {
 			// no nosing of a sensible height does it: say nothing rather than guess
-			if (!(e instanceof ShelfInputError)) throw e;
+			if (!(e instanceof InputError)) throw e;
 		}
 	}
 
@@ -105,7 +105,7 @@ export function shelfSuggestions(
 			});
 	} catch (e) {
 		// the span solver found no span: the thickness suggestion above is the one to follow
-		if (!(e instanceof ShelfInputError)) throw e;
+		if (!(e instanceof InputError)) throw e;
 	}
 	return out;
 }

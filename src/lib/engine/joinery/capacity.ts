@@ -16,7 +16,8 @@ import {
 } from '../../../../reference/stock-holding';
 import type { StockMaterial } from './types';
 import { N_PER_LBF, PA_PER_PSI, inches } from './units';
-import { JoineryInputError, positive } from './validate';
+import { InputError } from '../errors';
+import { positive } from './validate';
 
 export interface ResolvedStock {
 	name: string;
@@ -33,7 +34,7 @@ export interface ResolvedStock {
 export function resolveStock(material: StockMaterial, field: string): ResolvedStock {
 	if (typeof material === 'string') {
 		const s = findStockHolding(material);
-		if (!s) throw new JoineryInputError(field, `unknown stock "${material}"`);
+		if (!s) throw InputError.at(field, `unknown stock "${material}"`);
 		return {
 			name: s.name,
 			kind: s.kind,
@@ -48,9 +49,7 @@ export function resolveStock(material: StockMaterial, field: string): ResolvedSt
 	}
 	const g = positive(material.specificGravity, `${field}.specificGravity`);
 	if (g > 1.5)
-		throw new JoineryInputError(
-			`${field}.specificGravity`,
-			'expected a specific gravity below 1.5'
+		throw InputError.at(`${field}.specificGravity`, 'expected a specific gravity below 1.5'
 		);
 	return {
 		name: material.name ?? `custom ${material.kind}`,

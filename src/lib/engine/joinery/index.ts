@@ -9,6 +9,5 @@ export {
 export { spacedAlong } from './layout';
 export { chooseBiscuit } from './biscuits';
 export { pocketPlaces, pocketScrewLengthIn } from './screws';
-export { JoineryInputError, type InputIssue } from './validate';
 export { JOINT_CAUTIONS } from './cautions';
 export type * from './types';

@@ -5,7 +5,8 @@ import type { FastenerPart, PlanContext } from './part';
 import { planPocketScrews, planThroughScrews } from './screws';
 import { planDado, planShelfPins } from './supports';
 import type { FastenerKind, JointKind, JointPlan, JointRequest } from './types';
-import { JoineryInputError, nonNegative, positive } from './validate';
+import { InputError } from '../errors';
+import { nonNegative, positive } from './validate';
 
 const KINDS: JointKind[] = [
 	'shelf-to-side',
@@ -25,26 +26,26 @@ const PLANNERS: Record<FastenerKind, (ctx: PlanContext) => FastenerPart> = {
 
 /**
  * Plan one joint (SI numbers): the fasteners, where they go, what each holds and what the joint
- * must carry. Throws JoineryInputError naming a bad field. An estimate for planning; every result
+ * must carry. Throws InputError naming a bad field. An estimate for planning; every result
  * carries the cautions.
  */
 export function planJointSI(req: JointRequest): JointPlan {
 	if (!KINDS.includes(req.kind))
-		throw new JoineryInputError('kind', `expected one of ${KINDS.join(', ')}`);
+		throw InputError.at('kind', `expected one of ${KINDS.join(', ')}`);
 	const planner = PLANNERS[req.fastener];
 	if (!planner)
-		throw new JoineryInputError('fastener', `expected one of ${Object.keys(PLANNERS).join(', ')}`);
+		throw InputError.at('fastener', `expected one of ${Object.keys(PLANNERS).join(', ')}`);
 	positive(req.lengthM, 'lengthM');
 	positive(req.endPiece?.thicknessM, 'endPiece.thicknessM');
 	positive(req.facePiece?.thicknessM, 'facePiece.thicknessM');
 	const o = req.options ?? {};
 	if (o.count !== undefined && (!Number.isInteger(o.count) || o.count < 1 || o.count > 200))
-		throw new JoineryInputError('options.count', 'expected a whole number from 1 to 200');
+		throw InputError.at('options.count', 'expected a whole number from 1 to 200');
 	if (
 		o.screwGauge !== undefined &&
 		(!Number.isInteger(o.screwGauge) || o.screwGauge < 4 || o.screwGauge > 14)
 	)
-		throw new JoineryInputError('options.screwGauge', 'expected a whole screw gauge from 4 to 14');
+		throw InputError.at('options.screwGauge', 'expected a whole screw gauge from 4 to 14');
 	for (const k of ['screwLengthM', 'pinDiameterM', 'dadoDepthM'] as const)
 		if (o[k] !== undefined) positive(o[k], `options.${k}`);
 	const ctx: PlanContext = {

@@ -20,14 +20,14 @@ import {
 	type BeamSolution,
 	type SagPieces
 } from './beam';
-import { ShelfInputError } from './errors';
+import { InputError } from '../errors';
 import { buildModel, isStocked, type ShelfModel } from './model';
 import { NEWTONS_PER_LBF } from '../units/si';
 import { partStresses } from './section';
 import type {
 	SafeResult,
 	ShelfInput,
-	ShelfIssue,
+	InputIssue,
 	ShelfResult,
 	ShelfWarning,
 	SpanCheck
@@ -374,8 +374,8 @@ export function safely<R, T>(fn: (request: R) => T): (request: R) => SafeResult<
 		try {
 			return { ok: true, result: fn(request) };
 		} catch (e) {
-			if (e instanceof ShelfInputError) return { ok: false, issues: e.issues };
-			const issues: ShelfIssue[] = [
+			if (e instanceof InputError) return { ok: false, issues: e.issues };
+			const issues: InputIssue[] = [
 				{
 					path: [],
 					message: 'This shelf could not be computed. Check the figures, or report the request.'

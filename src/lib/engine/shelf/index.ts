@@ -1,5 +1,4 @@
 export { analyzeInput, safely, spanOverSag } from './analyze';
-export { ShelfInputError } from './errors';
 export {
 	DEFLECTION_LIMITS,
 	deflectionLimit,

@@ -1,7 +1,7 @@
 /**
  * From a validated request (SI numbers) to the model the beam solver works on: materials chosen,
  * section built, supports and loads laid out. Problems a schema cannot see (an unknown material,
- * solid wood across the grain) become ShelfInputError issues naming the field.
+ * solid wood across the grain) become InputError issues naming the field.
  */
 import {
 	CUSTOM_CREEP_FACTOR,
@@ -10,11 +10,11 @@ import {
 	type StockThickness
 } from '../../../../reference/materials';
 import type { BeamLoads, EndCondition } from './beam';
-import { ShelfInputError } from './errors';
+import { InputError, type InputIssue } from '../errors';
 import { deflectionLimit, type DeflectionLimit } from './limits';
 import { STANDARD_GRAVITY } from '../units/si';
 import { sectionProperties, type SectionPart, type SectionProperties } from './section';
-import type { EdgeInput, ShelfInput, ShelfIssue, ShelfWarning } from './types';
+import type { EdgeInput, ShelfInput, ShelfWarning } from './types';
 
 const SERVICE_CLASS = { dry: 0, humid: 1, wet: 2 } as const;
 /** A thickness within this of a stocked one is taken as that stock (sheet goods vary about so). */
@@ -59,7 +59,7 @@ function fromLibrary(m: ShelfMaterial): ResolvedMaterial {
 export function resolveMaterial(
 	material: ShelfInput['material'],
 	path: (string | number)[],
-	issues: ShelfIssue[]
+	issues: InputIssue[]
 ): ResolvedMaterial | undefined {
 	if (typeof material === 'string') {
 		const found = findMaterial(material);
@@ -127,7 +127,7 @@ function edgePart(
 	edge: EdgeInput,
 	index: number,
 	input: ShelfInput,
-	issues: ShelfIssue[],
+	issues: InputIssue[],
 	warnings: ShelfWarning[]
 ): SectionPart | undefined {
 	const m = resolveMaterial(edge.material, ['edges', index, 'material'], issues);
@@ -148,9 +148,9 @@ function edgePart(
 	};
 }
 
-/** Lay out a validated request; throws ShelfInputError for problems the schema cannot see. */
+/** Lay out a validated request; throws InputError for problems the schema cannot see. */
 export function buildModel(input: ShelfInput): ShelfModel {
-	const issues: ShelfIssue[] = [];
+	const issues: InputIssue[] = [];
 	const warnings: ShelfWarning[] = [];
 	const panel = resolveMaterial(input.material, ['material'], issues);
 	const edgeParts = input.edges.map((e, i) => edgePart(e, i, input, issues, warnings));
@@ -159,7 +159,7 @@ export function buildModel(input: ShelfInput): ShelfModel {
 			path: ['grain'],
 			message: `${panel.name} is a board: its grain runs along the span. Expected "along", or choose a panel.`
 		});
-	if (!panel || issues.length) throw new ShelfInputError(issues);
+	if (!panel || issues.length) throw new InputError(issues);
 
 	const along = input.grain === 'along';
 	const stock = stockAt(panel, input.thickness);
@@ -212,7 +212,7 @@ function layOut(
 			: ENDS[support];
 
 	// a span so short that its allowed sag rounds to nothing cannot be checked (a margin of 0/0)
-	const issues: ShelfIssue[] = [];
+	const issues: InputIssue[] = [];
 	spans.forEach((l, i) => {
 		if (!(limit.allowed(l) > 0))
 			issues.push({
@@ -220,7 +220,7 @@ function layOut(
 				message: 'Too short to check against the limit: expected a span of at least a millimetre.'
 			});
 	});
-	if (issues.length) throw new ShelfInputError(issues);
+	if (issues.length) throw new InputError(issues);
 
 	const applied: BeamLoads = { points: [], udls: [] };
 	for (const load of input.loads) {

@@ -5,7 +5,7 @@
  */
 import { maxMoment } from './beam';
 import { analyzeInput, checkSpans, marginOfModel, solveShelf } from './analyze';
-import { ShelfInputError } from './errors';
+import { InputError } from '../errors';
 import { buildModel, relayOut, type ShelfModel } from './model';
 import { partStresses } from './section';
 import type {
@@ -79,7 +79,7 @@ function rejectPositioned(input: { loads: ShelfInput['loads'] }, what: string) {
 				]
 			: []
 	);
-	if (issues.length) throw new ShelfInputError(issues);
+	if (issues.length) throw new InputError(issues);
 }
 
 export interface MaxSpanResult {
@@ -113,7 +113,7 @@ export function maxSpanInput(input: MaxSpanInput): MaxSpanResult {
 	let lo = 0.01;
 	const glo = g(lo);
 	if (glo < 0)
-		throw new ShelfInputError([
+		throw new InputError([
 			{
 				path: ['thickness'],
 				message: 'Even a 10 mm span does not meet the limit: check the figures.'
@@ -163,7 +163,7 @@ export function minThicknessInput(input: MinThicknessInput): MinThicknessResult 
 		lib.thicknesses.map((t) => ({ thickness: t.actualM, label: t.label }))
 	).sort((a, b) => a.thickness - b.thickness);
 	if (!candidates.length)
-		throw new ShelfInputError([
+		throw new InputError([
 			{
 				path: ['candidates'],
 				message:

@@ -238,9 +238,7 @@ export interface ShelfResult {
 }
 
 /** Where a request went wrong: the field and what was expected. */
-export interface ShelfIssue {
-	path: (string | number)[];
-	message: string;
-}
+export type { InputIssue } from '../errors';
+import type { InputIssue } from '../errors';
 
-export type SafeResult<T> = { ok: true; result: T } | { ok: false; issues: ShelfIssue[] };
+export type SafeResult<T> = { ok: true; result: T } | { ok: false; issues: InputIssue[] };

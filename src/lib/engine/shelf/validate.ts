@@ -3,7 +3,7 @@
  * loads that lie on the shelf). The shelf schema reports them while reading a request; the case
  * check runs them on the shelves it builds. Every issue names its field.
  */
-import type { ShelfIssue } from './types';
+import type { InputIssue } from '../errors';
 
 export interface GeometryView {
 	span?: number;
@@ -14,8 +14,8 @@ export interface GeometryView {
 	edges: { side: string }[];
 }
 
-export function geometryIssues(value: GeometryView, spanNeeded: boolean): ShelfIssue[] {
-	const issues: ShelfIssue[] = [];
+export function geometryIssues(value: GeometryView, spanNeeded: boolean): InputIssue[] {
+	const issues: InputIssue[] = [];
 	const spans = typeof value.support === 'object' ? value.support.spans : undefined;
 	const total = spans ? spans.reduce((a, b) => a + b, 0) : value.span;
 	if (spans && value.span !== undefined && Math.abs(value.span - (total ?? 0)) > 0.001)

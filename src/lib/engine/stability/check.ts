@@ -9,7 +9,8 @@ import {
 	F3096_14_PULL_N,
 	F3096_23_PULL_N
 } from '../../../../reference/tipping';
-import { JoineryInputError, nonNegative, positive } from '../joinery/validate';
+import { InputError } from '../errors';
+import { nonNegative, positive } from '../joinery/validate';
 import { anchoringAdvice } from './anchoring';
 import { STABILITY_CAUTIONS } from './cautions';
 import { casePoints, contentsPoints, drawerExtension, frontPoints, rearranged } from './points';
@@ -45,10 +46,10 @@ export function checkStabilitySI(req: StabilityRequest): StabilityResult {
 	const depthM = positive(req.depthM, 'depthM');
 	const setback = nonNegative(req.base?.setbackM ?? 0, 'base.setbackM');
 	if (setback >= depthM)
-		throw new JoineryInputError('base.setbackM', 'expected less than the case depth');
+		throw InputError.at('base.setbackM', 'expected less than the case depth');
 	const tiltDeg = nonNegative(req.floorTiltDeg ?? 0, 'floorTiltDeg');
 	if (tiltDeg > MAX_TILT_DEG)
-		throw new JoineryInputError('floorTiltDeg', `expected at most ${MAX_TILT_DEG}°`);
+		throw InputError.at('floorTiltDeg', `expected at most ${MAX_TILT_DEG}°`);
 	const f: Frame = { pivotXM: setback, tiltRad: (tiltDeg * Math.PI) / 180 };
 
 	const body = casePoints(req);
@@ -71,7 +72,7 @@ export function checkStabilitySI(req: StabilityRequest): StabilityResult {
 	// test weight on the front edge that has the longest lever.
 	const zA = req.anchoring?.heightM ?? heightM;
 	if (!Number.isFinite(zA) || zA <= 0 || zA > heightM)
-		throw new JoineryInputError('anchoring.heightM', 'expected a height within the case');
+		throw InputError.at('anchoring.heightM', 'expected a height within the case');
 	const weightMoment = worst
 		? F2057_TEST_WEIGHT_N * Math.max(0, verticalLever(worst.xM, worst.zM, f))
 		: 0;

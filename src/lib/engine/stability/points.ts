@@ -1,4 +1,5 @@
-import { JoineryInputError, nonNegative, positive } from '../joinery/validate';
+import { InputError } from '../errors';
+import { nonNegative, positive } from '../joinery/validate';
 import type { MassPoint } from './statics';
 import type { Construction, StabilityRequest } from './types';
 
@@ -8,10 +9,10 @@ const LIST_MAX = 500;
 export function casePoints(req: StabilityRequest): MassPoint[] {
 	const c: Construction = req.construction;
 	if (!c || typeof c !== 'object')
-		throw new JoineryInputError('construction', 'expected { massKg } or { parts }');
+		throw InputError.at('construction', 'expected { massKg } or { parts }');
 	if ('parts' in c) {
 		if (!Array.isArray(c.parts) || c.parts.length === 0 || c.parts.length > LIST_MAX)
-			throw new JoineryInputError('construction.parts', `expected 1 to ${LIST_MAX} parts`);
+			throw InputError.at('construction.parts', `expected 1 to ${LIST_MAX} parts`);
 		return c.parts.map((p, i) => {
 			const f = `construction.parts.${i}`;
 			const massKg =
@@ -46,7 +47,7 @@ export function casePoints(req: StabilityRequest): MassPoint[] {
 export function contentsPoints(req: StabilityRequest): MassPoint[] {
 	const list = req.contents ?? [];
 	if (list.length > LIST_MAX)
-		throw new JoineryInputError('contents', `expected at most ${LIST_MAX} entries`);
+		throw InputError.at('contents', `expected at most ${LIST_MAX} entries`);
 	return list.map((c, i) => ({
 		massKg: nonNegative(c.massKg, `contents.${i}.massKg`),
 		xM:
@@ -72,8 +73,8 @@ export function frontPoints(req: StabilityRequest, open: boolean, loaded: boolea
 	const drawers = req.drawers ?? [];
 	const doors = req.doors ?? [];
 	if (drawers.length > LIST_MAX)
-		throw new JoineryInputError('drawers', `expected at most ${LIST_MAX}`);
-	if (doors.length > LIST_MAX) throw new JoineryInputError('doors', `expected at most ${LIST_MAX}`);
+		throw InputError.at('drawers', `expected at most ${LIST_MAX}`);
+	if (doors.length > LIST_MAX) throw InputError.at('doors', `expected at most ${LIST_MAX}`);
 	const out: MassPoint[] = drawers.map((d, i) => ({
 		massKg:
 			nonNegative(d.massKg, `drawers.${i}.massKg`) +
@@ -106,9 +107,7 @@ export function drawerExtension(req: StabilityRequest, i: number): number {
 
 function within(v: unknown, min: number, max: number, field: string): number {
 	if (typeof v !== 'number' || !Number.isFinite(v) || v < min || v > max)
-		throw new JoineryInputError(
-			field,
-			`expected a number from ${min} to ${max.toPrecision(4)} (metres), got ${String(v)}`
+		throw InputError.at(field, `expected a number from ${min} to ${max.toPrecision(4)} (metres), got ${String(v)}`
 		);
 	return v;
 }

@@ -7,7 +7,7 @@ import type { CaseJoint, CaseMargin, CaseSuggestion, DesignChange } from '../cas
 import { JOINT_CAUTIONS } from '../joinery/cautions';
 import { planJointSI } from '../joinery/plan';
 import type { JointPlan, JointRequest } from '../joinery/types';
-import { JoineryInputError } from '../joinery/validate';
+import { InputError } from '../errors';
 import { F2057_CARPET_BLOCK_M, F2057_FILL_KG_PER_M3 } from '../../../../reference/tipping';
 import { STABILITY_CAUTIONS } from '../stability/cautions';
 import { checkStabilitySI } from '../stability/check';
@@ -54,12 +54,12 @@ class WallShelfAnalyses extends ShelfAnalyses {
 }
 
 const prefixed = (ci: number, e: unknown): never => {
-	if (e instanceof JoineryInputError) {
+	if (e instanceof InputError) {
 		const issues = e.issues.map((i) => ({
 			path: i.path[0] === 'cases' ? i.path : ['cases', ci, ...i.path],
 			message: i.message
 		}));
-		throw new JoineryInputError(issues[0].path.join('.'), issues[0].message, issues);
+		throw new InputError(issues);
 	}
 	throw e;
 };
@@ -68,7 +68,7 @@ const prefixed = (ci: number, e: unknown): never => {
  * Check a wall of cases: each shelf (in its bay, or continuous over dividers), each joint, each
  * case's tip-over with its drawers opened and doors swung, the margins worst first with the fixes
  * that clear them, and every part of the run. SI input (src/lib/schemas/wall.ts parses what users
- * type). Throws JoineryInputError naming the field.
+ * type). Throws InputError naming the field.
  */
 export function checkWall(w: WallDesign): WallResult {
 	const n = w.cases.length;
