@@ -65,7 +65,14 @@ export function shelfCases(count: number, seed = 7): ShelfInput[] {
 		const span = 0.3 + next() * 1.2;
 		const strip =
 			next() < 0.3
-				? [{ side: 'front' as const, material: oak, height: 0.02 + next() * 0.04, thickness: 0.019 }]
+				? [
+						{
+							side: 'front' as const,
+							material: oak,
+							height: 0.02 + next() * 0.04,
+							thickness: 0.019
+						}
+					]
 				: [];
 		const loads: ShelfInput['loads'] =
 			next() < 0.7
@@ -189,7 +196,10 @@ export function answersOf() {
 						reactions: s.analysis.reactions
 					})),
 					joints: r.joints.map((j) => ({ id: j.id, count: j.plan.count, pass: j.plan.pass })),
-					stability: { centreOfGravity: r.stability.centreOfGravity, tipForceAtTopN: r.stability.tipForceAtTopN },
+					stability: {
+						centreOfGravity: r.stability.centreOfGravity,
+						tipForceAtTopN: r.stability.tipForceAtTopN
+					},
 					margins: r.margins,
 					suggestions: r.suggestions,
 					parts: r.parts
@@ -215,7 +225,12 @@ export function caseDesigns(): CaseDesign[] {
 			joint: 'pocket-screw' as const,
 			loads: [{ kind: 'area' as const, pressure: pressure(i) }]
 		})),
-		faceFrame: { material: 'red-oak', thickness: '3/4"', stileWidth: '1 1/2"', railWidth: '2 1/2"' },
+		faceFrame: {
+			material: 'red-oak',
+			thickness: '3/4"',
+			stileWidth: '1 1/2"',
+			railWidth: '2 1/2"'
+		},
 		base: { height: '4"', setback: '3"' },
 		anchoring: { kind: 'bracket', intoStuds: true }
 	});

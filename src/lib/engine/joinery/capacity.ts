@@ -49,8 +49,7 @@ export function resolveStock(material: StockMaterial, field: string): ResolvedSt
 	}
 	const g = positive(material.specificGravity, `${field}.specificGravity`);
 	if (g > 1.5)
-		throw InputError.at(`${field}.specificGravity`, 'expected a specific gravity below 1.5'
-		);
+		throw InputError.at(`${field}.specificGravity`, 'expected a specific gravity below 1.5');
 	return {
 		name: material.name ?? `custom ${material.kind}`,
 		kind: material.kind,

@@ -30,8 +30,7 @@ const PLANNERS: Record<FastenerKind, (ctx: PlanContext) => FastenerPart> = {
  * carries the cautions.
  */
 export function planJointSI(req: JointRequest): JointPlan {
-	if (!KINDS.includes(req.kind))
-		throw InputError.at('kind', `expected one of ${KINDS.join(', ')}`);
+	if (!KINDS.includes(req.kind)) throw InputError.at('kind', `expected one of ${KINDS.join(', ')}`);
 	const planner = PLANNERS[req.fastener];
 	if (!planner)
 		throw InputError.at('fastener', `expected one of ${Object.keys(PLANNERS).join(', ')}`);

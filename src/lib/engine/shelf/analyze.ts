@@ -51,15 +51,26 @@ export interface Solved {
 	creepApplies: boolean;
 }
 
+/** A beam of the model's supports with the given stiffnesses (written out in full: spreading an
+ * object while adding keys is slow on the hot path of the solvers). */
+function beamOf(model: ShelfModel, ei: number, ga: number): BeamModel {
+	return { length: model.length, left: model.left, right: model.right, inner: model.inner, ei, ga };
+}
+
 function beamsOf(model: ShelfModel): { instant: BeamModel; creep: BeamModel; loads: BeamLoads } {
 	const { section, input } = model;
 	const shear = input.options.shearDeflection;
-	const base = { length: model.length, left: model.left, right: model.right, inner: model.inner };
 	return {
-		instant: { ...base, ei: section.ei, ga: shear ? section.ga : Infinity },
-		creep: { ...base, ei: section.eiLongTerm, ga: shear ? section.gaLongTerm : Infinity },
+		instant: beamOf(model, section.ei, shear ? section.ga : Infinity),
+		creep: beamOf(model, section.eiLongTerm, shear ? section.gaLongTerm : Infinity),
 		loads: merge(model.applied, model.selfWeight)
 	};
+}
+
+/** The instant beam under all the loads: what a strength search needs on every step. */
+export function instantSolution(model: ShelfModel): BeamSolution {
+	const { instant, loads } = beamsOf(model);
+	return solveBeam(instant, loads);
 }
 
 export function solveShelf(model: ShelfModel): Solved {
@@ -149,7 +160,11 @@ export function marginOfModel(model: ShelfModel): number {
 
 /** Each span's largest long-term sag against the limit; the governing one has the least margin. */
 export function checkSpans(solved: Solved): Check {
-	const { model, pieces } = solved;
+	return checkPieces(solved.model, solved.pieces);
+}
+
+/** checkSpans on the governing sag's pieces alone (longTermPieces): what a solver needs. */
+export function checkPieces(model: ShelfModel, pieces: SagPieces): Check {
 	const spans: SpanCheck[] = [];
 	let x0 = 0;
 	let governing: SpanCheck | undefined;
@@ -264,7 +279,7 @@ export function analyzeInput(input: ShelfInput): ShelfResult {
 	const { section } = model;
 	const all = solved.all;
 	const instantSag = sagAt(all, g.at);
-	const bendingOnly = solveBeam({ ...all.model, ga: Infinity }, all.loads);
+	const bendingOnly = solveBeam(beamOf(model, section.ei, Infinity), all.loads);
 	const bendingSag = sagAt(bendingOnly, g.at);
 	const swSag =
 		totalLoad(model.selfWeight) > 0

@@ -11,6 +11,7 @@
  * Unknowns: M0 and V0 (moment and shear just right of x = 0), C1, C2 and one reaction per inner
  * support. Equations: two end conditions at each end and v = 0 at every inner support.
  */
+import { bracketedRoot } from './root';
 
 export type EndCondition = 'pin' | 'fixed' | 'free';
 
@@ -44,6 +45,8 @@ export interface BeamSolution {
 }
 
 const pos = (x: number) => (x > 0 ? x : 0);
+/** Two moments closer than this ratio are the same moment (rounding apart). */
+const TIE = 1 + 1e-12;
 
 /** F(x) of the loads alone (all unknowns zero): the bending part of the sag times EI. */
 function loadF(loads: BeamLoads, x: number): number {
@@ -55,7 +58,9 @@ function loadF(loads: BeamLoads, x: number): number {
 	for (const u of loads.udls) {
 		const a = pos(x - u.from);
 		const b = pos(x - u.to);
-		f += (u.w * (a ** 4 - b ** 4)) / 24;
+		const a2 = a * a;
+		const b2 = b * b;
+		f += (u.w * (a2 * a2 - b2 * b2)) / 24;
 	}
 	return f;
 }
@@ -70,7 +75,7 @@ function loadFp(loads: BeamLoads, x: number): number {
 	for (const u of loads.udls) {
 		const a = pos(x - u.from);
 		const b = pos(x - u.to);
-		fp += (u.w * (a ** 3 - b ** 3)) / 6;
+		fp += (u.w * (a * a * a - b * b * b)) / 6;
 	}
 	return fp;
 }
@@ -149,16 +154,11 @@ const END_EQUATIONS: Record<EndCondition, [Quantity, Quantity]> = {
 	free: ['m', 'shear']
 };
 
-/** Gaussian elimination with partial pivoting; rows are scaled first (the units differ). */
-export function solveLinear(a: number[][], b: number[]): number[] {
-	const n = b.length;
-	const flat = new Float64Array(n * n);
-	for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) flat[i * n + j] = a[i][j];
-	return Array.from(solveFlat(flat, Float64Array.from(b), n));
-}
-
-/** solveLinear on an n × n matrix stored row by row; overwrites a and b. */
-function solveFlat(a: Float64Array, b: Float64Array, n: number): Float64Array {
+/**
+ * Gaussian elimination with partial pivoting on an n × n matrix stored row by row; rows are
+ * scaled first (the units differ). Overwrites a and b and writes the solution into x.
+ */
+function solveFlat(a: Float64Array, b: Float64Array, n: number, x: Float64Array): void {
 	for (let i = 0; i < n; i++) {
 		let scale = 0;
 		for (let j = 0; j < n; j++) scale = Math.max(scale, Math.abs(a[i * n + j]));
@@ -189,19 +189,28 @@ function solveFlat(a: Float64Array, b: Float64Array, n: number): Float64Array {
 			b[i] -= f * b[k];
 		}
 	}
-	const x = new Float64Array(n);
 	for (let i = n - 1; i >= 0; i--) {
 		let s = b[i];
 		for (let j = i + 1; j < n; j++) s -= a[i * n + j] * x[j];
 		x[i] = s / a[i * n + i];
 	}
-	return x;
 }
+
+/** Scratch space of the linear solve, reused by every solve (the engine runs on one thread). */
+let scratchA = new Float64Array(16 * 16);
+let scratchB = new Float64Array(16);
+let scratchX = new Float64Array(16);
 
 export function solveBeam(model: BeamModel, loads: BeamLoads): BeamSolution {
 	const n = 4 + model.inner.length;
-	const a = new Float64Array(n * n);
-	const b = new Float64Array(n);
+	if (scratchB.length < n) {
+		scratchA = new Float64Array(n * n);
+		scratchB = new Float64Array(n);
+		scratchX = new Float64Array(n);
+	}
+	const a = scratchA;
+	const b = scratchB;
+	a.fill(0, 0, n * n);
 	const left = END_EQUATIONS[model.left];
 	const right = END_EQUATIONS[model.right];
 	b[0] = -writeRow(model, loads, left[0], 0, a, 0);
@@ -210,7 +219,8 @@ export function solveBeam(model: BeamModel, loads: BeamLoads): BeamSolution {
 	b[3] = -writeRow(model, loads, right[1], model.length, a, 3 * n);
 	for (let j = 0; j < model.inner.length; j++)
 		b[4 + j] = -writeRow(model, loads, 'v', model.inner[j], a, (4 + j) * n);
-	const u = solveFlat(a, b, n);
+	const u = scratchX;
+	solveFlat(a, b, n, u);
 	const inner: number[] = new Array(n - 4);
 	for (let j = 4; j < n; j++) inner[j - 4] = u[j];
 	return { model, loads, m0: u[0], v0: u[1], c1: u[2], c2: u[3], inner };
@@ -268,7 +278,8 @@ export function reactions(s: BeamSolution): { at: number; force: number; moment:
 	return out;
 }
 
-/** Largest absolute bending moment and where: checked at every break point and shear zero. */
+/** Largest absolute bending moment and where: checked at every break point and shear zero. Of
+ * equal moments (to rounding: a fixed shelf's two ends) the first from the left is kept. */
 export function maxMoment(
 	s: BeamSolution,
 	xs = breakPoints(s.model, s.loads)
@@ -280,7 +291,7 @@ export function maxMoment(
 	let at = 0;
 	for (let i = 0; i < xs.length; i++) {
 		const m = Math.abs(momentAt(s, xs[i]));
-		if (m > moment) {
+		if (m > moment * TIE) {
 			moment = m;
 			at = xs[i];
 		}
@@ -297,7 +308,7 @@ export function maxMoment(
 				const x0 = x1 - (v1 * (x2 - x1)) / (v2 - v1);
 				if (x0 > a && x0 < b) {
 					const m0 = Math.abs(momentAt(s, x0));
-					if (m0 > moment) {
+					if (m0 > moment * TIE) {
 						moment = m0;
 						at = x0;
 					}
@@ -325,17 +336,37 @@ export interface SagPieces {
 
 /** Break points of a beam under its loads: where any singularity term switches on. */
 export function breakPoints(model: BeamModel, loads: BeamLoads): Float64Array {
-	const { length } = model;
-	const all: number[] = [0, length];
-	for (const s of model.inner) all.push(s);
-	for (const p of loads.points) all.push(p.at);
-	for (const u of loads.udls) all.push(u.from, u.to);
-	all.sort((a, b) => a - b);
-	const xs: number[] = [];
-	for (const x of all)
-		if (x >= 0 && x <= length && (xs.length === 0 || x > xs[xs.length - 1])) xs.push(x);
-	return Float64Array.from(xs);
+	const { length, inner } = model;
+	const needed = 2 + inner.length + loads.points.length + 2 * loads.udls.length;
+	if (breakScratch.length < needed) breakScratch = new Float64Array(2 * needed);
+	const all = breakScratch;
+	let n = 0;
+	all[n++] = 0;
+	all[n++] = length;
+	for (let i = 0; i < inner.length; i++) all[n++] = inner[i];
+	for (let i = 0; i < loads.points.length; i++) all[n++] = loads.points[i].at;
+	for (let i = 0; i < loads.udls.length; i++) {
+		all[n++] = loads.udls[i].from;
+		all[n++] = loads.udls[i].to;
+	}
+	// insertion sort: a handful of points, mostly in order already
+	for (let i = 1; i < n; i++) {
+		const x = all[i];
+		let j = i - 1;
+		while (j >= 0 && all[j] > x) {
+			all[j + 1] = all[j];
+			j--;
+		}
+		all[j + 1] = x;
+	}
+	let m = 0;
+	for (let i = 0; i < n; i++) {
+		const x = all[i];
+		if (x >= 0 && x <= length && (m === 0 || x > all[m - 1])) all[m++] = x;
+	}
+	return all.slice(0, m);
 }
+let breakScratch = new Float64Array(32);
 
 /** Add k·(x − p)ᵏ for the segment starting at a ≥ p, in t = x − a, to c[o … o + 4]. */
 function addPower(c: Float64Array, o: number, k: number, power: number, e: number): void {
@@ -403,14 +434,6 @@ export function addSagPieces(s: BeamSolution, xs: Float64Array, c: Float64Array,
 	}
 }
 
-/** The sag of one solution as pieces on its own break points. */
-export function sagPieces(s: BeamSolution): SagPieces {
-	const xs = breakPoints(s.model, s.loads);
-	const c = new Float64Array(5 * Math.max(0, xs.length - 1));
-	addSagPieces(s, xs, c);
-	return { xs, c };
-}
-
 /** Value of segment i at t (from the segment's start). */
 export function pieceAt(c: Float64Array, i: number, t: number): number {
 	const o = 5 * i;
@@ -457,6 +480,8 @@ function quadraticRootsIn(q0: number, q1: number, q2: number, h: number, out: nu
 }
 
 const scratch: number[] = [];
+/** where the slope of a segment crosses zero, as a share of the segment's length */
+const PEAK_TOLERANCE = 1e-12;
 
 function cubicAt(d0: number, d1: number, d2: number, d3: number, t: number): number {
 	return d0 + t * (d1 + t * (d2 + t * d3));
@@ -480,37 +505,22 @@ export function segmentPeak(c: Float64Array, i: number, h: number): { t: number;
 	quadraticRootsIn(d1, 2 * d2, 3 * d3, h, scratch);
 	scratch.push(h);
 	for (let k = 0; k + 1 < scratch.length; k++) {
-		let lo = scratch[k];
-		let hi = scratch[k + 1];
+		const lo = scratch[k];
+		const hi = scratch[k + 1];
 		let t = -1;
 		if (k > 0) t = lo;
-		let fl = cubicAt(d0, d1, d2, d3, lo);
-		let fh = cubicAt(d0, d1, d2, d3, hi);
+		const fl = cubicAt(d0, d1, d2, d3, lo);
+		const fh = cubicAt(d0, d1, d2, d3, hi);
 		// the slope is monotone between these points: a maximum of v only where it falls through 0
 		if (fl > 0 && fh < 0) {
-			// regula falsi with the Illinois correction, bisecting when a step lands outside
-			let side = 0;
-			for (let n = 0; n < 100 && hi - lo > 1e-13 * h; n++) {
-				let m = (lo * fh - hi * fl) / (fh - fl);
-				if (!(m > lo && m < hi)) m = 0.5 * (lo + hi);
-				if (!(m > lo && m < hi)) break;
-				const fm = cubicAt(d0, d1, d2, d3, m);
-				if (fm > 0) {
-					lo = m;
-					fl = fm;
-					if (side === 1) fh /= 2;
-					side = 1;
-				} else if (fm < 0) {
-					hi = m;
-					fh = fm;
-					if (side === -1) fl /= 2;
-					side = -1;
-				} else {
-					lo = hi = m;
-					break;
-				}
-			}
-			const root = 0.5 * (lo + hi);
+			const root = bracketedRoot(
+				(x) => cubicAt(d0, d1, d2, d3, x),
+				lo,
+				hi,
+				PEAK_TOLERANCE * h,
+				fl,
+				fh
+			);
 			if (t >= 0) {
 				const y = pieceAt(c, i, t);
 				if (y > best) {

@@ -10,13 +10,13 @@ export {
 	minThicknessInput,
 	minEdgeInput,
 	maxLoadInput,
-	bracketedRoot,
 	type MaxSpanResult,
 	type MinThicknessResult,
 	type MinEdgeResult,
 	type MaxLoadResult,
 	type ThicknessTrial
 } from './solvers';
+export { bracketedRoot, rootNear, type RootSearch } from './root';
 export { DEFAULT_SHELF_OPTIONS } from './types';
 export type * from './types';
 export { geometryIssues, type GeometryView } from './validate';

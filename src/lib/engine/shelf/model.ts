@@ -6,7 +6,6 @@
 import {
 	CUSTOM_CREEP_FACTOR,
 	findMaterial,
-	type ShelfMaterial,
 	type StockThickness
 } from '../../../../reference/materials';
 import type { BeamLoads, EndCondition } from './beam';
@@ -38,7 +37,11 @@ export interface ResolvedMaterial {
 }
 
 export interface ShelfModel {
+	/** the request as given; a solver's model keeps the one it started from, and its spans,
+	 * thickness and loads are the model's own (below) */
 	input: ShelfInput;
+	/** actual thickness of the panel, m */
+	thickness: number;
 	spans: number[];
 	length: number;
 	left: EndCondition;
@@ -50,10 +53,6 @@ export interface ShelfModel {
 	selfWeight: BeamLoads;
 	limit: DeflectionLimit;
 	warnings: ShelfWarning[];
-}
-
-function fromLibrary(m: ShelfMaterial): ResolvedMaterial {
-	return { ...m, kind: m.kind };
 }
 
 export function resolveMaterial(
@@ -70,7 +69,7 @@ export function resolveMaterial(
 			});
 			return undefined;
 		}
-		return fromLibrary(found);
+		return found;
 	}
 	const kdef = (material.creepFactor ?? CUSTOM_CREEP_FACTOR) - 1;
 	return {
@@ -127,13 +126,14 @@ function edgePart(
 	edge: EdgeInput,
 	index: number,
 	input: ShelfInput,
+	thickness: number,
 	issues: InputIssue[],
 	warnings: ShelfWarning[]
 ): SectionPart | undefined {
 	const m = resolveMaterial(edge.material, ['edges', index, 'material'], issues);
 	if (!m) return undefined;
 	const name = `${edge.side} strip`;
-	const top = edge.side === 'below' ? input.thickness : 0;
+	const top = edge.side === 'below' ? thickness : 0;
 	return {
 		name,
 		width: edge.thickness,
@@ -148,12 +148,22 @@ function edgePart(
 	};
 }
 
-/** Lay out a validated request; throws InputError for problems the schema cannot see. */
-export function buildModel(input: ShelfInput): ShelfModel {
+/**
+ * Lay out a validated request; throws InputError for problems the schema cannot see. A solver
+ * varying the thickness or the strips passes them here instead of building a request for each try
+ * (the model is the same as buildModel of that request).
+ */
+export function buildModel(
+	input: ShelfInput,
+	thickness = input.thickness,
+	edges = input.edges
+): ShelfModel {
 	const issues: InputIssue[] = [];
 	const warnings: ShelfWarning[] = [];
 	const panel = resolveMaterial(input.material, ['material'], issues);
-	const edgeParts = input.edges.map((e, i) => edgePart(e, i, input, issues, warnings));
+	const edgeParts: (SectionPart | undefined)[] = [];
+	for (let i = 0; i < edges.length; i++)
+		edgeParts.push(edgePart(edges[i], i, input, thickness, issues, warnings));
 	if (panel && input.grain === 'across' && panel.modulusAcrossPa === null)
 		issues.push({
 			path: ['grain'],
@@ -162,14 +172,14 @@ export function buildModel(input: ShelfInput): ShelfModel {
 	if (!panel || issues.length) throw new InputError(issues);
 
 	const along = input.grain === 'along';
-	const stock = stockAt(panel, input.thickness);
+	const stock = stockAt(panel, thickness);
 	const modulus = along
 		? (stock?.modulusAlongPa ?? alongModulus(panel, input))
 		: (stock?.modulusAcrossPa ?? panel.modulusAcrossPa!);
 	const panelPart: SectionPart = {
 		name: 'panel',
 		width: input.depth,
-		height: input.thickness,
+		height: thickness,
 		top: 0,
 		modulusPa: modulus,
 		shearModulusPa: panel.shearModulusPa,
@@ -182,7 +192,8 @@ export function buildModel(input: ShelfInput): ShelfModel {
 		STANDARD_GRAVITY
 	);
 
-	return layOut(input, section, panel, deflectionLimit(input.limit), warnings);
+	const spans = spansOf(input);
+	return layOut(input, thickness, section, panel, deflectionLimit(input.limit), warnings, spans);
 }
 
 const ENDS: Record<'simple' | 'fixed' | 'cantilever', [EndCondition, EndCondition]> = {
@@ -191,17 +202,25 @@ const ENDS: Record<'simple' | 'fixed' | 'cantilever', [EndCondition, EndConditio
 	cantilever: ['fixed', 'free']
 };
 
+/** The spans of a request, left to right, m. */
+export function spansOf(input: ShelfInput): number[] {
+	return typeof input.support === 'object' ? input.support.spans : [input.span ?? Number.NaN];
+}
+
 /** The parts of a model that hang on the spans, supports and loads, around a built section. */
 function layOut(
 	input: ShelfInput,
+	thickness: number,
 	section: SectionProperties,
 	panel: ResolvedMaterial,
 	limit: DeflectionLimit,
-	warnings: ShelfWarning[]
+	warnings: ShelfWarning[],
+	spans: number[],
+	loads = input.loads
 ): ShelfModel {
 	const support = input.support;
-	const spans = typeof support === 'object' ? support.spans : [input.span ?? Number.NaN];
-	const length = spans.reduce((a, b) => a + b, 0);
+	let length = 0;
+	for (const l of spans) length += l;
 	const inner: number[] = [];
 	for (let i = 0, x = 0; i < spans.length - 1; i++) inner.push((x += spans[i]));
 	const [left, right] =
@@ -223,7 +242,7 @@ function layOut(
 	if (issues.length) throw new InputError(issues);
 
 	const applied: BeamLoads = { points: [], udls: [] };
-	for (const load of input.loads) {
+	for (const load of loads) {
 		if (load.kind === 'area')
 			applied.udls.push({ from: 0, to: length, w: load.pressure * input.depth });
 		else if (load.kind === 'line') {
@@ -238,6 +257,7 @@ function layOut(
 
 	return {
 		input,
+		thickness,
 		spans,
 		length,
 		left,
@@ -253,14 +273,19 @@ function layOut(
 }
 
 /**
- * The model of an input that differs from the model's own only in span, spans or loads: the
- * section, materials and limit are kept, the rest laid out again. What a solver varying the
- * span or a load calls on every step (same numbers as buildModel of that input).
+ * The model with other spans (the same number of them) or other loads: the section, materials
+ * and limit are kept, the rest laid out again. What a solver varying the span or a load calls on
+ * every step (the same numbers as buildModel of a request with those spans and loads).
  */
-export function relayOut(model: ShelfModel, input: ShelfInput): ShelfModel {
-	return layOut(input, model.section, model.panel, model.limit, model.warnings);
+export function relayOut(
+	model: ShelfModel,
+	spans: number[],
+	loads = model.input.loads
+): ShelfModel {
+	const { input, thickness, section, panel, limit, warnings } = model;
+	return layOut(input, thickness, section, panel, limit, warnings, spans, loads);
 }
 
 export function isStocked(model: ShelfModel): boolean {
-	return model.panel.kind === 'custom' || stockAt(model.panel, model.input.thickness) !== undefined;
+	return model.panel.kind === 'custom' || stockAt(model.panel, model.thickness) !== undefined;
 }

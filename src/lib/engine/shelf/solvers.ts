@@ -1,12 +1,23 @@
 /**
  * Inverse questions: the longest span, the thinnest stocked thickness, the smallest front strip
  * and the largest load that meet the limit. Each runs the whole analysis (bending, shear, creep,
- * self-weight) inside a bracketed root find, so none is a closed-form shortcut.
+ * self-weight) inside a bracketed root find, so none is a closed-form shortcut. The closed forms
+ * only give each search its starting estimate (shelf/root.ts grows a bracket from it).
+ *
+ * Speed (issue 12): a try never builds a request; it lays the model out again with its own spans,
+ * thickness, strips or loads (buildModel's and relayOut's arguments).
  */
 import { maxMoment } from './beam';
-import { analyzeInput, checkSpans, marginOfModel, solveShelf } from './analyze';
+import {
+	analyzeInput,
+	checkPieces,
+	instantSolution,
+	longTermPieces,
+	marginOfModel
+} from './analyze';
 import { InputError } from '../errors';
-import { buildModel, relayOut, type ShelfModel } from './model';
+import { buildModel, relayOut, spansOf, type ShelfModel } from './model';
+import { bracketedRoot, rootNear } from './root';
 import { partStresses } from './section';
 import type {
 	MaxLoadInput,
@@ -20,53 +31,7 @@ import { METRES_PER_INCH } from '../units/length';
 
 const INCH = METRES_PER_INCH;
 const MAX_SPAN_M = 10;
-
-/**
- * Root of g on [a, b] where g(a) and g(b) differ in sign: regula falsi with the Illinois
- * correction, falling back to bisection when a step would not shrink the bracket enough.
- */
-export function bracketedRoot(
-	g: (x: number) => number,
-	a: number,
-	b: number,
-	tolerance: number,
-	ga = g(a),
-	gb = g(b)
-): number {
-	if (ga === 0) return a;
-	if (gb === 0) return b;
-	if (ga * gb > 0) throw new Error('bracketedRoot: the bracket holds no sign change');
-	let side = 0;
-	for (let i = 0; i < 200 && Math.abs(b - a) > tolerance; i++) {
-		let c = (a * gb - b * ga) / (gb - ga);
-		const width = Math.abs(b - a);
-		if (!(c > Math.min(a, b) && c < Math.max(a, b)) || i % 8 === 7) c = (a + b) / 2;
-		const gc = g(c);
-		if (gc === 0) return c;
-		if (gc * gb > 0) {
-			b = c;
-			gb = gc;
-			if (side === -1) ga /= 2;
-			side = -1;
-		} else {
-			a = c;
-			ga = gc;
-			if (side === 1) gb /= 2;
-			side = 1;
-		}
-		if (Math.abs(b - a) > 0.9 * width && i % 8 !== 7) {
-			// a slow step: the next pass bisects
-			side = 0;
-		}
-	}
-	// the side that passes (g ≥ 0)
-	return ga >= 0 ? a : b;
-}
-
-/** Governing margin of a validated input: positive passes. */
-export function marginOf(input: ShelfInput): number {
-	return marginOfModel(buildModel(input));
-}
+const MIN_SPAN_M = 0.01;
 
 function rejectPositioned(input: { loads: ShelfInput['loads'] }, what: string) {
 	const issues = input.loads.flatMap((l, i) =>
@@ -96,38 +61,35 @@ export interface MaxSpanResult {
 export function maxSpanInput(input: MaxSpanInput): MaxSpanResult {
 	rejectPositioned(input, 'the longest-span search');
 	const base = typeof input.support === 'object' ? input.support.spans : [1];
-	const baseTotal = base.reduce((a, b) => a + b, 0);
-	const at = (total: number): ShelfInput => {
+	let baseTotal = 0;
+	for (const b of base) baseTotal += b;
+	const spansAt = (total: number) => {
 		const s = total / baseTotal;
-		if (typeof input.support === 'object')
-			return {
-				...input,
-				span: undefined,
-				support: { ...input.support, spans: base.map((b) => b * s) }
-			};
-		return { ...input, span: total };
+		const out = new Array<number>(base.length);
+		for (let i = 0; i < base.length; i++) out[i] = base[i] * s;
+		return out;
 	};
+	const at = (total: number): ShelfInput =>
+		typeof input.support === 'object'
+			? { ...input, span: undefined, support: { ...input.support, spans: spansAt(total) } }
+			: { ...input, span: total };
 	// the section, materials and limit do not hang on the span: build them once
 	const model = buildModel(at(1));
-	const g = (total: number) => marginOfModel(relayOut(model, at(total)));
-	let lo = 0.01;
-	const glo = g(lo);
-	if (glo < 0)
+	const g = (total: number) => marginOfModel(relayOut(model, spansAt(total)));
+	// closed-form start: under a uniform load the sag grows as L⁴ and an L/n limit as L, so
+	// sag/allowed grows as L³ from its value at 1 m
+	const r1 = 1 - g(1);
+	const estimate = r1 > 0 ? Math.cbrt(1 / r1) : MAX_SPAN_M;
+	const found = rootNear(g, estimate, MIN_SPAN_M, MAX_SPAN_M, 1e-5, false, 1.005);
+	if (!found.found && found.bound === 'min')
 		throw new InputError([
 			{
 				path: ['thickness'],
 				message: 'Even a 10 mm span does not meet the limit: check the figures.'
 			}
 		]);
-	let hi = 0.5;
-	let ghi = g(hi);
-	while (ghi >= 0 && hi < MAX_SPAN_M) {
-		lo = hi;
-		hi = Math.min(hi * 2, MAX_SPAN_M);
-		ghi = g(hi);
-	}
-	const capped = ghi >= 0;
-	const span = capped ? MAX_SPAN_M : bracketedRoot(g, lo, hi, 1e-5, g(lo), ghi);
+	const capped = !found.found;
+	const span = found.x;
 	const final = at(span);
 	return {
 		span,
@@ -157,7 +119,9 @@ export interface MinThicknessResult {
 
 /** The thinnest stocked (or given) thickness that meets the limit. */
 export function minThicknessInput(input: MinThicknessInput): MinThicknessResult {
-	const lib = buildModel({ ...input, thickness: 0.019 }).panel;
+	// the request with a thickness in it (tried, then replaced by each candidate's)
+	const shelf: ShelfInput = { ...input, thickness: 0.019 };
+	const lib = buildModel(shelf).panel;
 	const candidates = (
 		input.candidates?.map((t) => ({ thickness: t, label: `${(t * 1000).toFixed(1)} mm` })) ??
 		lib.thicknesses.map((t) => ({ thickness: t.actualM, label: t.label }))
@@ -170,29 +134,43 @@ export function minThicknessInput(input: MinThicknessInput): MinThicknessResult 
 					'A material given by its figures has no stocked thicknesses: expected a list of candidate thicknesses.'
 			}
 		]);
+	const g = (t: number) => marginOfModel(buildModel(shelf, t));
 	const tried: ThicknessTrial[] = [];
 	let chosen: (typeof candidates)[number] | undefined;
+	// the last candidate that failed and the first that passed bracket the exact thickness
+	let below: { t: number; g: number } | undefined;
+	let above: { t: number; g: number } | undefined;
 	for (const c of candidates) {
-		const check = checkSpans(solveShelf(buildModel({ ...input, thickness: c.thickness })));
-		const g = check.governing;
+		const model = buildModel(shelf, c.thickness);
+		const check = checkPieces(model, longTermPieces(model));
+		const gov = check.governing;
+		const pass = check.spans.every((s) => s.pass);
 		tried.push({
 			thickness: c.thickness,
 			label: c.label,
-			sag: g.sag,
-			allowed: g.allowed,
-			pass: check.spans.every((s) => s.pass)
+			sag: gov.sag,
+			allowed: gov.allowed,
+			pass
 		});
-		if (tried[tried.length - 1].pass) {
+		if (pass) {
 			chosen = c;
+			above = { t: c.thickness, g: check.margin };
 			break;
 		}
+		below = { t: c.thickness, g: check.margin };
 	}
-	const g = (t: number) => marginOf({ ...input, thickness: t });
 	const lo = 0.001;
 	const hi = 0.3;
-	const glo = g(lo);
-	const ghi = g(hi);
-	const exact = glo >= 0 ? lo : ghi < 0 ? null : bracketedRoot(g, lo, hi, 1e-6, glo, ghi);
+	let exact: number | null;
+	if (below && above && below.g < 0 && above.g >= 0)
+		exact = bracketedRoot(g, below.t, above.t, 1e-6, below.g, above.g);
+	else {
+		// closed-form start: sag falls as 1/t³, so t·(sag/allowed)^(1/3) just meets the limit
+		const near = above ?? below!;
+		const estimate = near.g < 1 ? near.t * Math.cbrt(1 - near.g) : lo;
+		const found = rootNear(g, estimate, lo, hi, 1e-6, true, 1.01);
+		exact = found.found ? found.x : found.bound === 'min' ? lo : null;
+	}
 	return {
 		thickness: chosen?.thickness ?? null,
 		label: chosen?.label ?? null,
@@ -216,23 +194,28 @@ export interface MinEdgeResult {
 export function minEdgeInput(input: MinEdgeInput): MinEdgeResult {
 	const { strip } = input;
 	const others = input.edges.filter((e) => e.side !== strip.side);
-	const withStrip = (h: number): ShelfInput => ({
-		...input,
-		edges: [
-			...others,
-			{ side: strip.side, material: strip.material, thickness: strip.thickness, height: h }
-		]
-	});
+	const edgesWith = (h: number) => [
+		...others,
+		{ side: strip.side, material: strip.material, thickness: strip.thickness, height: h }
+	];
+	const withStrip = (h: number): ShelfInput => ({ ...input, edges: edgesWith(h) });
 	const bare: ShelfInput = { ...input, edges: others };
-	if (marginOf(bare) >= 0)
-		return { needed: false, height: 0, heightRounded: 0, analysis: analyzeInput(bare) };
+	const g0 = marginOfModel(buildModel(bare));
+	if (g0 >= 0) return { needed: false, height: 0, heightRounded: 0, analysis: analyzeInput(bare) };
 	const maxHeight = strip.maxHeight ?? 6 * INCH; // 6": taller strips are aprons, not nosings
-	const g = (h: number) => marginOf(withStrip(h));
+	const g = (h: number) => marginOfModel(buildModel(input, input.thickness, edgesWith(h)));
 	const lo = 0.0005;
-	const glo = g(lo);
-	const ghi = g(maxHeight);
-	if (ghi < 0) return { needed: true, height: null, heightRounded: null, analysis: null };
-	const height = glo >= 0 ? lo : bracketedRoot(g, lo, maxHeight, 1e-6, glo, ghi);
+	// closed-form start: the strip must add the stiffness the bare shelf lacks, EI·(sag/allowed − 1);
+	// a strip of height h adds about E·b·h³/12 (more once it stands below the panel's axis)
+	const bareModel = buildModel(bare);
+	const need = bareModel.section.ei * -g0;
+	const stripModel = buildModel(input, input.thickness, edgesWith(INCH));
+	const perCube = Math.max(1e-9, stripModel.section.ei - bareModel.section.ei) / INCH ** 3;
+	const estimate = Math.cbrt(need / perCube);
+	const found = rootNear(g, estimate, lo, maxHeight, 1e-6, true, 1.01);
+	if (!found.found && found.bound === 'max')
+		return { needed: true, height: null, heightRounded: null, analysis: null };
+	const height = found.x;
 	let rounded = Math.ceil(height / (INCH / 16) - 1e-9) * (INCH / 16);
 	if (g(rounded) < 0) rounded += INCH / 16;
 	return {
@@ -264,39 +247,36 @@ export function maxLoadInput(input: MaxLoadInput): MaxLoadResult {
 			: shape.kind === 'line'
 				? { kind: 'line', intensity: x, from: shape.from, to: shape.to }
 				: { kind: 'point', force: x, at: shape.at };
-	const at = (x: number): ShelfInput => ({ ...input, loads: [...input.loads, loadOf(x)] });
-	// the section, materials and limit do not hang on the load: build them once
+	const loadsAt = (x: number) => [...input.loads, loadOf(x)];
+	const at = (x: number): ShelfInput => ({ ...input, loads: loadsAt(x) });
+	// the section, materials, spans and limit do not hang on the load: build them once
 	const base = buildModel(at(0));
-	const modelAt = (x: number): ShelfModel => relayOut(base, at(x));
+	const spans = spansOf(base.input);
+	const modelAt = (x: number): ShelfModel => relayOut(base, spans, loadsAt(x));
+	const allowedStress = base.section.parts.map((p) => p.rupturePa / input.options.safetyFactor);
 	const utilisation = (x: number) => {
 		const model = modelAt(x);
-		const solved = solveShelf(model);
-		const m = maxMoment(solved.all).moment;
+		const m = maxMoment(instantSolution(model)).moment;
 		const stresses = partStresses(model.section, m);
 		let u = 0;
-		stresses.forEach(
-			(s, i) =>
-				(u = Math.max(u, s / (model.section.parts[i].rupturePa / input.options.safetyFactor)))
-		);
+		for (let i = 0; i < stresses.length; i++) u = Math.max(u, stresses[i] / allowedStress[i]);
 		return u;
 	};
 	const deflection = (x: number) => marginOfModel(modelAt(x));
 	const strength = (x: number) => 1 - utilisation(x);
+	// the first try (SI: Pa, N/m, N) and the largest magnitude searched (the first try × 4ⁿ ≥ 10⁷)
+	const first = shape.kind === 'point' ? 100 : 500;
+	let cap = first;
+	while (cap < 1e7) cap *= 4;
 	const solveFor = (g: (x: number) => number) => {
 		const g0 = g(0);
 		if (g0 < 0) return 0;
-		let lo = 0;
-		let glo = g0;
-		let hi = shape.kind === 'area' ? 500 : shape.kind === 'line' ? 500 : 100; // SI: Pa, N/m, N
-		let ghi = g(hi);
-		while (ghi >= 0 && hi < 1e7) {
-			lo = hi;
-			glo = ghi;
-			hi *= 4;
-			ghi = g(hi);
-		}
-		if (ghi >= 0) return hi;
-		return bracketedRoot(g, lo, hi, 1e-7 * hi, glo, ghi);
+		// closed-form start: sag and moment grow in proportion to the load, so g is a straight
+		// line through its values at 0 and at the first try (exactly so while the peak stays put)
+		const g1 = g(first);
+		const estimate = g1 < g0 ? (first * g0) / (g0 - g1) : cap;
+		const found = rootNear(g, estimate, 1e-9 * first, cap, 1e-7 * estimate, false, 1.0001);
+		return found.found ? found.x : found.bound === 'max' ? cap : found.x;
 	};
 	const byDeflection = solveFor(deflection);
 	const byStrength = solveFor(strength);

@@ -45,8 +45,7 @@ export function checkStabilitySI(req: StabilityRequest): StabilityResult {
 	positive(req.widthM, 'widthM');
 	const depthM = positive(req.depthM, 'depthM');
 	const setback = nonNegative(req.base?.setbackM ?? 0, 'base.setbackM');
-	if (setback >= depthM)
-		throw InputError.at('base.setbackM', 'expected less than the case depth');
+	if (setback >= depthM) throw InputError.at('base.setbackM', 'expected less than the case depth');
 	const tiltDeg = nonNegative(req.floorTiltDeg ?? 0, 'floorTiltDeg');
 	if (tiltDeg > MAX_TILT_DEG)
 		throw InputError.at('floorTiltDeg', `expected at most ${MAX_TILT_DEG}°`);

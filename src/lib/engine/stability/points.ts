@@ -72,8 +72,7 @@ export function rearranged(points: MassPoint[], order: 'low' | 'high'): MassPoin
 export function frontPoints(req: StabilityRequest, open: boolean, loaded: boolean): MassPoint[] {
 	const drawers = req.drawers ?? [];
 	const doors = req.doors ?? [];
-	if (drawers.length > LIST_MAX)
-		throw InputError.at('drawers', `expected at most ${LIST_MAX}`);
+	if (drawers.length > LIST_MAX) throw InputError.at('drawers', `expected at most ${LIST_MAX}`);
 	if (doors.length > LIST_MAX) throw InputError.at('doors', `expected at most ${LIST_MAX}`);
 	const out: MassPoint[] = drawers.map((d, i) => ({
 		massKg:
@@ -107,7 +106,9 @@ export function drawerExtension(req: StabilityRequest, i: number): number {
 
 function within(v: unknown, min: number, max: number, field: string): number {
 	if (typeof v !== 'number' || !Number.isFinite(v) || v < min || v > max)
-		throw InputError.at(field, `expected a number from ${min} to ${max.toPrecision(4)} (metres), got ${String(v)}`
+		throw InputError.at(
+			field,
+			`expected a number from ${min} to ${max.toPrecision(4)} (metres), got ${String(v)}`
 		);
 	return v;
 }

@@ -64,13 +64,17 @@ export function wallCaseGeometry(c: WallCaseDesign, where: string): WallCaseGeom
 	for (const dv of dividers) {
 		const face = dv.xM - dv.thicknessM / 2;
 		if (face - left < 0.01 || dv.topM <= dv.bottomM)
-			throw InputError.at(`${where}.dividers.${dv.index}.at`, 'The divider overlaps a side or another divider, or leaves no room between them.'
+			throw InputError.at(
+				`${where}.dividers.${dv.index}.at`,
+				'The divider overlaps a side or another divider, or leaves no room between them.'
 			);
 		bays.push({ xM: left, widthM: face - left });
 		left = dv.xM + dv.thicknessM / 2;
 	}
 	if (c.width - side - left < 0.01)
-		throw InputError.at(`${where}.dividers.${dividers.length - 1}.at`, 'The divider leaves no room before the right side.'
+		throw InputError.at(
+			`${where}.dividers.${dividers.length - 1}.at`,
+			'The divider leaves no room before the right side.'
 		);
 	bays.push({ xM: left, widthM: c.width - side - left });
 	return {
@@ -92,7 +96,9 @@ export function wallCaseGeometry(c: WallCaseDesign, where: string): WallCaseGeom
 export function bayOf(g: WallCaseGeometry, bay: number | undefined, path: string) {
 	const i = bay ?? 0;
 	if (i >= g.bays.length)
-		throw InputError.at(path, `The case has ${g.bays.length} bay${g.bays.length === 1 ? '' : 's'} (0 to ${g.bays.length - 1}).`
+		throw InputError.at(
+			path,
+			`The case has ${g.bays.length} bay${g.bays.length === 1 ? '' : 's'} (0 to ${g.bays.length - 1}).`
 		);
 	return { index: i, ...g.bays[i] };
 }
@@ -117,7 +123,9 @@ export function shelfSpans(
 	for (const dv of g.dividers) {
 		if (Math.abs(dv.topM - undersideM) <= 0.001) points.push(dv.xM);
 		else if (dv.bottomM < topM - 1e-9 && dv.topM > undersideM + 1e-9)
-			throw InputError.at(`${path}.bay`, `This shelf crosses divider ${dv.index + 1}: put it in a bay, or rest it on top of the divider.`
+			throw InputError.at(
+				`${path}.bay`,
+				`This shelf crosses divider ${dv.index + 1}: put it in a bay, or rest it on top of the divider.`
 			);
 	}
 	points.push(g.sideM + g.innerWidthM);
