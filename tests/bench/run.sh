@@ -2,6 +2,8 @@
 # npm run bench: the Node benches (vitest bench), then a fresh build, the gzipped JavaScript the
 # shelf check route loads, the browser bench (span input to screen in Chromium), and the compute API
 # against a bare node:http server (tests/bench/api/api.ts).
+# The engine rows of issue 12 (solvers, analysis, case check beside their goals and plain
+# closed-form loops) come from tests/bench/engine-rows.ts.
 # It starts with the count of published figures still marked "from memory" or "unverified"
 # (tests/bench/unverified.ts). Benchmarks report; they never fail on a slow number.
 # One run at a time on a machine, shared with the e2e runner: the build folder is shared.
@@ -12,6 +14,7 @@ bash tests/e2e/support/ensure-chromium.sh
 exec 9>/tmp/spanwright-e2e.lock
 flock 9
 npx vitest bench --run
+bash tests/bench/engine-rows.sh
 npx vite build --logLevel warn
 if [ -f tests/bench/route-size.ts ]; then
 	npx tsx tests/bench/route-size.ts

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/lib/engine';
+import { assertFinite } from '../../src/lib/engine/shelf/analyze';
 import {
 	analyzeShelf,
 	maxLoad,
@@ -436,5 +437,38 @@ describe('shear is counted once for solid wood (Wood Handbook Table 5-3a footnot
 		expect(r.sag.bending).toBeCloseTo((5 * w * L ** 4) / (384 * 13750e6 * I), 9);
 		const kGA = (5 / 6) * (12500e6 / 16) * 10 * IN * 0.75 * IN;
 		expect(r.sag.shear).toBeCloseTo((w * L ** 2) / (8 * kGA), 9);
+	});
+});
+
+describe('no NaN or Infinity leaves the engine', () => {
+	// every number of a result, reached by walking it: the check must catch a bad value in each
+	function numberPaths(value: unknown, path: (string | number)[] = []): (string | number)[][] {
+		if (typeof value === 'number') return [path];
+		if (Array.isArray(value)) return value.flatMap((v, i) => numberPaths(v, [...path, i]));
+		if (value && typeof value === 'object')
+			return Object.entries(value).flatMap(([k, v]) => numberPaths(v, [...path, k]));
+		return [];
+	}
+	it('finds a bad value in any number of the result, and passes a good result', () => {
+		const result = analyzeShelf({
+			span: '40"',
+			depth: '11"',
+			thickness: '3/4"',
+			material: 'red-oak',
+			support: { spans: ['20"', '20"'] },
+			loads: [{ kind: 'area', pressure: '40 psf' }],
+			edges: [{ side: 'front', material: 'red-oak', height: '1 1/2"', thickness: '3/4"' }]
+		});
+		expect(() => assertFinite(result)).not.toThrow();
+		const paths = numberPaths(result);
+		expect(paths.length).toBeGreaterThan(250);
+		for (const path of paths)
+			for (const bad of [Number.NaN, Infinity, -Infinity]) {
+				const copy = structuredClone(result);
+				let at: unknown = copy;
+				for (const step of path.slice(0, -1)) at = (at as Record<string | number, unknown>)[step];
+				(at as Record<string | number, unknown>)[path[path.length - 1]] = bad;
+				expect(() => assertFinite(copy), path.join('.')).toThrow(/non-finite/);
+			}
 	});
 });

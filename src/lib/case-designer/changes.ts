@@ -44,6 +44,32 @@ function convert(key: string, value: unknown, unit: UserLengthUnit): unknown {
 	return value;
 }
 
+const isRecord = (v: unknown): v is Record<string | number, unknown> =>
+	typeof v === 'object' && v !== null;
+
+/**
+ * A copy of a draft (case or wall) with each change's value, converted for the form, written at
+ * its path. A path through something the draft does not hold is refused with an error rather
+ * than silently dropped; so is a new last key unless `newKeys` allows it.
+ */
+export function applyAtPaths<T extends object>(
+	draft: T,
+	changes: DesignChange[],
+	convert: (key: string, value: unknown) => unknown,
+	newKeys = false
+): T {
+	const next = structuredClone(draft);
+	for (const { path, value } of changes) {
+		let at: unknown = next;
+		for (const step of path.slice(0, -1)) at = isRecord(at) ? at[step] : undefined;
+		const key = path[path.length - 1];
+		if (!isRecord(at) || (!newKeys && !(key in at)))
+			throw new Error(`No field at ${path.join('.')}`);
+		at[key] = convert(String(key), value);
+	}
+	return next;
+}
+
 /**
  * The draft with the changes applied (a new object; the old one is untouched). A change whose
  * path the form does not hold is refused with an error rather than silently dropped.
@@ -53,17 +79,5 @@ export function applyChanges(
 	changes: DesignChange[],
 	unit: UserLengthUnit
 ): CaseDraft {
-	const next = structuredClone(draft);
-	for (const { path, value } of changes) {
-		let at: Record<string | number, unknown> = next as unknown as Record<string, unknown>;
-		for (const step of path.slice(0, -1)) {
-			const inner = at[step];
-			if (!inner || typeof inner !== 'object') throw new Error(`No field at ${path.join('.')}`);
-			at = inner as Record<string | number, unknown>;
-		}
-		const key = path[path.length - 1];
-		if (!(key in at)) throw new Error(`No field at ${path.join('.')}`);
-		at[key] = convert(String(key), value, unit);
-	}
-	return next;
+	return applyAtPaths(draft, changes, (key, value) => convert(key, value, unit));
 }

@@ -4,7 +4,7 @@
  * direction (a width down, a thickness up), so the text on screen is the design that is checked.
  */
 import type { DesignChange } from '../engine/case/types';
-import { suggestedLengthText } from '../case-designer/changes';
+import { applyAtPaths, suggestedLengthText } from '../case-designer/changes';
 import type { UserLengthUnit } from '../workbench/lengths';
 import { LENGTH_KEYS, type WallDraft } from './draft';
 
@@ -28,16 +28,5 @@ export function applyWallChanges(
 	changes: DesignChange[],
 	unit: UserLengthUnit
 ): WallDraft {
-	const next = structuredClone(draft);
-	for (const { path, value } of changes) {
-		let at = next as unknown as Record<string | number, unknown>;
-		for (const step of path.slice(0, -1)) {
-			const inner = at[step];
-			if (!inner || typeof inner !== 'object') throw new Error(`No field at ${path.join('.')}`);
-			at = inner as Record<string | number, unknown>;
-		}
-		const key = path[path.length - 1];
-		at[key] = convert(String(key), value, unit);
-	}
-	return next;
+	return applyAtPaths(draft, changes, (key, value) => convert(key, value, unit), true);
 }

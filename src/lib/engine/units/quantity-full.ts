@@ -3,14 +3,14 @@
  * unit-table.ts does not list. Importing this module registers it with quantity.ts. The server
  * imports it at start (hooks.server.ts); the browser never does, so mathjs stays out of its bundle.
  */
-import { create, unitDependencies, type Unit } from 'mathjs';
+import { create, unitDependencies, type MathJsInstance, type Unit } from 'mathjs';
 import { STANDARD_GRAVITY } from './si';
 import { useFullUnitParser, type UnitTarget } from './quantity';
 
 // Only the unit machinery: a small slice of mathjs, created on first use.
-let math: { unit: (text: string) => Unit } | undefined;
+let math: MathJsInstance | undefined;
 function mathUnit(text: string): Unit {
-	math ??= create({ unitDependencies }) as unknown as { unit: (text: string) => Unit };
+	math ??= create({ unitDependencies });
 	return math.unit(text);
 }
 
