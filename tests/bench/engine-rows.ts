@@ -83,7 +83,10 @@ function time(fn: () => void): number {
 	while (cpu() - t0 < 200) fn();
 	t0 = cpu();
 	let n = 0;
-	while (cpu() - t0 < 30) (fn(), n++);
+	while (cpu() - t0 < 30) {
+		fn();
+		n++;
+	}
 	const runs: number[] = [];
 	for (let r = 0; r < 7; r++) {
 		const t = cpu();
