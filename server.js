@@ -1,9 +1,11 @@
 // The production server (`npm start`): SvelteKit's built handler (adapter-node) behind the fast path
-// of the open compute API (src/lib/server/fast-path.ts). Importing the handler starts the app (its
+// of the open compute API (src/lib/server/fast-path.ts), its answers compressed (gzip or brotli, as
+// the browser accepts) past 1 kB; the built files are served already compressed. Importing the handler starts the app (its
 // init hook registers the fast path); each request is offered to the fast path first, and whatever it
 // leaves goes to SvelteKit. The handler reads the same environment as `node build` (ORIGIN,
 // BODY_SIZE_LIMIT, ADDRESS_HEADER, XFF_DEPTH, PROTOCOL_HEADER, HOST_HEADER); this file reads PORT,
 // HOST, SOCKET_PATH, KEEP_ALIVE_TIMEOUT, HEADERS_TIMEOUT and SHUTDOWN_TIMEOUT as `node build` does.
+import compression from 'compression';
 import http from 'node:http';
 import process from 'node:process';
 import { handler } from './build/handler.js';
@@ -17,12 +19,14 @@ const host = process.env.HOST ?? '0.0.0.0';
 const port = Number(process.env.PORT ?? 3000);
 const shutdownTimeout = Number(process.env.SHUTDOWN_TIMEOUT ?? 30);
 
+const compress = compression();
+const notFound = (req, res) => {
+	res.statusCode = 404;
+	res.end('Not found');
+};
 const server = http.createServer((req, res) => {
 	if (fastPath(req, res)) return;
-	handler(req, res, () => {
-		res.statusCode = 404;
-		res.end('Not found');
-	});
+	compress(req, res, () => handler(req, res, () => notFound(req, res)));
 });
 if (process.env.KEEP_ALIVE_TIMEOUT)
 	server.keepAliveTimeout = Number(process.env.KEEP_ALIVE_TIMEOUT) * 1000;

@@ -8,7 +8,7 @@ import { DEFLECTION_LIMITS, geometryIssues, type NamedLimit } from '../engine/sh
 import { lengthField, quantityField } from './quantity';
 
 /** Guards against unit slips (e.g. 900 m meant as 900 mm); no shelf is this large. */
-const MAX_SPAN_M = 10;
+export const MAX_SPAN_M = 10;
 const MAX_DEPTH_M = 2;
 const MAX_THICKNESS_M = 0.3;
 
