@@ -1,5 +1,5 @@
 // The production server (`npm start`): SvelteKit's built handler (adapter-node) behind the fast path
-// of the open compute API (src/lib/server/fast-path.ts), its answers compressed (gzip or brotli, as
+// of the open compute API (src/lib/server/fast-path.ts), its pages compressed (gzip or brotli, as
 // the browser accepts) past 1 kB; the built files are served already compressed. Importing the handler starts the app (its
 // init hook registers the fast path); each request is offered to the fast path first, and whatever it
 // leaves goes to SvelteKit. The handler reads the same environment as `node build` (ORIGIN,
@@ -19,7 +19,10 @@ const host = process.env.HOST ?? '0.0.0.0';
 const port = Number(process.env.PORT ?? 3000);
 const shutdownTimeout = Number(process.env.SHUTDOWN_TIMEOUT ?? 30);
 
-const compress = compression();
+// pages only: the API answers as the fast path does, uncompressed, whichever way a request came
+const compress = compression({
+	filter: (req, res) => /^text\/html\b/.test(String(res.getHeader('content-type') ?? ''))
+});
 const notFound = (req, res) => {
 	res.statusCode = 404;
 	res.end('Not found');
