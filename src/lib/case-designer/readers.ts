@@ -3,25 +3,22 @@
  * for the fields the plain length reader does not cover: a length that may be left blank (then it
  * is the sides'), a length that may be zero (a flush base), and a spread load.
  */
-import { readLengthText, withLoadUnit, type Reading } from '../components/quantity-input/reading';
-import { formatLength, tryParseLength } from '../engine/units/length';
-import { formatPressure, tryParseQuantity } from '../engine/units/quantity';
+import { readLengthText, readLoadText, type Reading } from '../components/quantity-input/reading';
+import { formatLengthExact } from '../engine/units/length';
 import type { UserLengthUnit } from '../workbench/lengths';
 
 /** Blank means "as the sides" (or whatever `blankWords` says). */
 export function optionalLength(unit: UserLengthUnit, blankWords: string) {
 	return (text: string): Reading =>
-		text.trim() === ''
-			? { ok: true, value: 0, shown: blankWords }
-			: readLengthText(text, unit, tryParseLength, formatLength);
+		text.trim() === '' ? { ok: true, value: 0, shown: blankWords } : readLengthText(text, unit);
 }
 
 /** Zero is allowed: a base flush with the floor, a support line at the very front. */
 export function lengthOrZero(unit: UserLengthUnit) {
 	return (text: string): Reading => {
 		if (/^\s*0+(\.0*)?\s*(mm|"|in)?\s*$/.test(text))
-			return { ok: true, value: 0, shown: formatLength(0, { unit }) };
-		return readLengthText(text, unit, tryParseLength, formatLength);
+			return { ok: true, value: 0, shown: formatLengthExact(0, unit) };
+		return readLengthText(text, unit);
 	};
 }
 
@@ -29,12 +26,6 @@ export function lengthOrZero(unit: UserLengthUnit) {
 export function spreadLoad(unit: UserLengthUnit) {
 	return (text: string): Reading => {
 		if (text.trim() === '') return { ok: true, value: 0, shown: 'none' };
-		const r = tryParseQuantity(withLoadUnit(text, 'pressure', unit), 'pressure');
-		if (!r.ok) return { ok: false, message: `Could not read this. Expected ${r.expected}.` };
-		return {
-			ok: true,
-			value: r.value,
-			shown: formatPressure(r.value, { unit: unit === 'mm' ? 'kPa' : 'lbf/ft²' })
-		};
+		return readLoadText(text, 'pressure', unit);
 	};
 }

@@ -1,2 +1,2 @@
 export { default as QuantityInput } from './QuantityInput.svelte';
-export { readLengthText, withUnitMark, type Reading } from './reading';
+export { readLengthText, readLoadText, withUnitMark, type Reading } from './reading';
