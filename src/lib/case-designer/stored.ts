@@ -84,7 +84,8 @@ export function fromDesign(input: unknown, unit: UserLengthUnit): CaseDraft {
 						height: L(nosing.height, row.nosing.height),
 						thickness: L(nosing.thickness, row.nosing.thickness)
 					}
-				: row.nosing,
+				: // a new shelf row has a nosing; a stored shelf without one reopens without
+					{ ...row.nosing, on: false },
 			otherLoads: loads.filter((_, i) => i !== spread)
 		} satisfies ShelfRowDraft;
 	});

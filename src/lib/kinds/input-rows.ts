@@ -39,7 +39,11 @@ function supportWords(support: ShelfInput['support'], unit: ReaderUnit) {
 			cantilever: 'Cantilever'
 		}[support];
 	const spans = support.spans.map((s) => formatLength(s, { unit })).join(' + ');
-	return `Continuous over ${support.spans.length} spans (${spans}), ends ${support.ends}`;
+	const over =
+		support.divider === undefined
+			? `${spans}, centre to centre of the dividers`
+			: `${spans} clear, dividers ${formatLength(support.divider, { unit })} thick`;
+	return `Continuous over ${support.spans.length} spans (${over}), ends ${support.ends}`;
 }
 
 function limitWords(limit: ShelfInput['limit'], unit: ReaderUnit) {

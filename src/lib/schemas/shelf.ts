@@ -11,6 +11,7 @@ import { lengthField, quantityField } from './quantity';
 export const MAX_SPAN_M = 10;
 const MAX_DEPTH_M = 2;
 const MAX_THICKNESS_M = 0.3;
+const MAX_DIVIDER_M = 0.1;
 
 const positiveLength = (max: number, description?: string) =>
 	lengthField({ bound: 'positive', max, description });
@@ -41,14 +42,23 @@ export const supportSchema = z.union(
 	[
 		z.enum(['simple', 'fixed', 'cantilever']),
 		z.object({
-			/** lengths of the spans, left to right, between supports (a shelf over dividers) */
+			/**
+			 * lengths of the spans, left to right (a shelf over dividers): clear spans between the
+			 * faces of the supports when `divider` is given, else from support to support
+			 */
 			spans: z.array(positiveLength(MAX_SPAN_M)).min(2).max(12),
 			/** how the two outer ends are held (default: simply supported) */
-			ends: z.enum(['simple', 'fixed']).default('simple')
+			ends: z.enum(['simple', 'fixed']).default('simple'),
+			/**
+			 * thickness of each divider; each span next to one is checked over half of it more (the
+			 * shelf taken as resting at the divider's centre). Left out: spans from support to support
+			 */
+			divider: positiveLength(MAX_DIVIDER_M, 'thickness of each divider').optional()
 		})
 	],
 	{
-		error: "Expected 'simple', 'fixed', 'cantilever' or { spans: [two or more lengths], ends }."
+		error:
+			"Expected 'simple', 'fixed', 'cantilever' or { spans: [two or more lengths], ends, divider }."
 	}
 );
 

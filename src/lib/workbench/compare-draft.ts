@@ -55,11 +55,30 @@ export function candidateLabel(c: CandidateDraft, unit: UserLengthUnit): string 
 	return `${L(c.thickness)} ${name}${strip}`.slice(0, 80);
 }
 
-export function toComparisonRequest(d: ComparisonDraft, unit: UserLengthUnit): ComparisonRequest {
-	const { material: _m, thickness: _t, edges: _e, ...shelf } = toRequest(d.shelf, unit);
+/**
+ * The comparison charts sag against one span, so over a divider it keeps one length: the whole
+ * shelf, with the divider taken at its middle as a point (spans from centre to centre, as stored
+ * comparisons have always been). Spans of their own are the shelf check's.
+ */
+function comparedShelf(d: ShelfDraft, unit: UserLengthUnit) {
+	const { material: _m, thickness: _t, edges: _e, ...shelf } = toRequest(d, unit);
 	void _m;
 	void _t;
 	void _e;
+	if (d.support !== 'continuous') return shelf;
+	const total = tryParseLength(withUnitMark(d.span, unit));
+	const n = d.spans.length;
+	return {
+		...shelf,
+		span: withUnitMark(d.span, unit),
+		support: total.ok
+			? { spans: Array.from({ length: n }, () => total.value / n), ends: 'simple' as const }
+			: ('simple' as const)
+	};
+}
+
+export function toComparisonRequest(d: ComparisonDraft, unit: UserLengthUnit): ComparisonRequest {
+	const shelf = comparedShelf(d.shelf, unit);
 	return {
 		shelf,
 		candidates: d.candidates.map((c) => ({

@@ -4,7 +4,7 @@
  * Bare numbers are inches to an inch user and millimetres to a millimetre user (withUnitMark); a
  * bare load is lbf/ft², lbf/ft or lbf to an inch user and kPa, N/m or N to a metric one (withLoadUnit).
  */
-import { DEFLECTION_LIMITS, type NamedLimit } from '../engine/shelf';
+import { DEFLECTION_LIMITS, shelfLength, type NamedLimit } from '../engine/shelf';
 import {
 	RETIRED_PER_FOOT_AS_RATIO,
 	RETIRED_PER_FOOT_LIMIT,
@@ -39,8 +39,10 @@ export interface ShelfDraft {
 	material: string;
 	grain: 'along' | 'across';
 	support: SupportChoice;
-	/** equal spans of a continuous shelf (one divider makes two) */
-	bays: number;
+	/** over dividers: each span's clear length, left to right, as typed (one divider makes two) */
+	spans: string[];
+	/** over dividers: the thickness of each divider; blank for spans measured centre to centre */
+	divider: string;
 	loadKind: LoadKind;
 	/** the load as typed: `40 lbf/ft^2`, `20 lbf/ft`, `50 lbf` */
 	load: string;
@@ -75,7 +77,8 @@ export function defaultDraft(unit: UserLengthUnit): ShelfDraft {
 		material: 'hardwood-plywood-veneer-core',
 		grain: 'along',
 		support: 'simple',
-		bays: 2,
+		spans: mm ? ['900 mm', '900 mm'] : ['36"', '36"'],
+		divider: mm ? '18 mm' : '3/4"',
 		loadKind: 'area',
 		load: mm ? '2 kPa' : '40 lbf/ft²',
 		pointAt: mm ? '450 mm' : '18"',
@@ -101,21 +104,17 @@ export function defaultDraft(unit: UserLengthUnit): ShelfDraft {
 
 const len = (text: string, unit: UserLengthUnit) => withUnitMark(text, unit);
 
-function tryLength(text: string, unit: UserLengthUnit): number | undefined {
-	try {
-		return parseLength(len(text, unit));
-	} catch {
-		return undefined;
-	}
-}
-
 /** The engine's request for a draft; unreadable texts pass through so the engine names them. */
 export function toRequest(d: ShelfDraft, unit: UserLengthUnit): ShelfRequest {
-	const span = len(d.span, unit);
-	const spanM = tryLength(d.span, unit);
-	let support: ShelfRequest['support'] = d.support === 'continuous' ? 'simple' : d.support;
-	if (d.support === 'continuous' && spanM !== undefined && d.bays >= 2)
-		support = { spans: Array.from({ length: d.bays }, () => spanM / d.bays), ends: 'simple' };
+	// over dividers the spans and the divider say the whole length: no separate span is sent
+	const support: ShelfRequest['support'] =
+		d.support === 'continuous'
+			? {
+					spans: d.spans.map((s) => len(s, unit)),
+					ends: 'simple',
+					...(d.divider.trim() === '' ? {} : { divider: len(d.divider, unit) })
+				}
+			: d.support;
 	const load =
 		d.loadKind === 'area'
 			? ({ kind: 'area', pressure: withLoadUnit(d.load, 'pressure', unit) } as const)
@@ -134,7 +133,7 @@ export function toRequest(d: ShelfDraft, unit: UserLengthUnit): ShelfRequest {
 	});
 	const ratio = Number(d.limitRatio);
 	return {
-		span: typeof support === 'object' ? spanM : span,
+		...(typeof support === 'object' ? {} : { span: len(d.span, unit) }),
 		depth: len(d.depth, unit),
 		thickness: len(d.thickness, unit),
 		material: d.material,
@@ -152,6 +151,15 @@ export function toRequest(d: ShelfDraft, unit: UserLengthUnit): ShelfRequest {
 	};
 }
 
+/**
+ * A shelf just put over dividers: spans that were never told apart (all the same text) take the
+ * span typed so far, so a 36" shelf becomes two spans of 36" over a divider.
+ */
+export function overDividers(d: ShelfDraft): ShelfDraft {
+	if (d.support !== 'continuous' || d.spans.some((s) => s !== d.spans[0])) return d;
+	return { ...d, spans: d.spans.map(() => d.span) };
+}
+
 type Stored = Partial<Record<string, unknown>>;
 
 /** A stored (validated, SI) shelf input back into the form's texts, in the reader's unit. */
@@ -164,11 +172,18 @@ export function fromInput(input: unknown, unit: UserLengthUnit): ShelfDraft {
 	const units = loadUnitsFor(unit);
 	const support = s.support as ShelfRequest['support'];
 	if (typeof support === 'object' && support && 'spans' in support) {
-		const spans = support.spans.map((x) => (typeof x === 'number' ? x : parseLength(x)));
+		// each span as stored; an analysis saved before the divider was asked for has none (its
+		// spans run centre to centre), and reopens with the divider blank, computing as it did
+		const metres = (x: string | number) => (typeof x === 'number' ? x : parseLength(x));
+		const spans = support.spans.map(metres);
 		d.support = 'continuous';
-		d.bays = spans.length;
+		d.spans = spans.map((m) => lengthText(m, unit));
+		d.divider = support.divider === undefined ? '' : lengthText(metres(support.divider), unit);
 		d.span = lengthText(
-			spans.reduce((a, b) => a + b, 0),
+			shelfLength({
+				spans,
+				...(support.divider === undefined ? {} : { divider: metres(support.divider) })
+			}),
 			unit
 		);
 	} else {
@@ -192,6 +207,9 @@ export function fromInput(input: unknown, unit: UserLengthUnit): ShelfDraft {
 	if (load?.kind === 'area' || load?.kind === 'line' || load?.kind === 'point')
 		d.loadKind = load.kind;
 	d.selfWeight = s.selfWeight !== false;
+	// a new shelf has a nosing; a stored one has exactly the strips it was saved with
+	d.front = { ...d.front, on: false };
+	d.below = { ...d.below, on: false };
 	for (const e of (Array.isArray(s.edges) ? s.edges : []) as Stored[]) {
 		const side = e.side === 'front' || e.side === 'back' ? 'front' : 'below';
 		d[side] = {
@@ -221,30 +239,60 @@ function numberOr(v: unknown, format: (n: number) => string): string {
 	return typeof v === 'number' ? format(v) : typeof v === 'string' ? v : '';
 }
 
-/** Which form field an engine issue belongs to (issues are paths into the request). */
+/** A form field: one of the draft's, or one span of a shelf over dividers (`spans.1`). */
+export type FieldKey = keyof ShelfDraft | `spans.${number}`;
+
 /** Where each field of the form is, for the list of marked fields at the top of the screen. */
 export const FIELD_PLACES: Partial<Record<keyof ShelfDraft, { id: string; label: string }>> = {
 	span: { id: 'shelf-span', label: 'Span' },
 	depth: { id: 'shelf-depth', label: 'Depth' },
 	thickness: { id: 'shelf-thickness', label: 'Thickness' },
 	material: { id: 'shelf-material', label: 'Material' },
+	divider: { id: 'shelf-divider', label: 'Divider thickness' },
 	load: { id: 'load-value', label: 'Load' },
 	pointAt: { id: 'load-at', label: 'Where the load sits' },
 	front: { id: 'front-height', label: 'Nosing' },
 	limitRatio: { id: 'limit-ratio', label: 'Limit' }
 };
 
+/**
+ * One span of a shelf over dividers, named for what it measures: the clear length between the
+ * faces of what holds it up (a case side or a divider) when the divider's thickness is given, or
+ * from centre to centre of the dividers when it is left blank.
+ */
+export function spanLabel(i: number, count: number, clear = true): string {
+	const from = i === 0 ? 'side' : 'divider';
+	const to = i === count - 1 ? 'side' : 'divider';
+	return clear
+		? `Span ${i + 1}, clear from ${from} to ${to}`
+		: `Span ${i + 1}, ${from} to ${to} (divider centres)`;
+}
+
 /** A field's place, named as the form names it for this support (a wall-hung shelf's reach and width). */
-export function fieldPlace(key: keyof ShelfDraft, support: SupportChoice) {
-	const place = FIELD_PLACES[key];
-	if (!place || support !== 'cantilever') return place;
+export function fieldPlace(
+	key: FieldKey,
+	draft: Pick<ShelfDraft, 'support' | 'spans' | 'divider'>
+) {
+	const span = /^spans\.(\d+)$/.exec(key);
+	if (span) {
+		const i = Number(span[1]);
+		return {
+			id: `shelf-span-${i}`,
+			label: spanLabel(i, draft.spans.length, draft.divider.trim() !== '')
+		};
+	}
+	const place = FIELD_PLACES[key as keyof ShelfDraft];
+	if (!place || draft.support !== 'cantilever') return place;
 	if (key === 'span') return { ...place, label: 'Reach out from the wall' };
 	if (key === 'depth') return { ...place, label: 'Width along the wall' };
 	return place;
 }
 
-export function fieldOf(path: (string | number)[]): keyof ShelfDraft | 'form' {
-	const [head, , key] = path;
+/** Which form field an engine issue belongs to (issues are paths into the request). */
+export function fieldOf(path: (string | number)[]): FieldKey | 'form' {
+	const [head, second, key] = path;
+	if (head === 'support' && second === 'spans') return `spans.${typeof key === 'number' ? key : 0}`;
+	if (head === 'support' && second === 'divider') return 'divider';
 	if (head === 'span' || head === 'support') return 'span';
 	if (head === 'depth' || head === 'thickness' || head === 'material') return head;
 	if (head === 'loads') return key === 'at' ? 'pointAt' : 'load';

@@ -10,11 +10,12 @@ import {
 	safeMinEdge,
 	safeMinThickness
 } from '../compute';
-import { METRES_PER_INCH, formatLength } from '../engine/units/length';
+import { METRES_PER_INCH, formatLength, tryParseLength } from '../engine/units/length';
 import type { ShelfResult } from '../engine/shelf/types';
 import type { ShelfRequest } from '../schemas/shelf';
-import { ceilTo, floorTo, unitStepM, type UserLengthUnit } from './lengths';
-import { toRequest, type ShelfDraft } from './shelf-draft';
+import { ceilTo, floorTo, lengthText, unitStepM, type UserLengthUnit } from './lengths';
+import { defaultDraft, toRequest, type ShelfDraft } from './shelf-draft';
+import { withUnitMark } from '../components/quantity-input/reading';
 import { aboutLength } from '../kinds/shelf-words';
 
 export interface ShelfFix {
@@ -28,6 +29,11 @@ export interface ShelfFix {
 
 const NOSING_THICKNESS_IN = 3 / 4; // a common nosing thickness (common practice, no source)
 const NOSING_STEP_IN = 1 / 4; // nosings are ripped to quarter inches (common practice, no source)
+
+function metresOf(text: string, unit: UserLengthUnit): number | undefined {
+	const read = tryParseLength(withUnitMark(text, unit));
+	return read.ok && read.value > 0 ? read.value : undefined;
+}
 
 function passes(r: ShelfResult) {
 	return r.limit.pass && r.strength.pass;
@@ -57,7 +63,17 @@ export function fixesFor(
 	const text = (m: number) => formatLength(m, { unit });
 
 	const span = safeMaxSpan({ ...request, span: undefined });
-	if (span.ok && span.result.span > 0.05) {
+	if (span.ok && draft.support === 'continuous') {
+		// over dividers: every span shortened in proportion, each rounded down on the user's grid
+		const spans = span.result.spans.map((m) => text(floorTo(m, unitStepM(unit))));
+		if (span.result.spans.every((m) => m > 0.05))
+			fixes.push(
+				checked(draft, unit, 'span', `Shorten the spans to ${spans.join(', ')}`, (d) => ({
+					...d,
+					spans
+				}))
+			);
+	} else if (span.ok && span.result.span > 0.05) {
 		const total = floorTo(span.result.span, unitStepM(unit));
 		fixes.push(
 			checked(draft, unit, 'span', `Shorten the span to ${text(total)}`, (d) => ({
@@ -97,27 +113,38 @@ export function fixesFor(
 		}
 	}
 
-	if (draft.support === 'simple' || draft.support === 'fixed') {
-		fixes.push(
-			checked(draft, unit, 'support', 'Add a centre support (a divider under the middle)', (d) => ({
-				...d,
-				support: 'continuous',
-				bays: 2
-			}))
-		);
-	} else if (draft.support === 'continuous' && draft.bays < 4) {
+	// a divider as thick as the one typed (or the shelf's default); the shelf keeps its length
+	const dividerM = metresOf(draft.divider, unit) ?? metresOf(defaultDraft(unit).divider, unit)!;
+	const dividerText = draft.divider.trim() || defaultDraft(unit).divider;
+	const equalSpans = (clearTotalM: number, count: number) =>
+		Array.from({ length: count }, () => lengthText(clearTotalM / count, unit));
+	const spanM = metresOf(draft.span, unit);
+	if ((draft.support === 'simple' || draft.support === 'fixed') && spanM && spanM > dividerM) {
+		const spans = equalSpans(spanM - dividerM, 2);
 		fixes.push(
 			checked(
 				draft,
 				unit,
 				'support',
-				`Add another divider (${draft.bays + 1} equal spans)`,
-				(d) => ({
-					...d,
-					bays: d.bays + 1
-				})
+				`Add a divider under the middle (two spans of ${spans[0]})`,
+				(d) => ({ ...d, support: 'continuous', spans, divider: dividerText })
 			)
 		);
+	} else if (draft.support === 'continuous' && draft.spans.length < 4) {
+		const clear = draft.spans.map((s) => metresOf(s, unit));
+		if (clear.every((m) => m !== undefined)) {
+			const total = clear.reduce((a, b) => a! + b!, 0)! - dividerM;
+			const spans = equalSpans(total, draft.spans.length + 1);
+			fixes.push(
+				checked(
+					draft,
+					unit,
+					'support',
+					`Add another divider (${spans.length} equal spans of ${spans[0]})`,
+					(d) => ({ ...d, spans, divider: dividerText })
+				)
+			);
+		}
 	}
 	return fixes.filter((f): f is ShelfFix => f !== null);
 }
@@ -128,8 +155,10 @@ export function headroomFor(request: ShelfRequest, depthLoadOnly: boolean) {
 	const load = depthLoadOnly
 		? safeMaxLoad({ ...request, loads: [], load: { kind: 'area' } })
 		: null;
+	const longest = span.ok && !span.result.capped ? span.result : null;
 	return {
-		maxSpanM: span.ok && !span.result.capped ? span.result.span : null,
+		maxSpanM: longest?.span ?? null,
+		maxSpansM: longest && typeof request.support === 'object' ? longest.spans : null,
 		maxPressurePa: load && load.ok ? load.result.magnitude : null,
 		governs: load && load.ok ? load.result.governs : null
 	};

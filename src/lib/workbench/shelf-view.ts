@@ -7,6 +7,7 @@ import { withUnitMark } from '../components/quantity-input/reading';
 import { tryParseLength } from '../engine/units/length';
 import type { ShelfResult } from '../engine/shelf/types';
 import type { UserLengthUnit } from './lengths';
+import { count } from '../kinds/words';
 import type { ShelfDraft } from './shelf-draft';
 
 function metres(text: string, unit: UserLengthUnit, fallback: number): number {
@@ -31,6 +32,7 @@ export function drawingFor(d: ShelfDraft, r: ShelfResult, unit: UserLengthUnit):
 		thicknessM: metres(d.thickness, unit, 0.019),
 		support: d.support,
 		supportsM: r.supports,
+		...(d.support === 'continuous' ? { dividerM: metres(d.divider, unit, 0) } : {}),
 		loads,
 		strips,
 		curve: r.curve,
@@ -51,7 +53,7 @@ export function drawingDescription(
 		simple: 'resting on pins between two case sides',
 		fixed: 'with both ends fixed into the case sides',
 		cantilever: 'cantilevered from a wall',
-		continuous: `running over ${d.bays - 1} divider${d.bays > 2 ? 's' : ''} in ${d.bays} equal spans`
+		continuous: overDividers(d, unit, format)
 	}[d.support];
 	const strips = [d.front.on && 'a solid nosing on the front edge', d.below.on && 'a cleat below']
 		.filter(Boolean)
@@ -66,4 +68,16 @@ export function drawingDescription(
 		`It carries ${d.load || 'only its own weight'} and is drawn sagging ${format(r.sag[r.sag.checked])} ` +
 		`at ${format(r.sag.at)} from the left end, against a limit of ${format(r.limit.allowed)}.`
 	);
+}
+
+/** "running over 1 divider 3/4" thick, in spans of 24" and 30" clear" */
+function overDividers(d: ShelfDraft, unit: UserLengthUnit, format: (m: number) => string) {
+	const n = d.spans.length;
+	const spans = d.spans.map((s) => format(metres(s, unit, 0)));
+	const list = `${spans.slice(0, -1).join(', ')} and ${spans[n - 1]}`;
+	const dividerM = metres(d.divider, unit, 0);
+	const dividers = count(n - 1, 'divider');
+	return dividerM > 0
+		? `running over ${dividers} ${format(dividerM)} thick, in spans of ${list} clear`
+		: `running over ${dividers}, in spans of ${list} from centre to centre`;
 }

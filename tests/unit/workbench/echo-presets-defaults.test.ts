@@ -13,6 +13,8 @@ import {
 	withLoadUnit
 } from '../../../src/lib/components/quantity-input/reading';
 import { defaultCase, toDesign } from '../../../src/lib/case-designer/draft';
+import { fromDesign } from '../../../src/lib/case-designer/stored';
+import { caseDesignSchema } from '../../../src/lib/schemas/case';
 import { spreadLoad } from '../../../src/lib/case-designer/readers';
 import { parseLength } from '../../../src/lib/engine/units/length';
 import { parseQuantity } from '../../../src/lib/engine/units/quantity';
@@ -158,5 +160,25 @@ describe('a new shelf and a new case start from inputs that pass L/144', () => {
 		// 40 lbf/ft² is 1915.2 Pa; the metric default, 2 kPa, is the heavier
 		expect(40 * PSF).toBeCloseTo(1915.2, 1);
 		expect(parseQuantity(defaultDraft('mm').load, 'pressure')).toBe(2000);
+	});
+	it('a stored shelf or case shelf without a nosing reopens without one (the default’s is not added)', () => {
+		const bare = { ...defaultDraft('frac16') };
+		bare.front = { ...bare.front, on: false };
+		const stored = JSON.parse(JSON.stringify(shelfRequestSchema.parse(toRequest(bare, 'frac16'))));
+		expect(stored.edges).toEqual([]);
+		expect(fromInput(stored, 'frac16').front.on).toBe(false);
+		const withNosing = JSON.parse(
+			JSON.stringify(shelfRequestSchema.parse(toRequest(defaultDraft('frac16'), 'frac16')))
+		);
+		expect(fromInput(withNosing, 'frac16').front.on).toBe(true);
+		const draft = defaultCase('frac16');
+		draft.shelves[1].nosing.on = false;
+		const design = JSON.parse(JSON.stringify(caseDesignSchema.parse(toDesign(draft, 'frac16'))));
+		expect(fromDesign(design, 'frac16').shelves.map((s) => s.nosing.on)).toEqual([
+			true,
+			false,
+			true,
+			true
+		]);
 	});
 });

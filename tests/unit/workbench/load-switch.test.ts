@@ -36,9 +36,10 @@ describe('changing how the load lies', () => {
 describe('a wall-hung shelf', () => {
 	it('names its span the reach out from the wall and its depth the width along it', async () => {
 		const { fieldPlace } = await import('../../../src/lib/workbench/shelf-draft');
-		expect(fieldPlace('span', 'cantilever')?.label).toBe('Reach out from the wall');
-		expect(fieldPlace('depth', 'cantilever')?.label).toBe('Width along the wall');
-		expect(fieldPlace('span', 'simple')?.label).toBe('Span');
-		expect(fieldPlace('depth', 'simple')?.label).toBe('Depth');
+		const held = (support: 'cantilever' | 'simple') => ({ support, spans: [], divider: '' });
+		expect(fieldPlace('span', held('cantilever'))?.label).toBe('Reach out from the wall');
+		expect(fieldPlace('depth', held('cantilever'))?.label).toBe('Width along the wall');
+		expect(fieldPlace('span', held('simple'))?.label).toBe('Span');
+		expect(fieldPlace('depth', held('simple'))?.label).toBe('Depth');
 	});
 });

@@ -76,6 +76,30 @@ describe('layoutShelf', () => {
 		expect(g.spans).toHaveLength(2);
 		expect(g.spans[0].lengthM).toBeCloseTo(0.45, 9);
 	});
+	it('draws dividers to scale and dimensions each span clear between faces (issue 15 item 10)', () => {
+		// spans of 0.3 m and 0.5 m clear over a 0.02 m divider: its centre at 0.31 m, the shelf 0.82 m
+		const g = layoutShelf(
+			{ ...shelf, spanM: 0.82, support: 'continuous', supportsM: [0, 0.31, 0.82], dividerM: 0.02 },
+			720
+		);
+		const divider = g.supports[1];
+		expect(divider.kind).toBe('divider');
+		expect(divider.width).toBeCloseTo(0.02 * g.scale, 0);
+		expect(divider.x + divider.width / 2).toBeCloseTo(g.x0 + 0.31 * g.scale, 0);
+		expect(g.spans.map((s) => s.lengthM)).toEqual([
+			expect.closeTo(0.3, 12),
+			expect.closeTo(0.5, 12)
+		]);
+		// the dimension lines end at the divider's faces
+		expect(g.spans[0].to).toBeCloseTo(divider.x, 0);
+		expect(g.spans[1].from).toBeCloseTo(divider.x + divider.width, 0);
+		expect(g.spans[1].to - g.spans[1].from).toBeCloseTo(0.5 * g.scale, 0);
+	});
+	it('draws a divider of no given thickness as a hairline at its centre', () => {
+		const g = layoutShelf({ ...shelf, support: 'continuous', supportsM: [0, 0.45, 0.9] }, 720);
+		expect(g.supports[1].width).toBe(2);
+		expect(g.spans[0].lengthM).toBeCloseTo(0.45, 12);
+	});
 	it('draws a wall and one reach for a cantilever', () => {
 		const g = layoutShelf({ ...shelf, support: 'cantilever', supportsM: [0] }, 375);
 		expect(g.supports).toEqual([{ kind: 'wall', x: g.x0 - 16, width: 16 }]);

@@ -66,19 +66,22 @@ describe('the shelf draft', () => {
 			thickness: '3/4"'
 		});
 	});
-	it('splits a continuous shelf into equal spans and names the field of an issue', () => {
+	it('sends each span of a shelf over dividers as typed and names the field of an issue', () => {
+		// issue 15 item 10: the spans are no longer one length shared equally; each has its own
 		const draft = {
 			...defaultDraft('frac16'),
-			span: '48',
 			support: 'continuous' as const,
-			bays: 3
+			spans: ['16', '16', '16'],
+			divider: ''
 		};
-		const req = toRequest(draft, 'frac16');
+		const req = shelfRequestSchema.parse(toRequest(draft, 'frac16'));
 		expect(req.support).toMatchObject({
 			spans: [16 * IN, 16 * IN, 16 * IN].map((x) => expect.closeTo(x, 12))
 		});
+		expect(req.span).toBeUndefined();
 		expect(fieldOf(['loads', 0, 'at'])).toBe('pointAt');
-		expect(fieldOf(['support', 'spans', 1])).toBe('span');
+		expect(fieldOf(['support', 'spans', 1])).toBe('spans.1');
+		expect(fieldOf(['support', 'divider'])).toBe('divider');
 	});
 });
 

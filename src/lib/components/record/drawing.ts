@@ -25,6 +25,7 @@ export function savedShelfDrawing(input: ShelfInput, r: ShelfResult): ShelfDrawi
 		thicknessM: input.thickness,
 		support: typeof input.support === 'string' ? input.support : 'continuous',
 		supportsM: r.supports,
+		dividerM: typeof input.support === 'string' ? 0 : (input.support.divider ?? 0),
 		loads,
 		strips,
 		curve: r.curve,

@@ -19,8 +19,10 @@ export interface ShelfDrawingInput {
 	spanM: number;
 	thicknessM: number;
 	support: SupportKind;
-	/** support positions from the left end, m (a cantilever: the wall at 0) */
+	/** support positions from the left end, m (a cantilever: the wall at 0; dividers at their centre) */
 	supportsM: number[];
+	/** thickness of each divider, m, drawn to scale; 0 or absent: supports at a point */
+	dividerM?: number;
 	loads: DrawingLoad[];
 	strips: DrawingStrip[];
 	/** deflected shape [x, sag] in m, sag downward positive; null while the inputs are unreadable */
@@ -45,7 +47,9 @@ export const LAYOUT = {
 	shelfTop: 84,
 	/** the drawn sag (or limit, whichever is larger) aims at this many pixels */
 	targetSagPx: 56,
-	minPanelPx: 5
+	minPanelPx: 5,
+	/** a divider thinner than this on screen is drawn this wide, so it can be seen */
+	minDividerPx: 2
 } as const;
 
 const NICE = [1, 2, 5];
@@ -131,7 +135,8 @@ export function layoutShelf(input: ShelfDrawingInput, widthPx: number) {
 		Math.max(...curve.map(([, s]) => s), input.allowedM ?? 0) * scale * exaggeration;
 	const floor = top + facePx + deepestPx + 30;
 	const dimY = floor + 22;
-	const height = dimY + 22;
+	// room under the dimensions for the divider's thickness
+	const height = dimY + (input.dividerM ? 30 : 22);
 
 	const arrows: { x: number; tip: number; tail: number; heavy: boolean }[] = [];
 	const loadLabels: { x: number; y: number; text: string }[] = [];
@@ -162,18 +167,22 @@ export function layoutShelf(input: ShelfDrawingInput, widthPx: number) {
 		blankets.push({ x1: r(from), x2: r(to), y: tail });
 	});
 
+	// dividers to scale (a hairline at least); the spans measured clear between their faces
+	const halfM = (input.dividerM ?? 0) / 2;
+	const dividerPx = Math.max(LAYOUT.minDividerPx, 2 * halfM * scale);
+	const last = input.supportsM.length - 1;
 	const supports = input.supportsM.map((m, i) => {
 		const px = x(m);
-		const end = i === 0 || i === input.supportsM.length - 1;
+		const end = i === 0 || i === last;
 		if (cantilever) return { kind: 'wall' as const, x: r(px - LAYOUT.side), width: LAYOUT.side };
-		if (!end) return { kind: 'divider' as const, x: r(px - 5), width: 10 };
+		if (!end) return { kind: 'divider' as const, x: r(px - dividerPx / 2), width: r(dividerPx) };
 		return { kind: 'side' as const, x: r(i === 0 ? px - LAYOUT.side : px), width: LAYOUT.side };
 	});
-	const spans = input.supportsM.slice(1).map((m, i) => ({
-		from: r(x(input.supportsM[i])),
-		to: r(x(m)),
-		lengthM: m - input.supportsM[i]
-	}));
+	const spans = input.supportsM.slice(1).map((m, i) => {
+		const fromM = input.supportsM[i] + (i > 0 ? halfM : 0);
+		const toM = m - (i + 1 < last ? halfM : 0);
+		return { from: r(x(fromM)), to: r(x(toM)), lengthM: toM - fromM };
+	});
 	if (cantilever) spans.push({ from: r(x0), to: r(x1), lengthM: span });
 
 	const sag =
@@ -207,6 +216,7 @@ export function layoutShelf(input: ShelfDrawingInput, widthPx: number) {
 		blankets,
 		supports,
 		spans,
+		dividerM: halfM * 2,
 		sag,
 		limit
 	};

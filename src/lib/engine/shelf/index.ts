@@ -19,4 +19,4 @@ export {
 export { bracketedRoot, rootNear, type RootSearch } from './root';
 export { DEFAULT_SHELF_OPTIONS } from './types';
 export type * from './types';
-export { geometryIssues, type GeometryView } from './validate';
+export { centreSpans, geometryIssues, shelfLength, type GeometryView } from './validate';

@@ -14,6 +14,7 @@ import { deflectionLimit, type DeflectionLimit } from './limits';
 import { STANDARD_GRAVITY } from '../units/si';
 import { sectionProperties, type SectionPart, type SectionProperties } from './section';
 import type { EdgeInput, ShelfInput, ShelfWarning } from './types';
+import { centreSpans } from './validate';
 
 const SERVICE_CLASS = { dry: 0, humid: 1, wet: 2 } as const;
 /** A thickness within this of a stocked one is taken as that stock (sheet goods vary about so). */
@@ -202,7 +203,7 @@ const ENDS: Record<'simple' | 'fixed' | 'cantilever', [EndCondition, EndConditio
 	cantilever: ['fixed', 'free']
 };
 
-/** The spans of a request, left to right, m. */
+/** The spans of a request as given (clear spans over dividers), left to right, m. */
 export function spansOf(input: ShelfInput): number[] {
 	return typeof input.support === 'object' ? input.support.spans : [input.span ?? Number.NaN];
 }
@@ -215,10 +216,15 @@ function layOut(
 	panel: ResolvedMaterial,
 	limit: DeflectionLimit,
 	warnings: ShelfWarning[],
-	spans: number[],
+	clear: number[],
 	loads = input.loads
 ): ShelfModel {
 	const support = input.support;
+	// over dividers the spans given are clear spans; the beam runs between the dividers' centres
+	const spans =
+		typeof support === 'object' && support.divider
+			? centreSpans({ spans: clear, divider: support.divider })
+			: clear;
 	let length = 0;
 	for (const l of spans) length += l;
 	const inner: number[] = [];

@@ -29,10 +29,19 @@ export type SupportInput =
 	| 'fixed'
 	| 'cantilever'
 	| {
-			/** lengths of the spans, left to right, between supports (a shelf over dividers), m */
+			/**
+			 * lengths of the spans, left to right (a shelf over dividers), m: clear spans between the
+			 * faces of the supports when `divider` is given, else from support to support
+			 */
 			spans: number[];
 			/** how the two outer ends are held */
 			ends: 'simple' | 'fixed';
+			/**
+			 * thickness of each divider, m. The shelf is taken as resting on a line at the divider's
+			 * centre, so each span next to a divider is checked over half its thickness more (the
+			 * longer span, the safe side); absent in analyses saved before it was asked for
+			 */
+			divider?: number;
 	  };
 
 /** Pa over the whole top; N/m along the shelf (from/to in m from the left end); N at a point. */

@@ -7,7 +7,7 @@ import type { InputIssue } from '../errors';
 
 export interface GeometryView {
 	span?: number;
-	support: string | { spans: number[] };
+	support: string | { spans: number[]; divider?: number };
 	loads: (
 		{ kind: 'area' } | { kind: 'line'; from?: number; to?: number } | { kind: 'point'; at: number }
 	)[];
@@ -17,11 +17,12 @@ export interface GeometryView {
 export function geometryIssues(value: GeometryView, spanNeeded: boolean): InputIssue[] {
 	const issues: InputIssue[] = [];
 	const spans = typeof value.support === 'object' ? value.support.spans : undefined;
-	const total = spans ? spans.reduce((a, b) => a + b, 0) : value.span;
+	const total = typeof value.support === 'object' ? shelfLength(value.support) : value.span;
 	if (spans && value.span !== undefined && Math.abs(value.span - (total ?? 0)) > 0.001)
 		issues.push({
 			path: ['span'],
-			message: 'The span must equal the sum of the spans, or be left out.'
+			message:
+				'The span must equal the sum of the spans (and the dividers between them), or be left out.'
 		});
 	if (spanNeeded && total === undefined)
 		issues.push({ path: ['span'], message: 'Expected the span of the shelf.' });
@@ -55,4 +56,20 @@ export function geometryIssues(value: GeometryView, spanNeeded: boolean): InputI
 		}
 	});
 	return issues;
+}
+
+/**
+ * The spans as the beam is computed, support to support: with a divider, each clear span grows by
+ * half the divider's thickness at every divider it meets (the shelf taken as resting on a line at
+ * the divider's centre: the longer span, the safe side). Without one, the spans as given.
+ */
+export function centreSpans(support: { spans: number[]; divider?: number }): number[] {
+	const half = (support.divider ?? 0) / 2;
+	const last = support.spans.length - 1;
+	return support.spans.map((l, i) => l + (i > 0 ? half : 0) + (i < last ? half : 0));
+}
+
+/** The whole length of a shelf over dividers: its clear spans and the dividers between them. */
+export function shelfLength(support: { spans: number[]; divider?: number }): number {
+	return centreSpans(support).reduce((a, b) => a + b, 0);
 }
