@@ -8,6 +8,7 @@
  * not depend on the span typed, is remembered per candidate.
  */
 import { safeAnalyzeShelf, safeMaxSpan } from '../compute';
+import type { InputIssue } from '../engine/errors';
 import { analyzeInput, geometryIssues, safely } from '../engine/shelf';
 import type { MaxSpanResult } from '../engine/shelf';
 import type { SafeResult, ShelfInput, ShelfResult } from '../engine/shelf/types';
@@ -23,6 +24,8 @@ export interface CandidateRun {
 	/** [span, checked sag] in metres */
 	points: [number, number][];
 	issue: string | null;
+	/** every issue of this candidate's shelf, each with its path into the shelf request */
+	issues: InputIssue[];
 }
 
 /** The shelf request of candidate i (the same merge as comparisonShelf in the schema module). */
@@ -99,7 +102,8 @@ export function runComparison(req: ComparisonRequest, currentM: number | null) {
 			result: now.ok ? now.result : null,
 			maxSpanM: longest.ok && !longest.result.capped ? longest.result.span : null,
 			points: [],
-			issue: now.ok ? null : (now.issues[0]?.message ?? 'Could not be computed.')
+			issue: now.ok ? null : (now.issues[0]?.message ?? 'Could not be computed.'),
+			issues: now.ok ? [] : now.issues
 		};
 	});
 	if (currentM === null) return { runs, limit: [] as [number, number][] };
