@@ -17,3 +17,26 @@ describe('one date formatter', () => {
 		expect(formatMoment(Number.NaN)).toBe('—');
 	});
 });
+
+describe('every date on screen, in records and in PDFs goes through the one formatter', () => {
+	it('no screen, record or server module formats a date itself (locale strings or ISO slices)', async () => {
+		const { readdirSync, readFileSync, statSync } = await import('node:fs');
+		const { join } = await import('node:path');
+		const files: string[] = [];
+		const walk = (dir: string) => {
+			for (const name of readdirSync(dir)) {
+				const path = join(dir, name);
+				if (statSync(path).isDirectory()) walk(path);
+				else if (/\.(ts|svelte)$/.test(name)) files.push(path);
+			}
+		};
+		walk('src');
+		// issue 15 item 12: three date styles were on screen (en-CA, the browser's medium, ISO slices)
+		const own = /toLocaleDateString|toLocaleTimeString|dateStyle|toISOString\(\)\.slice\(0, 10\)/;
+		const offenders = files.filter(
+			(f) => !f.endsWith(join('lib', 'dates.ts')) && own.test(readFileSync(f, 'utf8'))
+		);
+		expect(offenders).toEqual([]);
+		expect(files.length).toBeGreaterThan(100);
+	});
+});

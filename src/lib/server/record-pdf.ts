@@ -6,6 +6,7 @@
 import PDFDocument from 'pdfkit';
 import { createRequire } from 'node:module';
 import { formatLength, type ShelfResult } from '$lib/engine';
+import { formatDay } from '$lib/dates';
 import type { CaseResult } from '$lib/engine/case/types';
 import type { RecordDoc, RecordItem } from './records';
 import { drawCase, drawShelf, type Pen } from './record-pdf-drawings';
@@ -86,7 +87,7 @@ export function renderRecordPdf(record: RecordDoc): Promise<Buffer> {
 	say(record.shop.toUpperCase(), { size: 9, color: SOFT });
 	say(record.project.name, { font: 'bold', size: 20 });
 	say(
-		`${record.project.client ? `For ${record.project.client} · ` : ''}Record of ${record.date.toISOString().slice(0, 10)}`,
+		`${record.project.client ? `For ${record.project.client} · ` : ''}Record of ${formatDay(record.date)}`,
 		{ color: SOFT }
 	);
 	doc.moveDown(0.5);
@@ -198,7 +199,7 @@ export function renderRecordPdf(record: RecordDoc): Promise<Buffer> {
 		}
 		doc.moveDown(0.4);
 		say(
-			`${item.notes.length ? `Sources: notes ${item.notes.join(', ')}. ` : ''}Version ${item.version}, saved ${item.updatedAt.toISOString().slice(0, 10)}, computed by engine ${item.engineVersion}.`,
+			`${item.notes.length ? `Sources: notes ${item.notes.join(', ')}. ` : ''}Version ${item.version}, saved ${formatDay(item.updatedAt)}, computed by engine ${item.engineVersion}.`,
 			{ size: 8.5, color: SOFT }
 		);
 	}
