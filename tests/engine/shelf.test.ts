@@ -234,7 +234,7 @@ describe('limits', () => {
 		expect(at('36"', 'L/240')).toBeCloseTo(0.15, 10);
 		expect(at('36"', 'L/360')).toBeCloseTo(0.1, 10);
 	});
-	it('1/16" per foot, at most 1/4" (ANSI/KCMA A161.1 §5.1, unverified)', () => {
+	it('1/16" per foot, at most 1/4" (ANSI/KCMA A161.1-2012 §5.1, from public summaries of the standard)', () => {
 		expect(at('36"', '1/16in-per-ft')).toBeCloseTo(3 / 16, 10);
 		expect(at('60"', '1/16in-per-ft')).toBeCloseTo(1 / 4, 10);
 	});
