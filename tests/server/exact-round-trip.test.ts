@@ -86,7 +86,7 @@ const CASES: {
 ];
 
 async function setup() {
-	const cast = makeWorkshopWithCast();
+	const cast = await makeWorkshopWithCast();
 	const project = await createProject(cast.owner, cast.workshopId, {
 		name: 'Exact shelves',
 		client: '',
