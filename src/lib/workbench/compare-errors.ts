@@ -3,7 +3,7 @@
  * shows it (the shared shelf's, or that candidate's own), and where each field is on the screen,
  * for the summary at the top (components/error-summary).
  */
-import type { ShelfIssue } from '../engine/shelf/types';
+import type { InputIssue } from '../engine/errors';
 import type { ComparisonDraft } from './compare-draft';
 import { fieldOf } from './shelf-draft';
 
@@ -24,7 +24,7 @@ const CANDIDATE_FIELDS: Record<string, [field: string, id: string, words: string
 
 /** Field key → message: `span`, `load` for the shared shelf; `1.thickness` for a candidate's. */
 export function compareErrors(
-	runs: { issues: ShelfIssue[] }[],
+	runs: { issues: InputIssue[] }[],
 	spanMissing: boolean
 ): Partial<Record<string, string>> {
 	const out: Partial<Record<string, string>> = {};
