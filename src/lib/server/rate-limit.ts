@@ -12,7 +12,22 @@ import { problem } from './http';
 export const COMPUTE_REQUESTS = 120;
 export const COMPUTE_WINDOW_S = 60;
 
-let current: { db: Database.Database; limiter: RateLimiterSQLite } | undefined;
+/** A budget: so many points per so many seconds, counted per key under its own prefix. */
+export interface Budget {
+	prefix: string;
+	points: number;
+	seconds: number;
+}
+
+export const COMPUTE_BUDGET: Budget = {
+	prefix: 'compute',
+	points: COMPUTE_REQUESTS,
+	seconds: COMPUTE_WINDOW_S
+};
+
+let current:
+	| { db: Database.Database; client: Database.Database; limiters: Map<string, RateLimiterSQLite> }
+	| undefined;
 
 /**
  * The connection as the limiter sees it: the same database, but each statement it prepares is
@@ -35,41 +50,61 @@ function keepingStatements(db: Database.Database): Database.Database {
 	});
 }
 
-function limiter() {
+/** The limiter of one budget over the `rate_limit` table, made once per database. */
+export function limiterFor(budget: Budget) {
 	const db = getSqlite();
-	if (current?.db !== db)
-		current = {
-			db,
-			limiter: new RateLimiterSQLite({
-				storeClient: keepingStatements(db),
-				storeType: 'better-sqlite3',
-				tableName: 'rate_limit',
-				tableCreated: true, // by the migrations
-				clearExpiredByTimeout: true,
-				keyPrefix: 'compute',
-				points: COMPUTE_REQUESTS,
-				duration: COMPUTE_WINDOW_S
-			})
-		};
-	return current.limiter;
+	if (current?.db !== db) current = { db, client: keepingStatements(db), limiters: new Map() };
+	let limiter = current.limiters.get(budget.prefix);
+	if (!limiter) {
+		limiter = new RateLimiterSQLite({
+			storeClient: current.client,
+			storeType: 'better-sqlite3',
+			tableName: 'rate_limit',
+			tableCreated: true, // by the migrations
+			clearExpiredByTimeout: true,
+			keyPrefix: budget.prefix,
+			points: budget.points,
+			duration: budget.seconds
+		});
+		current.limiters.set(budget.prefix, limiter);
+	}
+	return limiter;
+}
+
+/** The 429 answer, with Retry-After in whole seconds. */
+export function tooMany(message: (seconds: number) => string, msBeforeNext: number) {
+	const seconds = Math.max(1, Math.ceil(msBeforeNext / 1000));
+	const res = problem(429, message(seconds));
+	res.headers.set('Retry-After', String(seconds));
+	return res;
+}
+
+/**
+ * Count one request against a budget. Null when it may go ahead; otherwise the 429 answer.
+ */
+export async function consume(
+	budget: Budget,
+	key: string,
+	message: (seconds: number) => string
+): Promise<Response | null> {
+	try {
+		await limiterFor(budget).consume(key);
+		return null;
+	} catch (e) {
+		if (!(e instanceof RateLimiterRes)) throw e;
+		return tooMany(message, e.msBeforeNext);
+	}
 }
 
 /**
  * Count one compute request from this address. Null when it may go ahead; otherwise the 429
  * answer, with Retry-After in whole seconds.
  */
-export async function limitCompute(address: string): Promise<Response | null> {
-	try {
-		await limiter().consume(address);
-		return null;
-	} catch (e) {
-		if (!(e instanceof RateLimiterRes)) throw e;
-		const seconds = Math.max(1, Math.ceil(e.msBeforeNext / 1000));
-		const res = problem(
-			429,
+export function limitCompute(address: string): Promise<Response | null> {
+	return consume(
+		COMPUTE_BUDGET,
+		address,
+		(seconds) =>
 			`Too many calculations from your address: at most ${COMPUTE_REQUESTS} a minute. Try again in ${seconds} s.`
-		);
-		res.headers.set('Retry-After', String(seconds));
-		return res;
-	}
+	);
 }

@@ -63,6 +63,8 @@ export function event(opts: {
 	method?: string;
 	body?: unknown;
 	params?: Record<string, string>;
+	/** the client's address (the documentation range of RFC 5737 unless given) */
+	address?: string;
 }) {
 	const url = new URL(opts.url ?? '/', 'http://localhost');
 	const init: RequestInit = { method: opts.method ?? 'GET' };
@@ -74,7 +76,8 @@ export function event(opts: {
 		locals: { actor: opts.actor },
 		url,
 		params: opts.params ?? {},
-		request: new Request(url, init)
+		request: new Request(url, init),
+		getClientAddress: () => opts.address ?? '192.0.2.10'
 		// eslint-disable-next-line @typescript-eslint/no-explicit-any
 	} as any;
 }

@@ -30,6 +30,12 @@ import * as documentUndeleteApi from '../../../src/routes/api/v1/documents/[id]/
 import { addDocument, deleteDocument } from '../../../src/lib/server/documents';
 import { useStore } from '../../../src/lib/server/storage';
 import { folderStore } from '../../../src/lib/server/storage/folder';
+import * as classSessionsApi from '../../../src/routes/api/v1/class-sessions/+server';
+import * as classSessionApi from '../../../src/routes/api/v1/class-sessions/[id]/+server';
+import * as classApi from '../../../src/routes/api/v1/class/[code]/+server';
+import * as classSeatsApi from '../../../src/routes/api/v1/class/[code]/seats/+server';
+import * as classAnswerApi from '../../../src/routes/api/v1/class/[code]/answer/+server';
+import { joinClass, startClassSession } from '../../../src/lib/server/class-sessions';
 
 // uploads made by these rows go to a scratch folder, never the repository's data folder
 useStore(folderStore(mkdtempSync(join(tmpdir(), 'spanwright-api-files-'))));
@@ -331,5 +337,83 @@ table.push(
 			return documentUndeleteApi.POST(event({ actor: a, method: 'POST', params: { id } }));
 		},
 		expect: write
+	}
+);
+
+// ---- class sessions: the teacher's own (a session belongs to the person who started it) and the
+// class's side, open to anyone with the join code ----
+const sessionOf = (c: Cast) => startClassSession(c.owner, { experiment: 'span', step: 0 });
+const hostOnly = { anonymous: 401, viewer: 404, editor: 404, owner: 200, outsider: 404 };
+const anyone = { anonymous: 200, viewer: 200, editor: 200, owner: 200, outsider: 200 };
+table.push(
+	{
+		route: 'GET /class-sessions',
+		call: (a) => classSessionsApi.GET(event({ actor: a })),
+		expect: { ...anyone, anonymous: 401 }
+	},
+	{
+		route: 'POST /class-sessions',
+		call: (a) =>
+			classSessionsApi.POST(
+				event({ actor: a, method: 'POST', body: { experiment: 'thickness', step: 0 } })
+			),
+		expect: { anonymous: 401, viewer: 201, editor: 201, owner: 201, outsider: 201 }
+	},
+	{
+		route: "GET /class-sessions/{id} (the owner's session)",
+		call: async (a, c) =>
+			classSessionApi.GET(event({ actor: a, params: { id: (await sessionOf(c)).id } })),
+		expect: hostOnly
+	},
+	{
+		route: "PATCH /class-sessions/{id} (the owner's session)",
+		call: async (a, c) =>
+			classSessionApi.PATCH(
+				event({
+					actor: a,
+					method: 'PATCH',
+					params: { id: (await sessionOf(c)).id },
+					body: { revealed: true }
+				})
+			),
+		expect: hostOnly
+	},
+	{
+		route: "DELETE /class-sessions/{id} (the owner's session)",
+		call: async (a, c) =>
+			classSessionApi.DELETE(
+				event({ actor: a, method: 'DELETE', params: { id: (await sessionOf(c)).id } })
+			),
+		expect: { ...hostOnly, owner: 204 }
+	},
+	{
+		route: 'GET /class/{code}',
+		call: async (a, c) =>
+			classApi.GET(event({ actor: a, params: { code: (await sessionOf(c)).code } })),
+		expect: anyone
+	},
+	{
+		route: 'POST /class/{code}/seats',
+		call: async (a, c) =>
+			classSeatsApi.POST(
+				event({
+					actor: a,
+					method: 'POST',
+					params: { code: (await sessionOf(c)).code },
+					body: { nickname: 'Robin' }
+				})
+			),
+		expect: { anonymous: 201, viewer: 201, editor: 201, owner: 201, outsider: 201 }
+	},
+	{
+		route: 'PUT /class/{code}/answer',
+		call: async (a, c) => {
+			const { code } = await sessionOf(c);
+			const { seat } = await joinClass(code, 'Robin');
+			return classAnswerApi.PUT(
+				event({ actor: a, method: 'PUT', params: { code }, body: { seat, choice: 'x16' } })
+			);
+		},
+		expect: anyone
 	}
 );

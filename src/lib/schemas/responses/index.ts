@@ -7,3 +7,4 @@ export * from './shelf';
 export * from './joinery';
 export * from './wall';
 export * from './documents';
+export * from './class-sessions';

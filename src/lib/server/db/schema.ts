@@ -346,3 +346,67 @@ export const recordSends = sqliteTable(
 	},
 	(t) => [index('record_send_project').on(t.projectId)]
 );
+
+// ---- Class sessions: a teacher's live question to a class; nothing here outlives the session ----
+
+/**
+ * A session a signed-in teacher runs from one of the lab's experiments. Students join with the
+ * short code; the row (and with it every seat and answer) is deleted when the teacher ends it or
+ * once `expiresAt` has passed.
+ */
+export const classSessions = sqliteTable(
+	'class_session',
+	{
+		id: id(),
+		// six letters and digits a student types (see src/lib/schemas/class-session.ts)
+		code: text('code').notNull().unique(),
+		hostId: text('host_id')
+			.notNull()
+			.references(() => users.id, { onDelete: 'cascade' }),
+		experimentId: text('experiment_id').notNull(),
+		// the experiment's step on the screen (0-based)
+		step: integer('step').notNull().default(0),
+		revealed: integer('revealed', { mode: 'boolean' }).notNull().default(false),
+		expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
+		createdAt: createdAt()
+	},
+	(t) => [index('class_session_host').on(t.hostId), index('class_session_expires').on(t.expiresAt)]
+);
+
+/** A student in a session: a nickname and the hash of the seat token their phone keeps. */
+export const classSeats = sqliteTable(
+	'class_seat',
+	{
+		id: id(),
+		sessionId: text('session_id')
+			.notNull()
+			.references(() => classSessions.id, { onDelete: 'cascade' }),
+		nickname: text('nickname').notNull(),
+		// the nickname folded to lower case: two students cannot both be "Sam"
+		nicknameKey: text('nickname_key').notNull(),
+		// sha-256 of the seat token; the token itself is never stored
+		tokenHash: text('token_hash').notNull().unique(),
+		createdAt: createdAt()
+	},
+	(t) => [uniqueIndex('class_seat_nickname').on(t.sessionId, t.nicknameKey)]
+);
+
+/** One student's answer to one step's question (changed freely until the answer is revealed). */
+export const classAnswers = sqliteTable(
+	'class_answer',
+	{
+		seatId: text('seat_id')
+			.notNull()
+			.references(() => classSeats.id, { onDelete: 'cascade' }),
+		sessionId: text('session_id')
+			.notNull()
+			.references(() => classSessions.id, { onDelete: 'cascade' }),
+		step: integer('step').notNull(),
+		choice: text('choice').notNull(),
+		answeredAt: integer('answered_at', { mode: 'timestamp_ms' }).notNull()
+	},
+	(t) => [
+		primaryKey({ columns: [t.seatId, t.step] }),
+		index('class_answer_session').on(t.sessionId, t.step)
+	]
+);

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { createDocument, type ZodOpenApiOperationObject } from 'zod-openapi';
 import { problemSchema } from '$lib/schemas/responses/common';
+import { classSessionOperations } from './class-sessions';
 import { documentOperations } from './documents';
 import { foundationOperations } from './foundation';
 import { joineryOperations } from './joinery';
@@ -15,7 +16,8 @@ export const operations: ApiOperation[] = [
 	...joineryOperations,
 	...wallOperations,
 	...workbenchOperations,
-	...documentOperations
+	...documentOperations,
+	...classSessionOperations
 ];
 
 /** The session cookie Auth.js sets over HTTPS (plain http in development drops the prefix). */
