@@ -32,7 +32,7 @@ export const nicknameSchema = z
 			.min(1, 'Type a nickname: any name the class will know you by.')
 			.max(24, 'At most 24 characters.')
 			// letters, marks, digits, spaces and a little punctuation; no control or format characters
-			.regex(/^[\p{L}\p{M}\p{N} .'_-]+$/u, 'Letters, digits, spaces and . \' _ - only.')
+			.regex(/^[\p{L}\p{M}\p{N} .'_-]+$/u, "Letters, digits, spaces and . ' _ - only.")
 	);
 
 export const joinClassSchema = z.object({ nickname: nicknameSchema });

@@ -30,9 +30,7 @@ export async function countMiss(address: string) {
 }
 
 export async function limitJoin(address: string) {
-	return (
-		(await refuseGuessing(address)) ?? consume(CLASS_JOIN_BUDGET, address, wait('joins'))
-	);
+	return (await refuseGuessing(address)) ?? consume(CLASS_JOIN_BUDGET, address, wait('joins'));
 }
 
 export async function limitAnswer(address: string, seat: string) {
@@ -42,6 +40,8 @@ export async function limitAnswer(address: string, seat: string) {
 		consume(
 			SEAT_ANSWER_BUDGET,
 			// the token itself is never stored, here either
-			createHash('sha256').update(seat).digest('hex'), (s) => `Too many answers from this phone. Try again in ${s} s.`)
+			createHash('sha256').update(seat).digest('hex'),
+			(s) => `Too many answers from this phone. Try again in ${s} s.`
+		)
 	);
 }

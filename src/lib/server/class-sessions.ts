@@ -60,7 +60,9 @@ function publicView(row: SessionRow) {
 				}
 			: null,
 		revealed: row.revealed,
-		answer: answer ? { choice: answer.choice.id, label: answer.choice.label, words: answer.words } : null,
+		answer: answer
+			? { choice: answer.choice.id, label: answer.choice.label, words: answer.words }
+			: null,
 		expiresAt: row.expiresAt
 	};
 }
@@ -252,7 +254,13 @@ export async function answerClass(code: string, input: { seat: string; choice: s
 	const answeredAt = new Date();
 	await db
 		.insert(classAnswers)
-		.values({ seatId: seat.id, sessionId: row.id, step: row.step, choice: input.choice, answeredAt })
+		.values({
+			seatId: seat.id,
+			sessionId: row.id,
+			step: row.step,
+			choice: input.choice,
+			answeredAt
+		})
 		.onConflictDoUpdate({
 			target: [classAnswers.seatId, classAnswers.step],
 			set: { choice: input.choice, answeredAt }

@@ -38,9 +38,7 @@ export const classHostViewSchema = classViewSchema
 			})
 			.nullable(),
 		seats: z.number().int().min(0).meta({ description: 'Students who have joined' }),
-		answers: z.array(
-			z.object({ nickname: z.string(), choice: z.string(), answeredAt: timestamp })
-		)
+		answers: z.array(z.object({ nickname: z.string(), choice: z.string(), answeredAt: timestamp }))
 	})
 	.meta({ id: 'ClassHostView' });
 

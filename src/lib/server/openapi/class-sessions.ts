@@ -35,7 +35,10 @@ export const classSessionOperations: ApiOperation[] = [
 			'Start a class session on one of the lab’s experiments; it ends and is deleted after two hours',
 		body: startClassSchema,
 		responses: {
-			201: { description: 'Started: the join code and the first step', schema: classHostViewSchema },
+			201: {
+				description: 'Started: the join code and the first step',
+				schema: classHostViewSchema
+			},
 			409: 'Three sessions are open already',
 			422: 'Invalid fields, or no such experiment or step'
 		}
