@@ -53,7 +53,7 @@ async function validate(route: string, res: Response) {
 }
 
 const seen = new Set<string>();
-const whos: Who[] = ['anonymous', 'viewer', 'editor', 'owner', 'outsider'];
+const whos: Who[] = ['anonymous', 'viewer', 'student', 'editor', 'owner', 'outsider'];
 
 describe('every answer of the stored-data routes matches the document', () => {
 	for (const row of table)

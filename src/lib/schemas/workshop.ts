@@ -1,11 +1,25 @@
 import { z } from 'zod';
 import { emailField } from './account';
 
-export const roleSchema = z.enum(['viewer', 'editor', 'owner']);
+// a student: only in a workshop that is a class (see src/lib/server/access.ts)
+export const roleSchema = z.enum(['viewer', 'student', 'editor', 'owner']);
 
 export const workshopNameSchema = z.object({
 	name: z.string().trim().min(2, 'Give the workshop a name of at least 2 characters.').max(80)
 });
+
+/** Changing a workshop (owner): its name, or whether it is a class; at least one of them. */
+export const workshopPatchSchema = z
+	.object({
+		name: workshopNameSchema.shape.name.optional(),
+		isClass: z.boolean().optional()
+	})
+	.refine((v) => v.name !== undefined || v.isClass !== undefined, {
+		message: 'Send a new name, or whether the workshop is a class.'
+	});
+
+/** The class switch on the workshop page (a checkbox: absent means off). */
+export const classModeSchema = z.object({ isClass: z.boolean().default(false) });
 
 export const invitationSchema = z.object({
 	email: emailField,

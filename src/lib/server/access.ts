@@ -17,7 +17,7 @@ export interface Actor {
 	lengthUnit?: LengthUnit;
 }
 
-const RANK: Record<Role, number> = { viewer: 1, editor: 2, owner: 3 };
+const RANK: Record<Role, number> = { viewer: 1, student: 2, editor: 3, owner: 4 };
 
 export function roleAtLeast(role: Role, needed: Role) {
 	return RANK[role] >= RANK[needed];
@@ -62,11 +62,34 @@ export function requireActor(actor: Actor | null): Actor {
  */
 export type ProjectRole = Role | 'client';
 
-const PROJECT_RANK: Record<ProjectRole, number> = { client: 0, viewer: 1, editor: 2, owner: 3 };
+const PROJECT_RANK: Record<ProjectRole, number> = {
+	client: 0,
+	viewer: 1,
+	student: 2,
+	editor: 3,
+	owner: 4
+};
 
-/** True for the roles that change a project's analyses (editor, owner). */
+/** True for the roles that change a project and all its analyses (editor, owner). */
 export function canEdit(role: ProjectRole) {
 	return PROJECT_RANK[role] >= PROJECT_RANK.editor;
+}
+
+/** True for the roles that save new analyses in a project (a student, an editor, an owner). */
+export function canAddAnalyses(role: ProjectRole) {
+	return PROJECT_RANK[role] >= PROJECT_RANK.student;
+}
+
+/**
+ * Whether someone with this role may change (rename, recompute, move, delete) one analysis:
+ * editors and owners any, a student only one they created.
+ */
+export function canChangeAnalysis(
+	role: ProjectRole,
+	actorId: string,
+	analysis: { createdBy: string | null }
+) {
+	return canEdit(role) || (role === 'student' && analysis.createdBy === actorId);
 }
 
 /** The actor's role in a project: their workshop role, else 'client' when invited to it, else null. */

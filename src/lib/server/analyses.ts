@@ -7,7 +7,7 @@ import type { LengthUnit } from '$lib/schemas/preferences';
 import { error } from '@sveltejs/kit';
 import { and, asc, count, desc, eq, gt, isNull, sql, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
-import { type Actor } from './access';
+import { canChangeAnalysis, type Actor } from './access';
 import { computeAnalysis, describeAnalysis, describeInput } from '$lib/kinds/registry';
 import { getDb, firstRow, oneRow, transaction } from './db';
 import { containsText } from './db/contains';
@@ -103,7 +103,12 @@ export async function listAnalyses(actor: Actor, projectId: string, query: Analy
 
 async function findRow(id: string, includeDeleted = false) {
 	const row = await getDb()
-		.select({ ...listColumns, deletedAt: analyses.deletedAt, workshopId: projects.workshopId })
+		.select({
+			...listColumns,
+			deletedAt: analyses.deletedAt,
+			workshopId: projects.workshopId,
+			createdBy: analyses.createdBy
+		})
 		.from(analyses)
 		.innerJoin(projects, eq(projects.id, analyses.projectId))
 		.leftJoin(creator, eq(creator.id, analyses.createdBy))
@@ -118,10 +123,17 @@ async function findRow(id: string, includeDeleted = false) {
 export async function getAnalysis(actor: Actor, id: string) {
 	const row = await findRow(id);
 	const { project, role } = await getProject(actor, row.projectId);
-	const { workshopId: _w, deletedAt: _d, ...analysis } = present(row, await lengthUnitOf(actor));
+	const {
+		workshopId: _w,
+		deletedAt: _d,
+		createdBy: _c,
+		...analysis
+	} = present(row, await lengthUnitOf(actor));
 	void _w;
 	void _d;
-	return { analysis, project, role };
+	void _c;
+	// whether this actor may change it: editors any, a student their own
+	return { analysis, project, role, canChange: canChangeAnalysis(role, actor.id, row) };
 }
 
 export type AnalysisView = Awaited<ReturnType<typeof getAnalysis>>['analysis'];
@@ -157,13 +169,13 @@ async function recordRevision(row: Row, actor: Actor) {
 	});
 }
 
-/** Save a new analysis in a project (editor); the engine computes its result. */
+/** Save a new analysis in a project (editor, or a student of a class); the engine computes it. */
 export async function createAnalysis(
 	actor: Actor,
 	projectId: string,
 	body: { kind: AnalysisKind; name: string; input: unknown }
 ) {
-	await getProject(actor, projectId, 'editor');
+	await getProject(actor, projectId, 'student');
 	const run = computed(body.kind, body.input);
 	const now = new Date();
 	const id = await transaction(async () => {
@@ -194,7 +206,9 @@ export async function createAnalysis(
 
 async function editable(actor: Actor, id: string, includeDeleted = false) {
 	const row = await findRow(id, includeDeleted);
-	await getProject(actor, row.projectId, 'editor');
+	const { role } = await getProject(actor, row.projectId, 'student');
+	if (!canChangeAnalysis(role, actor.id, row))
+		error(403, 'A student changes only the analyses they saved; this one is someone else’s.');
 	return row;
 }
 
@@ -328,7 +342,9 @@ export async function restoreRevision(
 
 /** A copy in the same project, recomputed with the current engine, starting at version 1. */
 export async function duplicateAnalysis(actor: Actor, id: string, body: { name?: string } = {}) {
-	const source = await editable(actor, id);
+	// a student may start from anyone's analysis: the copy is theirs
+	const source = await findRow(id);
+	await getProject(actor, source.projectId, 'student');
 	const name = body.name ?? `${source.name} (copy)`.slice(0, 120);
 	return await createAnalysis(actor, source.projectId, {
 		kind: source.kind,
@@ -340,7 +356,7 @@ export async function duplicateAnalysis(actor: Actor, id: string, body: { name?:
 /** Move to another project of the same workshop (editor); other workshops are refused (422). */
 export async function moveAnalysis(actor: Actor, id: string, projectId: string) {
 	const row = await editable(actor, id);
-	const { project: target } = await getProject(actor, projectId, 'editor');
+	const { project: target } = await getProject(actor, projectId, 'student');
 	if (target.workshopId !== row.workshopId)
 		throw new AnalysisProblem(422, 'An analysis moves only between projects of its workshop.', [
 			{ path: ['projectId'], message: 'Pick a project of the same workshop.' }

@@ -9,6 +9,7 @@ export interface WorkshopSummary {
 	id: string;
 	name: string;
 	personal: boolean;
+	isClass: boolean;
 	role: Role;
 }
 
@@ -33,6 +34,7 @@ export async function listWorkshops(actor: Actor): Promise<WorkshopSummary[]> {
 			id: workshops.id,
 			name: workshops.name,
 			personal: workshops.personal,
+			isClass: workshops.isClass,
 			role: memberships.role
 		})
 		.from(memberships)
@@ -70,6 +72,59 @@ export async function renameWorkshop(actor: Actor, workshopId: string, name: str
 		.where(eq(workshops.id, workshopId))
 		.returning()
 		.then(firstRow);
+}
+
+/** The student role exists only in a class: refused (422) elsewhere. */
+async function requireClassFor(workshopId: string, role: Role) {
+	if (role !== 'student') return;
+	const ws = await getDb()
+		.select()
+		.from(workshops)
+		.where(eq(workshops.id, workshopId))
+		.then(firstRow);
+	if (!ws?.isClass)
+		error(422, 'Only a class has students: make this workshop a class first (its owner can).');
+}
+
+/**
+ * Make a workshop a class (its owner may then give members the student role) or a shop again;
+ * the latter is refused (409) while anyone is a student in it or invited as one.
+ */
+export async function setClassMode(actor: Actor, workshopId: string, isClass: boolean) {
+	await requireRole(actor, workshopId, 'owner');
+	const db = getDb();
+	const ws = await db.select().from(workshops).where(eq(workshops.id, workshopId)).then(firstRow);
+	if (ws?.personal && isClass)
+		error(409, 'A personal workshop cannot be a class. Create a workshop for the class.');
+	if (!isClass) {
+		const students = await db
+			.select({ n: count() })
+			.from(memberships)
+			.where(and(eq(memberships.workshopId, workshopId), eq(memberships.role, 'student')))
+			.then(oneRow);
+		const invited = await db
+			.select({ n: count() })
+			.from(invitations)
+			.where(
+				and(
+					eq(invitations.workshopId, workshopId),
+					eq(invitations.role, 'student'),
+					isNull(invitations.acceptedAt)
+				)
+			)
+			.then(oneRow);
+		if (students.n + invited.n > 0)
+			error(
+				409,
+				'This class still has students (or invitations as one). Give them another role first.'
+			);
+	}
+	return db
+		.update(workshops)
+		.set({ isClass })
+		.where(eq(workshops.id, workshopId))
+		.returning()
+		.then(oneRow);
 }
 
 export async function deleteWorkshop(actor: Actor, workshopId: string) {
@@ -131,6 +186,7 @@ export async function changeMemberRole(
 	await requireRole(actor, workshopId, 'owner');
 	const member = await membershipOf(userId, workshopId);
 	if (!member) error(404, 'That person is not a member here.');
+	await requireClassFor(workshopId, role);
 	if (member.role === 'owner' && role !== 'owner' && (await ownerCount(workshopId)) <= 1)
 		error(409, 'A workshop needs at least one owner. Make someone else an owner first.');
 	await getDb()
@@ -164,6 +220,7 @@ export async function createInvitation(
 	role: Role
 ) {
 	await requireRole(actor, workshopId, 'owner');
+	await requireClassFor(workshopId, role);
 	const token = randomBytes(24).toString('base64url');
 	const invitation = await getDb()
 		.insert(invitations)

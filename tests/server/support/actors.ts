@@ -18,8 +18,9 @@ export async function makeUser(label: string): Promise<Actor> {
 }
 
 /**
- * A workshop with one member in each role, an outsider who belongs to another workshop, and two
- * clients who belong to no workshop of theirs yet (grant them projects with grantProject).
+ * A workshop (a class) with one member in each role, a student among them, an outsider who
+ * belongs to another workshop, and two clients who belong to no workshop of theirs yet (grant
+ * them projects with grantProject).
  */
 export async function makeWorkshopWithCast() {
 	const db = getDb();
@@ -27,13 +28,14 @@ export async function makeWorkshopWithCast() {
 		owner: await makeUser('owner'),
 		editor: await makeUser('editor'),
 		viewer: await makeUser('viewer'),
+		student: await makeUser('student'),
 		outsider: await makeUser('outsider'),
 		client: await makeUser('client'),
 		otherClient: await makeUser('other-client')
 	};
 	const ws = await db
 		.insert(workshops)
-		.values({ name: `Shop ${n}`, createdBy: cast.owner.id })
+		.values({ name: `Shop ${n}`, createdBy: cast.owner.id, isClass: true })
 		.returning()
 		.then(oneRow);
 	const other = await db
@@ -41,7 +43,7 @@ export async function makeWorkshopWithCast() {
 		.values({ name: `Other ${n}` })
 		.returning()
 		.then(oneRow);
-	for (const role of ['owner', 'editor', 'viewer'] as Role[])
+	for (const role of ['owner', 'editor', 'viewer', 'student'] as Role[])
 		await db
 			.insert(memberships)
 			.values({ userId: cast[role as 'owner'].id, workshopId: ws.id, role });

@@ -64,12 +64,18 @@ async function upload(actor: Actor | null, projectId: string) {
 	} as any);
 }
 
-export type Who = 'anonymous' | 'viewer' | 'editor' | 'owner' | 'outsider';
+export type Who = 'anonymous' | 'viewer' | 'student' | 'editor' | 'owner' | 'outsider';
 type Cast = Awaited<ReturnType<typeof makeWorkshopWithCast>>;
 export interface Row {
 	route: string;
 	call: (actor: Actor | null, cast: Cast, projectId: string) => Promise<Response> | Response;
-	expect: Record<Who, number>;
+	/** a student (of a class) is expected to fare as a viewer unless the row says otherwise */
+	expect: Record<Exclude<Who, 'student'>, number> & { student?: number };
+}
+
+/** The status a row expects for one of the cast. */
+export function expected(row: Row, who: Who): number {
+	return who === 'student' ? (row.expect.student ?? row.expect.viewer) : row.expect[who];
 }
 
 export const table: Row[] = [
@@ -163,7 +169,7 @@ table.push(
 					body: { kind: 'shelf', name: 'Bay shelf', input: handShelf }
 				})
 			),
-		expect: { ...write, editor: 201, owner: 201 }
+		expect: { ...write, student: 201, editor: 201, owner: 201 }
 	},
 	{
 		route: 'GET /analyses/{id}',
@@ -243,7 +249,8 @@ table.push(
 			duplicateApi.POST(
 				event({ actor: a, method: 'POST', params: { id: await analysisOf(c, p) }, body: {} })
 			),
-		expect: { ...write, editor: 201, owner: 201 }
+		// a student may start from anyone's analysis: the copy is theirs
+		expect: { ...write, student: 201, editor: 201, owner: 201 }
 	},
 	{
 		route: 'POST /analyses/{id}/move',
@@ -263,6 +270,75 @@ table.push(
 			);
 		},
 		expect: write
+	}
+);
+
+// ---- a student of a class: the analyses they saved themselves, and only those ----
+const studentsOwn = async (c: Cast, projectId: string) =>
+	(await saveShelf(c.student, projectId)).id;
+const own = { anonymous: 401, viewer: 403, student: 200, editor: 200, owner: 200, outsider: 404 };
+table.push(
+	{
+		route: "PATCH /analyses/{id} (a student's own)",
+		call: async (a, c, p) =>
+			analysisApi.PATCH(
+				event({
+					actor: a,
+					method: 'PATCH',
+					params: { id: await studentsOwn(c, p) },
+					body: { version: 1, name: 'My pantry shelf' }
+				})
+			),
+		expect: own
+	},
+	{
+		route: "PUT /analyses/{id} (a student's own)",
+		call: async (a, c, p) =>
+			analysisApi.PUT(
+				event({
+					actor: a,
+					method: 'PUT',
+					params: { id: await studentsOwn(c, p) },
+					body: { version: 1, name: 'Thicker', input: { ...handShelf, thickness: 0.025 } }
+				})
+			),
+		expect: own
+	},
+	{
+		route: "DELETE /analyses/{id} (a student's own)",
+		call: async (a, c, p) =>
+			analysisApi.DELETE(
+				event({ actor: a, method: 'DELETE', params: { id: await studentsOwn(c, p) } })
+			),
+		expect: own
+	},
+	{
+		route: "POST /analyses/{id}/undelete (a student's own)",
+		call: async (a, c, p) => {
+			const id = await studentsOwn(c, p);
+			await deleteAnalysis(c.student, id);
+			return undeleteApi.POST(event({ actor: a, method: 'POST', params: { id } }));
+		},
+		expect: own
+	},
+	{
+		route: "POST /analyses/{id}/move (a student's own)",
+		call: async (a, c, p) => {
+			const target = await createProject(c.owner, c.workshopId, {
+				name: 'Second bay',
+				client: '',
+				siteNotes: ''
+			});
+			return moveApi.POST(
+				event({
+					actor: a,
+					method: 'POST',
+					params: { id: await studentsOwn(c, p) },
+					body: { projectId: target.id }
+				})
+			);
+		},
+		expect: own
 	}
 );
 

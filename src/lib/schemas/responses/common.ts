@@ -26,4 +26,4 @@ export function pageOf<T extends z.ZodType>(item: T) {
 	});
 }
 
-export const roleSchema = z.enum(['owner', 'editor', 'viewer']);
+export const roleSchema = z.enum(['owner', 'editor', 'student', 'viewer']);

@@ -5,7 +5,13 @@ import { pageOf, roleSchema, timestamp } from './common';
 export const healthSchema = z.object({ status: z.literal('ok'), version: z.string() });
 
 export const workshopSummarySchema = z
-	.object({ id: z.string(), name: z.string(), personal: z.boolean(), role: roleSchema })
+	.object({
+		id: z.string(),
+		name: z.string(),
+		personal: z.boolean(),
+		isClass: z.boolean(),
+		role: roleSchema
+	})
 	.meta({ id: 'WorkshopSummary' });
 
 export const workshopSchema = z
@@ -13,6 +19,7 @@ export const workshopSchema = z
 		id: z.string(),
 		name: z.string(),
 		personal: z.boolean(),
+		isClass: z.boolean().meta({ description: 'A class: members may be students' }),
 		createdBy: z.string().nullable(),
 		createdAt: timestamp
 	})

@@ -98,11 +98,15 @@ export const workshops = sqliteTable('workshop', {
 	id: id(),
 	name: text('name').notNull(),
 	personal: integer('personal', { mode: 'boolean' }).notNull().default(false),
+	// a class: its owner may give members the student role (src/lib/server/access.ts)
+	isClass: integer('is_class', { mode: 'boolean' }).notNull().default(false),
 	createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
 	createdAt: createdAt()
 });
 
-export const ROLES = ['viewer', 'editor', 'owner'] as const;
+// a student (only in a class workshop) reads like a viewer, and creates and changes analyses of
+// their own in the class's projects, never anyone else's
+export const ROLES = ['viewer', 'student', 'editor', 'owner'] as const;
 export type Role = (typeof ROLES)[number];
 
 export const memberships = sqliteTable(

@@ -16,7 +16,7 @@ import {
 	projectListQuerySchema,
 	projectPatchSchema
 } from '$lib/schemas/project';
-import { workshopNameSchema } from '$lib/schemas/workshop';
+import { workshopNameSchema, workshopPatchSchema } from '$lib/schemas/workshop';
 import { apiTokenCreateSchema } from '$lib/schemas/account';
 import type { ApiOperation } from './types';
 
@@ -68,11 +68,12 @@ const workshopAndProjectOperations: ApiOperation[] = [
 		method: 'patch',
 		path: '/workshops/{id}',
 		tag: 'workshops',
-		summary: 'Rename a workshop (owner)',
-		body: workshopNameSchema,
+		summary: 'Rename a workshop, or make it a class whose members may be students (owner)',
+		body: workshopPatchSchema,
 		responses: {
-			200: { description: 'Renamed', schema: workshopSchema },
+			200: { description: 'Changed', schema: workshopSchema },
 			403: 'Owners only',
+			409: 'A personal workshop cannot be a class; a class with students stays one',
 			422: 'Invalid fields',
 			...member
 		}

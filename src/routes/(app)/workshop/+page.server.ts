@@ -5,7 +5,12 @@ import { requireActor } from '$lib/server/access';
 import { sendInvitation } from '$lib/server/invitation-mail';
 import { linkOrigin, MAIL_UNAVAILABLE_MESSAGE } from '$lib/server/mail';
 import * as workshops from '$lib/server/workshops';
-import { confirmSchema, invitationSchema, workshopNameSchema } from '$lib/schemas/workshop';
+import {
+	classModeSchema,
+	confirmSchema,
+	invitationSchema,
+	workshopNameSchema
+} from '$lib/schemas/workshop';
 import { current, memberActions } from './member-actions.server';
 import { safeRedirectPath } from '$lib/schemas/return-path';
 import type { Actions, PageServerLoad } from './$types';
@@ -38,6 +43,17 @@ export const actions: Actions = {
 		if (!form.valid) return fail(400, { renameForm: form });
 		await workshops.renameWorkshop(actor, ws.id, form.data.name);
 		return message(form, 'Renamed.');
+	},
+	classMode: async ({ locals, request }) => {
+		const { actor, ws } = await current(locals);
+		const form = await superValidate(await readForm(request), zod4(classModeSchema));
+		if (!form.valid) return fail(400, { memberError: 'Choose whether this is a class.' });
+		await workshops.setClassMode(actor, ws.id, form.data.isClass);
+		return {
+			memberMessage: form.data.isClass
+				? 'This workshop is a class: invite students, or make members students.'
+				: 'This workshop is no longer a class.'
+		};
 	},
 	create: async ({ locals, request }) => {
 		const actor = requireActor(locals.actor);

@@ -58,17 +58,21 @@ export async function saveAnalysis(event: RequestEvent, kind: AnalysisKind, anal
 	redirect(303, kindScreenPath(projectId, kind, id));
 }
 
-/** The load of a new analysis's screen: an editor's (viewers read saved ones), named by its kind. */
+/**
+ * The load of a new analysis's screen: an editor's or a student's (viewers read saved ones), named
+ * by its kind.
+ */
 export async function loadNewAnalysis(
 	event: Pick<RequestEvent, 'locals' | 'params'>,
 	kind: AnalysisKind
 ) {
 	const actor = requireActor(event.locals.actor);
 	const { project } = await getProject(actor, event.params.id!);
-	const { role } = await requireRole(actor, project.workshopId, 'editor');
+	const { role } = await requireRole(actor, project.workshopId, 'student');
 	return {
 		project: { id: project.id, name: project.name },
 		role,
+		canChange: true,
 		save: await saveForm({ name: kindLabel(kind) })
 	};
 }
@@ -78,7 +82,7 @@ export async function loadSavedAnalysis(
 	event: Pick<RequestEvent, 'locals' | 'params'>,
 	kind: AnalysisKind
 ) {
-	const { analysis, project, role } = await getAnalysis(
+	const { analysis, project, role, canChange } = await getAnalysis(
 		requireActor(event.locals.actor),
 		event.params.analysisId!
 	);
@@ -86,6 +90,8 @@ export async function loadSavedAnalysis(
 	return {
 		project: { id: project.id, name: project.name },
 		role,
+		// editors change any analysis, a student their own
+		canChange,
 		analysis: {
 			id: analysis.id,
 			name: analysis.name,

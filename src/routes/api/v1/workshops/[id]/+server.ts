@@ -2,8 +2,14 @@ import type { RequestHandler } from './$types';
 import { json } from '@sveltejs/kit';
 import { requireActor } from '$lib/server/access';
 import { api, readJson } from '$lib/server/http';
-import { deleteWorkshop, getWorkshop, listMembers, renameWorkshop } from '$lib/server/workshops';
-import { workshopNameSchema } from '$lib/schemas/workshop';
+import {
+	deleteWorkshop,
+	getWorkshop,
+	listMembers,
+	renameWorkshop,
+	setClassMode
+} from '$lib/server/workshops';
+import { workshopPatchSchema } from '$lib/schemas/workshop';
 
 export const GET: RequestHandler = api(async ({ locals, params }) => {
 	const actor = requireActor(locals.actor);
@@ -13,10 +19,16 @@ export const GET: RequestHandler = api(async ({ locals, params }) => {
 
 export const PATCH: RequestHandler = api(async ({ locals, params, request }) => {
 	const actor = requireActor(locals.actor);
-	await getWorkshop(actor, params.id);
-	const body = await readJson(request, workshopNameSchema);
+	const current = await getWorkshop(actor, params.id);
+	const body = await readJson(request, workshopPatchSchema);
 	if (!body.ok) return body.response;
-	return json(await renameWorkshop(actor, params.id, body.data.name));
+	const { name, isClass } = body.data;
+	let ws = { ...current };
+	if (isClass !== undefined) ws = { ...ws, ...(await setClassMode(actor, params.id, isClass)) };
+	if (name !== undefined) ws = { ...ws, ...(await renameWorkshop(actor, params.id, name)) };
+	const { role: _r, ...workshop } = ws;
+	void _r;
+	return json(workshop);
 });
 
 export const DELETE: RequestHandler = api(async ({ locals, params }) => {
