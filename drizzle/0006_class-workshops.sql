@@ -1,0 +1,1 @@
+ALTER TABLE `workshop` ADD `is_class` integer DEFAULT false NOT NULL;
