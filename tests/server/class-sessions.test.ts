@@ -56,7 +56,7 @@ async function rows(sessionId: string) {
 
 describe('a class session from start to end', () => {
 	it('takes two students’ answers, shows them to the teacher, reveals the engine’s answer, steps on and ends with nothing kept', async () => {
-		const teacher = makeUser('teacher');
+		const teacher = await makeUser('teacher');
 		const started = await startClassSession(teacher, { experiment: 'span', step: 0 });
 		expect(started.code).toMatch(/^[A-HJ-NP-Z2-9]{6}$/);
 		const minutes = (started.expiresAt.getTime() - Date.now()) / 60_000;
@@ -113,7 +113,7 @@ describe('a class session from start to end', () => {
 	});
 
 	it('deletes a session, its seats and answers once its time has passed', async () => {
-		const teacher = makeUser('teacher');
+		const teacher = await makeUser('teacher');
 		const s = await startClassSession(teacher, { experiment: 'thickness', step: 0 });
 		const { seat } = await joinClass(s.code, 'Dee');
 		await answerClass(s.code, { seat, choice: 'd8' });
@@ -127,8 +127,8 @@ describe('a class session from start to end', () => {
 	});
 
 	it('belongs to the teacher who started it: another sees no such session', async () => {
-		const teacher = makeUser('teacher');
-		const other = makeUser('other');
+		const teacher = await makeUser('teacher');
+		const other = await makeUser('other');
 		const s = await startClassSession(teacher, { experiment: 'span', step: 0 });
 		expect(await status(getClassSession(other, s.id))).toBe(404);
 		expect(await status(updateClassSession(other, s.id, { revealed: true }))).toBe(404);
@@ -139,7 +139,7 @@ describe('a class session from start to end', () => {
 	});
 
 	it('refuses an unknown experiment or step, and more open sessions than the limit', async () => {
-		const teacher = makeUser('teacher');
+		const teacher = await makeUser('teacher');
 		expect(await status(startClassSession(teacher, { experiment: 'gravity', step: 0 }))).toBe(422);
 		expect(await status(startClassSession(teacher, { experiment: 'span', step: 4 }))).toBe(422);
 		for (let i = 0; i < OPEN_SESSIONS_PER_HOST; i++)
@@ -148,7 +148,7 @@ describe('a class session from start to end', () => {
 	});
 
 	it('takes a seat of this session only: another session’s token is refused', async () => {
-		const teacher = makeUser('teacher');
+		const teacher = await makeUser('teacher');
 		const a = await startClassSession(teacher, { experiment: 'span', step: 0 });
 		const b = await startClassSession(teacher, { experiment: 'span', step: 0 });
 		const { seat } = await joinClass(a.code, 'Eli');
@@ -167,7 +167,7 @@ describe('what the class sends', () => {
 	});
 
 	it('takes only the choice with an answer: a step sent along is ignored', async () => {
-		const teacher = makeUser('teacher');
+		const teacher = await makeUser('teacher');
 		const s = await startClassSession(teacher, { experiment: 'span', step: 0 });
 		const { seat } = await joinClass(s.code, 'Fay');
 		const res = await answerApi.PUT(
@@ -185,7 +185,7 @@ describe('what the class sends', () => {
 
 describe('rate limits of the class routes', () => {
 	it('refuses joins past the budget of one address, and not another address', async () => {
-		const teacher = makeUser('teacher');
+		const teacher = await makeUser('teacher');
 		const s = await startClassSession(teacher, { experiment: 'span', step: 0 });
 		const join = (i: number, address: string) =>
 			seatsApi.POST(
@@ -206,7 +206,7 @@ describe('rate limits of the class routes', () => {
 	});
 
 	it('refuses every lookup from an address that has guessed too many codes', async () => {
-		const teacher = makeUser('teacher');
+		const teacher = await makeUser('teacher');
 		const s = await startClassSession(teacher, { experiment: 'span', step: 0 });
 		const look = (code: string) =>
 			classApi.GET(event({ actor: null, params: { code }, address: '203.0.113.99' }));
