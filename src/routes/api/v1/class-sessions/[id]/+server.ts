@@ -1,11 +1,7 @@
 import type { RequestHandler } from './$types';
 import { json } from '@sveltejs/kit';
 import { requireActor } from '$lib/server/access';
-import {
-	endClassSession,
-	getClassSession,
-	updateClassSession
-} from '$lib/server/class-sessions';
+import { endClassSession, getClassSession, updateClassSession } from '$lib/server/class-sessions';
 import { api, readJson } from '$lib/server/http';
 import { updateClassSchema } from '$lib/schemas/class-session';
 
