@@ -19,6 +19,7 @@ describe('every PATCH body schema', () => {
 	it('is there for each PATCH operation', () => {
 		expect(patches.map((op) => op.path).sort()).toEqual([
 			'/analyses/{id}',
+			'/class-sessions/{id}',
 			'/documents/{id}',
 			'/projects/{id}',
 			'/workshops/{id}'
