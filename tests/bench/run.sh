@@ -3,7 +3,8 @@
 # shelf check route loads, the browser bench (span input to screen in Chromium), and the compute API
 # against a bare node:http server (tests/bench/api/api.ts).
 # The engine rows of issue 12 (solvers, analysis, case check beside their goals and plain
-# closed-form loops) come from tests/bench/engine-rows.ts.
+# closed-form loops) come from tests/bench/engine-rows.ts; its list rows (a project's analyses at 200 and
+# 10,000) from tests/bench/list-rows.ts.
 # It starts with the count of published figures still marked "from memory" or "unverified"
 # (tests/bench/unverified.ts). Benchmarks report; they never fail on a slow number.
 # One run at a time on a machine, shared with the e2e runner: the build folder is shared.
@@ -15,6 +16,7 @@ exec 9>/tmp/spanwright-e2e.lock
 flock 9
 npx vitest bench --run
 bash tests/bench/engine-rows.sh
+npx tsx tests/bench/list-rows.ts
 npx vite build --logLevel warn
 if [ -f tests/bench/route-size.ts ]; then
 	npx tsx tests/bench/route-size.ts

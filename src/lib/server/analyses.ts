@@ -5,12 +5,12 @@
  */
 import type { LengthUnit } from '$lib/schemas/preferences';
 import { error } from '@sveltejs/kit';
-import { and, asc, count, desc, eq, gt, isNull, sql, type SQL } from 'drizzle-orm';
+import { and, asc, count, desc, eq, gt, inArray, isNull, sql, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
 import { canChangeAnalysis, type Actor } from './access';
 import { computeAnalysis, describeAnalysis, describeInput } from '$lib/kinds/registry';
 import { getDb, firstRow, oneRow, transaction } from './db';
-import { containsText } from './db/contains';
+import { analysisTextMatches } from './db/search';
 import { analyses, analysisRevisions, projects, users, type AnalysisKind } from './db/schema';
 import type { ProblemIssue } from './http';
 import { lengthUnitOf } from './preferences';
@@ -69,31 +69,53 @@ function present<
 	return { ...row, summary: summary || row.summary };
 }
 
-/** A page of a project's analyses, searched by name and summary, filtered by kind and verdict. */
-export async function listAnalyses(actor: Actor, projectId: string, query: AnalysisListQuery) {
-	await getProject(actor, projectId);
-	const db = getDb();
+/** The query of one page's ids, and its filter (for the count); not run here. */
+export function analysisPage(projectId: string, query: AnalysisListQuery) {
 	const where: SQL[] = [eq(analyses.projectId, projectId), isNull(analyses.deletedAt)];
-	if (query.q) where.push(containsText([analyses.name, analyses.summary], query.q));
+	if (query.q) where.push(analysisTextMatches(query.q));
 	if (query.kind) where.push(eq(analyses.kind, query.kind));
 	if (query.pass) where.push(eq(analyses.pass, query.pass === 'pass'));
 	const filter = and(...where);
 	const column = sortColumn[query.sort];
-	const order = query.dir === 'asc' ? asc(column) : desc(column);
-	const rows = await db
-		.select(listColumns)
+	const page = getDb()
+		.select({ id: analyses.id })
 		.from(analyses)
-		.leftJoin(creator, eq(creator.id, analyses.createdBy))
-		.leftJoin(updater, eq(updater.id, analyses.updatedBy))
 		.where(filter)
-		.orderBy(order, desc(analyses.updatedAt), asc(analyses.id))
+		.orderBy(
+			query.dir === 'asc' ? asc(column) : desc(column),
+			desc(analyses.updatedAt),
+			asc(analyses.id)
+		)
 		.limit(query.perPage)
 		.offset((query.page - 1) * query.perPage);
+	return { filter, page };
+}
+
+/**
+ * A page of a project's analyses, searched by name and summary, filtered by kind and verdict. The
+ * page's ids are found first, from an index that holds every sort key and filter (schema.ts,
+ * analysis_list_*), so paging never reads the rows with their large input and result; only the page's
+ * own rows are read in full, for their summary in the reader's unit.
+ */
+export async function listAnalyses(actor: Actor, projectId: string, query: AnalysisListQuery) {
+	await getProject(actor, projectId);
+	const db = getDb();
+	const { filter, page } = analysisPage(projectId, query);
+	const ids = await page.then((rows) => rows.map((r) => r.id));
+	const rows = ids.length
+		? await db
+				.select(listColumns)
+				.from(analyses)
+				.leftJoin(creator, eq(creator.id, analyses.createdBy))
+				.leftJoin(updater, eq(updater.id, analyses.updatedBy))
+				.where(inArray(analyses.id, ids))
+		: [];
+	const byId = new Map(rows.map((r) => [r.id, r]));
 	const total =
 		(await db.select({ n: count() }).from(analyses).where(filter).then(firstRow))?.n ?? 0;
 	const unit = await lengthUnitOf(actor);
-	const items = rows.map((r) => {
-		const { input: _input, result: _result, ...rest } = present(r, unit);
+	const items = ids.map((id) => {
+		const { input: _input, result: _result, ...rest } = present(byId.get(id)!, unit);
 		void _input;
 		void _result;
 		return rest;

@@ -6,6 +6,7 @@ import {
 	text,
 	uniqueIndex
 } from 'drizzle-orm/sqlite-core';
+import { sql } from 'drizzle-orm';
 import { ANALYSIS_KINDS, type AnalysisKind } from '../../kinds/names';
 
 // the kinds of saved analysis are named once, in src/lib/kinds/names.ts
@@ -223,7 +224,33 @@ export const analyses = sqliteTable(
 			.notNull()
 			.$defaultFn(() => new Date())
 	},
-	(t) => [index('analysis_project').on(t.projectId)]
+	(t) => {
+		// The list of a project's analyses (src/lib/server/analyses.ts) pages through one of these: each
+		// holds the sort key and everything the page query filters and orders by, so finding a page reads
+		// the index alone, never the rows with their large input and result.
+		const live = sql`${t.deletedAt} is null`;
+		// (deleted_at is null in all of them, but the page query names it, and SQLite reads an index
+		// alone only when it holds every column the query names)
+		const rest = [t.updatedAt, t.id, t.kind, t.pass, t.deletedAt] as const;
+		return [
+			index('analysis_project').on(t.projectId),
+			index('analysis_list_updated')
+				.on(t.projectId, ...rest)
+				.where(live),
+			index('analysis_list_created')
+				.on(t.projectId, t.createdAt, ...rest)
+				.where(live),
+			index('analysis_list_name')
+				.on(t.projectId, sql`lower(${t.name})`, ...rest)
+				.where(live),
+			index('analysis_list_kind')
+				.on(t.projectId, t.kind, t.updatedAt, t.id, t.pass, t.deletedAt)
+				.where(live),
+			index('analysis_list_pass')
+				.on(t.projectId, t.pass, t.updatedAt, t.id, t.kind, t.deletedAt)
+				.where(live)
+		];
+	}
 );
 
 export const analysisRevisions = sqliteTable(
