@@ -1,5 +1,5 @@
-// Demo accounts of the seeded scenario (invented: a fictional two-person casework shop and its
-// client). Shown on the sign-in page in dev only.
+// Demo accounts of the seeded scenario (invented: a fictional casework shop, its two builders and
+// apprentice, and its client). Shown on the sign-in page in dev only.
 export const DEMO_PASSWORD = 'sawdust-and-glue';
 
 export const DEMO_ACCOUNTS = [
@@ -16,6 +16,13 @@ export const DEMO_ACCOUNTS = [
 		password: DEMO_PASSWORD,
 		role: 'editor' as const,
 		note: 'Shop lead; checks spans and joints'
+	},
+	{
+		email: 'noor@quillfeather.test',
+		name: 'Noor Haddad',
+		password: DEMO_PASSWORD,
+		role: 'viewer' as const,
+		note: "Apprentice; reads the shop's projects and changes nothing"
 	},
 	{
 		email: 'dana@whitlock-home.test',

@@ -70,7 +70,7 @@ interface DemoUser {
 	id: string;
 	email: string;
 	name: string;
-	role: 'owner' | 'editor' | 'client';
+	role: 'owner' | 'editor' | 'viewer' | 'client';
 }
 
 /** Save the demo analyses in the seeded projects (by name); returns the ids of what was saved. */

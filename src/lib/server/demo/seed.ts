@@ -5,7 +5,7 @@ import { memberships, projectAccess, projects, users, workshops } from '../db/sc
 import { DEMO_ACCOUNTS } from './accounts';
 import { seedDemoAnalyses } from './analyses';
 
-// The demo scenario (invented): Quillfeather Casework, a two-person built-in shop, and Dana
+// The demo scenario (invented): Quillfeather Casework, a two-person built-in shop with an apprentice, and Dana
 // Whitlock, a client invited to her library wall alone: she never sees the shop's other clients.
 export const DEMO_WORKSHOP = 'Quillfeather Casework';
 
