@@ -202,12 +202,16 @@ export function toInput(draft: WallDraft, unit: UserLengthUnit): WallDesignInput
 	return input;
 }
 
-/** The demo wall (two tall bookcases, two low units with two drawers each) in the user's unit. */
+/**
+ * The demo wall (two tall bookcases, two low units with two drawers each) in the user's unit. Its
+ * shelves carry the shelf screen's default load: 40 lbf/ft², or 2 kPa to a metric user (the same
+ * figure rounded up, as the load presets write it; src/lib/workbench/load-presets.ts).
+ */
 export function defaultWall(unit: UserLengthUnit): WallDraft {
 	const draft = fromDesign(structuredClone(DEMO_WALL), unit);
 	for (const c of draft.cases)
 		for (const s of c.shelves ?? [])
-			s.loads = [{ kind: 'area', pressure: unit === 'mm' ? '1.915 kPa' : '40 lbf/ft^2' }];
+			s.loads = [{ kind: 'area', pressure: unit === 'mm' ? '2 kPa' : '40 lbf/ft^2' }];
 	return draft;
 }
 

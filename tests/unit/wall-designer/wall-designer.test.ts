@@ -21,6 +21,16 @@ describe('the wall screen’s form', () => {
 		expect(exactText(0.762, 'mm')).toBe('762 mm');
 		expect(defaultWall('frac16').cases[0].sides.thickness).toBe('23/32"');
 	});
+	it('loads the shelves as the shelf screen does: 40 lbf/ft², or 2 kPa (rounded up) to a metric user', () => {
+		// 40 lbf/ft² is 1.9152 kPa (1 lbf/ft² = 47.880 Pa, from the exact pound-force and inch in
+		// src/lib/engine/units/si.ts); 2 kPa is never lighter
+		expect(defaultWall('frac16').cases[0].shelves?.[0].loads).toEqual([
+			{ kind: 'area', pressure: '40 lbf/ft^2' }
+		]);
+		expect(defaultWall('mm').cases[0].shelves?.[0].loads).toEqual([
+			{ kind: 'area', pressure: '2 kPa' }
+		]);
+	});
 	it('reads a bare number in the user’s unit', () => {
 		const d = defaultWall('frac16');
 		d.cases[0].width = '30';
