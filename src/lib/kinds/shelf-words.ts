@@ -11,7 +11,11 @@ export { percent };
 
 /** "about 3/32"", or "less than 1/16"" when it rounds to nothing in the user's unit. */
 export function aboutLength(metres: number, unit: ReaderUnit, written?: string): string {
-	const text = written ?? formatLength(metres, { unit });
+	return aboutWritten(metres, written ?? formatLength(metres, { unit }));
+}
+
+/** The same for a length already written (`< 1/16"` becomes "less than 1/16""). */
+export function aboutWritten(metres: number, text: string): string {
 	if (text.startsWith('< ')) return `less than ${text.slice(2)}`;
 	if (metres === 0) return 'not at all';
 	return `about ${text}`;

@@ -2,6 +2,7 @@
  * The lab's shelf in one sentence: what is drawn and how far it sags, for the readout under the
  * drawing and for screen readers.
  */
+import { aboutWritten } from '../kinds/shelf-words';
 import { SUPPORTS, shortName, whenText, type LabRun, type LabState } from './lab-state';
 
 export function describeLab(
@@ -18,7 +19,7 @@ export function describeLab(
 	const nosing = s.nosingM > 0 ? `, with a ${format(s.nosingM)} nosing` : '';
 	return (
 		`A ${format(s.spanM)} ${shortName(s.material)} shelf, ${format(s.thicknessM)} thick and ` +
-		`${format(s.depthM)} deep${nosing}, ${held}, carrying ${load}, sags about ${format(run.sagM)} ` +
+		`${format(s.depthM)} deep${nosing}, ${held}, carrying ${load}, sags ${aboutWritten(run.sagM, format(run.sagM))} ` +
 		`${whenText(s.days)}${s.days > 0 ? ` (${format(run.result.sag.instant)} when loaded)` : ''}. An estimate.`
 	);
 }

@@ -12,7 +12,7 @@ import type { ReaderUnit as LengthUnit } from '$lib/kinds/words';
 import type { AnalysisKind } from './db/schema';
 import { describeAnalysis, describeInput } from '$lib/kinds/registry';
 import type { ComparisonResult } from '$lib/kinds/comparison';
-import { describeShelf } from '$lib/kinds/shelf-words';
+import { aboutLength, describeShelf } from '$lib/kinds/shelf-words';
 
 const pct = (share: number) => `${Math.round(Math.abs(share) * 100)}%`;
 
@@ -103,9 +103,9 @@ function shelfWords(input: ShelfInput, r: ShelfResult, unit: LengthUnit): Record
 function comparisonWords(input: unknown, r: ComparisonResult, unit: LengthUnit): RecordWords {
 	const rows = r.candidates.map((c): [string, string] => [
 		c.label,
-		`${c.pass ? 'meets' : 'does not meet'} ${c.limit.name}: sags about ${formatLength(
+		`${c.pass ? 'meets' : 'does not meet'} ${c.limit.name}: sags ${aboutLength(
 			c.sag.checked === 'longTerm' ? c.sag.longTerm : c.sag.instant,
-			{ unit }
+			unit
 		)}${c.sag.checked === 'longTerm' ? ' in the long run' : ''}`
 	]);
 	const warnings = [...new Set(r.candidates.flatMap((c) => c.warnings.map((w) => w.message)))];
@@ -181,7 +181,7 @@ function caseWords(input: unknown, r: CaseResult, unit: LengthUnit): RecordWords
 			s.name,
 			`${formatLength(s.spanM, { unit })} span, ${formatLength(s.thicknessM, { unit })} thick: ${
 				s.pass ? 'passes' : 'does not pass'
-			}; sags about ${formatLength(s.analysis.sag[s.analysis.sag.checked], { unit })}`
+			}; sags ${aboutLength(s.analysis.sag[s.analysis.sag.checked], unit)}`
 		]),
 		steps,
 		cautions: [...new Set([...r.warnings, ...r.cautions])],

@@ -11,6 +11,8 @@ import {
 import { lawsFor, ratioWords } from '../../../src/lib/lab/laws';
 import { EXPERIMENTS, answerTo, stateAt } from '../../../src/lib/lab/experiments';
 import { currentX, sweep, sweepKey } from '../../../src/lib/lab/sweep';
+import { describeLab } from '../../../src/lib/lab/words';
+import { formatLength } from '../../../src/lib/engine/units/length';
 
 // 1 in = 0.0254 m exactly (international yard and pound agreement, 1959)
 const IN = 0.0254;
@@ -152,5 +154,22 @@ describe('the chart', () => {
 			'divider',
 			'wall'
 		]);
+	});
+});
+
+describe("the lab's sentence", () => {
+	it('says "less than 1/16"" for a sag that rounds to nothing, and "about" otherwise', () => {
+		const format = (m: number) => formatLength(m, { unit: 'frac16' });
+		// a short, thick, lightly loaded shelf: its sag is far below 1/32"
+		const stiff = { ...START, spanM: 8 * IN, thicknessM: 1.5 * IN, days: 0 };
+		const small = runLab(stiff);
+		expect(small.sagM).toBeLessThan(IN / 32);
+		const sentence = describeLab(stiff, small, format, '20 lbf/ft');
+		expect(sentence).toContain('sags less than 1/16"');
+		expect(sentence).not.toContain('about <');
+		const usual = runLab(START);
+		expect(describeLab(START, usual, format, '20 lbf/ft')).toContain(
+			`sags about ${format(usual.sagM)}`
+		);
 	});
 });
