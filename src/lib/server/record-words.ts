@@ -8,7 +8,7 @@ import type { CaseResult } from '$lib/engine/case/types';
 import type { WallResult } from '$lib/engine/wall/types';
 import type { JointPlan } from '$lib/engine/joinery';
 import type { StabilityResult } from '$lib/engine/stability';
-import type { ReaderUnit as LengthUnit } from '$lib/kinds/words';
+import { count, type ReaderUnit as LengthUnit } from '$lib/kinds/words';
 import type { AnalysisKind } from './db/schema';
 import { describeAnalysis, describeInput } from '$lib/kinds/registry';
 import type { ComparisonResult } from '$lib/kinds/comparison';
@@ -159,12 +159,12 @@ function caseVerdict(r: CaseResult) {
 	const failing = r.margins.filter((m) => !m.pass);
 	const worst = r.margins[0];
 	if (r.pass)
-		return `Every shelf, joint and the tipping check of this case pass (${r.margins.length} checks).${
+		return `Every shelf, joint and the tipping check of this case pass (${count(r.margins.length, 'check')}).${
 			worst?.margin != null
 				? ` The closest is ${worst.what}, with ${pct(worst.margin)} to spare.`
 				: ''
 		}`;
-	return `${failing.length} of ${r.margins.length} checks of this case do not pass; the worst is ${worst.what}. Change the design before it is built.`;
+	return `${failing.length} of ${count(r.margins.length, 'check')} of this case ${failing.length === 1 ? 'does' : 'do'} not pass; the worst is ${worst.what}. Change the design before it is built.`;
 }
 
 function caseWords(input: unknown, r: CaseResult, unit: LengthUnit): RecordWords {
@@ -194,8 +194,8 @@ function wallWords(input: unknown, r: WallResult, unit: LengthUnit): RecordWords
 	const worst = r.margins[0];
 	const failing = r.margins.filter((m) => !m.pass).length;
 	const verdict = r.pass
-		? `Every case of this wall passes its shelf, joint and tipping checks (${r.margins.length} checks).`
-		: `${failing} of ${r.margins.length} checks of this wall do not pass; the worst is ${r.cases[worst.caseIndex]?.name ?? 'a case'}: ${worst.what}. Change the design before it is built.`;
+		? `Every case of this wall passes its shelf, joint and tipping checks (${count(r.margins.length, 'check')}).`
+		: `${failing} of ${count(r.margins.length, 'check')} of this wall ${failing === 1 ? 'does' : 'do'} not pass; the worst is ${r.cases[worst.caseIndex]?.name ?? 'a case'}: ${worst.what}. Change the design before it is built.`;
 	const anchoring = [...new Set(r.cases.flatMap((c) => c.stability.anchoring.recommendations))];
 	const fixes = r.pass ? [] : r.suggestions.slice(0, 3).map((s) => `${s.title}: ${s.detail}`);
 	return {
