@@ -1,5 +1,4 @@
 import { z } from 'zod';
-import { patchOf } from './patch';
 
 export const projectSchema = z.object({
 	name: z
@@ -13,7 +12,12 @@ export const projectSchema = z.object({
 export type ProjectInput = z.infer<typeof projectSchema>;
 
 // only the fields sent are changed: a PATCH with a name alone keeps the client and the site notes
-export const projectPatchSchema = patchOf(projectSchema);
+// (every field optional and without its default: zod 4's `.partial()` still applies a default)
+export const projectPatchSchema = z.object({
+	name: projectSchema.shape.name.optional(),
+	client: projectSchema.shape.client.unwrap().optional(),
+	siteNotes: projectSchema.shape.siteNotes.unwrap().optional()
+});
 
 export const PROJECT_SORTS = ['updated', 'name', 'client', 'created'] as const;
 

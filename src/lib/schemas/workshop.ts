@@ -18,6 +18,11 @@ export const workshopPatchSchema = z
 		message: 'Send a new name, or whether the workshop is a class.'
 	});
 
+/** The workshop switcher in the app's header: which of the person's workshops to work in. */
+export const workshopSwitchSchema = z.object({
+	workshopId: z.string().trim().min(1, 'Choose a workshop.')
+});
+
 /** The class switch on the workshop page (a checkbox: absent means off). */
 export const classModeSchema = z.object({ isClass: z.boolean().default(false) });
 

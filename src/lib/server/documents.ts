@@ -2,7 +2,7 @@ import { error } from '@sveltejs/kit';
 import { and, desc, eq, isNotNull, isNull, lt, sum, type SQL } from 'drizzle-orm';
 import { fileTypeFromBuffer } from 'file-type';
 import sharp from 'sharp';
-import { requireRole, type Actor } from './access';
+import { requireProjectRole, type Actor } from './access';
 import { getDb, firstRow, oneRow } from './db';
 import { analyses, documents, users, type DocumentType } from './db/schema';
 import { getProject } from './projects';
@@ -206,7 +206,7 @@ export async function addDocument(
 	fields: DocumentFields
 ) {
 	const { project } = await getProject(actor, projectId);
-	await requireRole(actor, project.workshopId, 'editor');
+	await requireProjectRole(actor, project, 'editor');
 	const limits = documentLimits();
 	if (file.bytes.length > limits.fileBytes)
 		refuse(
@@ -260,7 +260,7 @@ export async function addDocument(
 /** Change a document's caption, its analysis or whether the client's record shows it (editors). */
 export async function updateDocument(actor: Actor, id: string, patch: DocumentPatch) {
 	const { project } = await getDocument(actor, id);
-	await requireRole(actor, project.workshopId, 'editor');
+	await requireProjectRole(actor, project, 'editor');
 	if (patch.analysisId !== undefined) await checkAnalysis(project.id, patch.analysisId);
 	if (Object.keys(patch).length)
 		await getDb().update(documents).set(patch).where(eq(documents.id, id));
@@ -270,7 +270,7 @@ export async function updateDocument(actor: Actor, id: string, patch: DocumentPa
 /** Hide a document at once (editors); it can be brought back within DOCUMENT_UNDO_MS. */
 export async function deleteDocument(actor: Actor, id: string, now = new Date()) {
 	const { project, document } = await getDocument(actor, id);
-	await requireRole(actor, project.workshopId, 'editor');
+	await requireProjectRole(actor, project, 'editor');
 	await getDb().update(documents).set({ deletedAt: now }).where(eq(documents.id, id));
 	await purgeDeletedDocuments(now);
 	return { document, undoUntil: new Date(+now + DOCUMENT_UNDO_MS) };
@@ -279,7 +279,7 @@ export async function deleteDocument(actor: Actor, id: string, now = new Date())
 export async function undoDeleteDocument(actor: Actor, id: string, now = new Date()) {
 	const row = await documentRow(id);
 	const { project } = await getProject(actor, row.projectId);
-	await requireRole(actor, project.workshopId, 'editor');
+	await requireProjectRole(actor, project, 'editor');
 	if (row.deletedAt && +now - +row.deletedAt > DOCUMENT_UNDO_MS)
 		refuse(409, 'This document was deleted too long ago to undo.');
 	await getDb().update(documents).set({ deletedAt: null }).where(eq(documents.id, id));

@@ -1,7 +1,9 @@
 // Every API route that touches stored data × who is asking → the expected status (the
 // authorization test asserts the statuses; the API document test validates every answer).
-// anonymous: no actor; viewer/editor/owner: members of the workshop; outsider: a member of another.
-import { event, makeWorkshopWithCast } from './actors';
+// anonymous: no actor; viewer/student/editor/owner: members of the workshop (a class); outsider: a
+// member of another; client: invited to this project alone; otherClient: invited to another project
+// of the same workshop; shareHolder: no account, holding a share link to this project's record.
+import { event, grantProject, makeWorkshopWithCast } from './actors';
 import * as workshopsApi from '../../../src/routes/api/v1/workshops/+server';
 import * as workshopApi from '../../../src/routes/api/v1/workshops/[id]/+server';
 import * as projectsApi from '../../../src/routes/api/v1/projects/+server';
@@ -64,36 +66,90 @@ async function upload(actor: Actor | null, projectId: string) {
 	} as any);
 }
 
-export type Who = 'anonymous' | 'viewer' | 'student' | 'editor' | 'owner' | 'outsider';
+export type Who =
+	| 'anonymous'
+	| 'client'
+	| 'otherClient'
+	| 'viewer'
+	| 'student'
+	| 'editor'
+	| 'owner'
+	| 'outsider'
+	| 'shareHolder';
+export const WHOS: Who[] = [
+	'anonymous',
+	'client',
+	'otherClient',
+	'viewer',
+	'student',
+	'editor',
+	'owner',
+	'outsider',
+	'shareHolder'
+];
 type Cast = Awaited<ReturnType<typeof makeWorkshopWithCast>>;
 export interface Row {
 	route: string;
 	call: (actor: Actor | null, cast: Cast, projectId: string) => Promise<Response> | Response;
-	/** a student (of a class) is expected to fare as a viewer unless the row says otherwise */
-	expect: Record<Exclude<Who, 'student'>, number> & { student?: number };
+	/**
+	 * a student (of a class) is expected to fare as a viewer, a client of another project as an
+	 * outsider (they learn nothing of this one) and a share link's holder as anonymous (the API
+	 * takes no share link), unless the row says otherwise
+	 */
+	expect: Record<Exclude<Who, 'student' | 'otherClient' | 'shareHolder'>, number> &
+		Partial<Record<'student' | 'otherClient' | 'shareHolder', number>>;
 }
 
 /** The status a row expects for one of the cast. */
 export function expected(row: Row, who: Who): number {
-	return who === 'student' ? (row.expect.student ?? row.expect.viewer) : row.expect[who];
+	const e = row.expect;
+	if (who === 'student') return e.student ?? e.viewer;
+	if (who === 'otherClient') return e.otherClient ?? e.outsider;
+	if (who === 'shareHolder') return e.shareHolder ?? e.anonymous;
+	return e[who];
 }
+
+/**
+ * A fresh workshop (a class) with its cast, and a project of it to which the client is invited;
+ * the other client is invited to a second project of the same workshop.
+ */
+export async function castWithProject() {
+	const cast = await makeWorkshopWithCast();
+	const project = await createProject(cast.owner, cast.workshopId, {
+		name: 'Bookcase',
+		client: 'Ines',
+		siteNotes: 'Stair hall'
+	});
+	await grantProject(cast.client, project.id);
+	const pantry = await createProject(cast.owner, cast.workshopId, {
+		name: 'Pantry',
+		client: 'Another client',
+		siteNotes: ''
+	});
+	await grantProject(cast.otherClient, pantry.id);
+	return { cast, project };
+}
+
+/** The actor one of the cast signs in as: none for anonymous and for a share link's holder. */
+export const actorOf = (cast: Cast, who: Who): Actor | null =>
+	who === 'anonymous' || who === 'shareHolder' ? null : cast[who];
 
 export const table: Row[] = [
 	{
 		route: 'GET /workshops',
 		call: (a) => workshopsApi.GET(event({ actor: a })),
-		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 200 }
+		expect: { anonymous: 401, client: 200, viewer: 200, editor: 200, owner: 200, outsider: 200 }
 	},
 	{
 		route: 'POST /workshops',
 		call: (a) =>
 			workshopsApi.POST(event({ actor: a, method: 'POST', body: { name: 'Night class' } })),
-		expect: { anonymous: 401, viewer: 201, editor: 201, owner: 201, outsider: 201 }
+		expect: { anonymous: 401, client: 201, viewer: 201, editor: 201, owner: 201, outsider: 201 }
 	},
 	{
 		route: 'GET /workshops/{id}',
 		call: (a, c) => workshopApi.GET(event({ actor: a, params: { id: c.workshopId } })),
-		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 404 }
+		expect: { anonymous: 401, client: 404, viewer: 200, editor: 200, owner: 200, outsider: 404 }
 	},
 	{
 		route: 'PATCH /workshops/{id}',
@@ -106,18 +162,18 @@ export const table: Row[] = [
 					body: { name: 'Renamed shop' }
 				})
 			),
-		expect: { anonymous: 401, viewer: 403, editor: 403, owner: 200, outsider: 404 }
+		expect: { anonymous: 401, client: 404, viewer: 403, editor: 403, owner: 200, outsider: 404 }
 	},
 	{
 		route: 'DELETE /workshops/{id}',
 		call: (a, c) =>
 			workshopApi.DELETE(event({ actor: a, method: 'DELETE', params: { id: c.workshopId } })),
-		expect: { anonymous: 401, viewer: 403, editor: 403, owner: 204, outsider: 404 }
+		expect: { anonymous: 401, client: 404, viewer: 403, editor: 403, owner: 204, outsider: 404 }
 	},
 	{
 		route: 'GET /projects',
 		call: (a, c) => projectsApi.GET(event({ actor: a, url: `/?workshop=${c.workshopId}` })),
-		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 404 }
+		expect: { anonymous: 401, client: 404, viewer: 200, editor: 200, owner: 200, outsider: 404 }
 	},
 	{
 		route: 'POST /projects',
@@ -125,12 +181,12 @@ export const table: Row[] = [
 			projectsApi.POST(
 				event({ actor: a, method: 'POST', body: { workshopId: c.workshopId, name: 'Wall unit' } })
 			),
-		expect: { anonymous: 401, viewer: 403, editor: 201, owner: 201, outsider: 404 }
+		expect: { anonymous: 401, client: 404, viewer: 403, editor: 201, owner: 201, outsider: 404 }
 	},
 	{
 		route: 'GET /projects/{id}',
 		call: (a, _c, id) => projectApi.GET(event({ actor: a, params: { id } })),
-		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 404 }
+		expect: { anonymous: 401, client: 200, viewer: 200, editor: 200, owner: 200, outsider: 404 }
 	},
 	{
 		route: 'PATCH /projects/{id}',
@@ -138,18 +194,20 @@ export const table: Row[] = [
 			projectApi.PATCH(
 				event({ actor: a, method: 'PATCH', params: { id }, body: { client: 'New client' } })
 			),
-		expect: { anonymous: 401, viewer: 403, editor: 200, owner: 200, outsider: 404 }
+		expect: { anonymous: 401, client: 403, viewer: 403, editor: 200, owner: 200, outsider: 404 }
 	},
 	{
 		route: 'DELETE /projects/{id}',
 		call: (a, _c, id) => projectApi.DELETE(event({ actor: a, method: 'DELETE', params: { id } })),
-		expect: { anonymous: 401, viewer: 403, editor: 204, owner: 204, outsider: 404 }
+		expect: { anonymous: 401, client: 403, viewer: 403, editor: 204, owner: 204, outsider: 404 }
 	}
 ];
 
 // ---- saved analyses: each case saves one (as the owner) in the case's project ----
-const read = { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 404 };
-const write = { anonymous: 401, viewer: 403, editor: 200, owner: 200, outsider: 404 };
+// a client reads their own project's analyses and changes nothing; a client of another project
+// learns nothing (404); the API takes no share link, so its holder is anonymous there
+const read = { anonymous: 401, client: 200, viewer: 200, editor: 200, owner: 200, outsider: 404 };
+const write = { ...read, client: 403, viewer: 403 };
 const analysisOf = async (c: Cast, projectId: string) => (await saveShelf(c.owner, projectId)).id;
 
 table.push(
@@ -276,7 +334,7 @@ table.push(
 // ---- a student of a class: the analyses they saved themselves, and only those ----
 const studentsOwn = async (c: Cast, projectId: string) =>
 	(await saveShelf(c.student, projectId)).id;
-const own = { anonymous: 401, viewer: 403, student: 200, editor: 200, owner: 200, outsider: 404 };
+const own = { ...write, student: 200 };
 table.push(
 	{
 		route: "PATCH /analyses/{id} (a student's own)",
@@ -347,18 +405,18 @@ table.push(
 	{
 		route: 'GET /me',
 		call: (a) => meApi.GET(event({ actor: a })),
-		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 200 }
+		expect: { anonymous: 401, client: 200, viewer: 200, editor: 200, owner: 200, outsider: 200 }
 	},
 	{
 		route: 'GET /tokens',
 		call: (a) => tokensApi.GET(event({ actor: a })),
-		expect: { anonymous: 401, viewer: 200, editor: 200, owner: 200, outsider: 200 }
+		expect: { anonymous: 401, client: 200, viewer: 200, editor: 200, owner: 200, outsider: 200 }
 	},
 	{
 		route: 'POST /tokens',
 		call: (a) =>
 			tokensApi.POST(event({ actor: a, method: 'POST', body: { name: 'Cut-list script' } })),
-		expect: { anonymous: 401, viewer: 201, editor: 201, owner: 201, outsider: 201 }
+		expect: { anonymous: 401, client: 201, viewer: 201, editor: 201, owner: 201, outsider: 201 }
 	},
 	{
 		route: "DELETE /tokens/{id} (the owner's token)",
@@ -366,7 +424,7 @@ table.push(
 			const { id } = await createApiToken(c.owner, { name: 'Shop laptop' });
 			return tokenApi.DELETE(event({ actor: a, method: 'DELETE', params: { id } }));
 		},
-		expect: { anonymous: 401, viewer: 404, editor: 404, owner: 204, outsider: 404 }
+		expect: { anonymous: 401, client: 404, viewer: 404, editor: 404, owner: 204, outsider: 404 }
 	},
 	{
 		route: 'GET /projects/{id}/documents',
@@ -376,7 +434,7 @@ table.push(
 	{
 		route: 'POST /projects/{id}/documents',
 		call: async (a, _c, p) => await upload(a, p),
-		expect: { anonymous: 401, viewer: 403, editor: 201, owner: 201, outsider: 404 }
+		expect: { ...write, editor: 201, owner: 201 }
 	},
 	{
 		route: 'GET /documents/{id}',
@@ -419,8 +477,15 @@ table.push(
 // ---- class sessions: the teacher's own (a session belongs to the person who started it) and the
 // class's side, open to anyone with the join code ----
 const sessionOf = (c: Cast) => startClassSession(c.owner, { experiment: 'span', step: 0 });
-const hostOnly = { anonymous: 401, viewer: 404, editor: 404, owner: 200, outsider: 404 };
-const anyone = { anonymous: 200, viewer: 200, editor: 200, owner: 200, outsider: 200 };
+const hostOnly = {
+	anonymous: 401,
+	client: 404,
+	viewer: 404,
+	editor: 404,
+	owner: 200,
+	outsider: 404
+};
+const anyone = { anonymous: 200, client: 200, viewer: 200, editor: 200, owner: 200, outsider: 200 };
 table.push(
 	{
 		route: 'GET /class-sessions',
@@ -433,7 +498,7 @@ table.push(
 			classSessionsApi.POST(
 				event({ actor: a, method: 'POST', body: { experiment: 'thickness', step: 0 } })
 			),
-		expect: { anonymous: 401, viewer: 201, editor: 201, owner: 201, outsider: 201 }
+		expect: { anonymous: 401, client: 201, viewer: 201, editor: 201, owner: 201, outsider: 201 }
 	},
 	{
 		route: "GET /class-sessions/{id} (the owner's session)",
@@ -479,7 +544,7 @@ table.push(
 					body: { nickname: 'Robin' }
 				})
 			),
-		expect: { anonymous: 201, viewer: 201, editor: 201, owner: 201, outsider: 201 }
+		expect: { anonymous: 201, client: 201, viewer: 201, editor: 201, owner: 201, outsider: 201 }
 	},
 	{
 		route: 'PUT /class/{code}/answer',

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { ANALYSIS_KINDS as analysisKinds } from '../../kinds/names';
-import { pageOf, roleSchema, timestamp } from './common';
+import { pageOf, projectRoleSchema, timestamp } from './common';
 
 const base = {
 	id: z.string(),
@@ -31,7 +31,7 @@ export const analysisSchema = z
 	})
 	.meta({ id: 'Analysis' });
 
-export const analysisWithRoleSchema = analysisSchema.extend({ role: roleSchema });
+export const analysisWithRoleSchema = analysisSchema.extend({ role: projectRoleSchema });
 
 export const analysisPageSchema = pageOf(analysisListItemSchema);
 

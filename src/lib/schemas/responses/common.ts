@@ -27,3 +27,5 @@ export function pageOf<T extends z.ZodType>(item: T) {
 }
 
 export const roleSchema = z.enum(['owner', 'editor', 'student', 'viewer']);
+/** a role in one project: a workshop role, or a client invited to that project alone */
+export const projectRoleSchema = z.enum([...roleSchema.options, 'client']);

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { LENGTH_UNITS } from '../preferences';
-import { pageOf, roleSchema, timestamp } from './common';
+import { pageOf, projectRoleSchema, roleSchema, timestamp } from './common';
 
 export const healthSchema = z.object({ status: z.literal('ok'), version: z.string() });
 
@@ -53,7 +53,7 @@ export const projectSchema = z
 	})
 	.meta({ id: 'Project' });
 
-export const projectWithRoleSchema = projectSchema.extend({ role: roleSchema });
+export const projectWithRoleSchema = projectSchema.extend({ role: projectRoleSchema });
 
 export const projectPageSchema = pageOf(
 	projectSchema.omit({ createdBy: true }).extend({ createdByName: z.string().nullable() })

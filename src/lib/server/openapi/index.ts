@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { createDocument, type ZodOpenApiOperationObject } from 'zod-openapi';
+import { createDocument, type oas31, type ZodOpenApiOperationObject } from 'zod-openapi';
 import { problemSchema } from '$lib/schemas/responses/common';
 import { classSessionOperations } from './class-sessions';
 import { documentOperations } from './documents';
@@ -104,18 +104,18 @@ function operationObject(op: ApiOperation): ZodOpenApiOperationObject {
 	};
 }
 
-let cached: { version: string; doc: Record<string, unknown> } | undefined;
+let cached: { version: string; doc: oas31.OpenAPIObject } | undefined;
 
 /** The OpenAPI 3.1 document of /api/v1, generated (once) from the zod schemas the routes use. */
-export function openApiDocument(version: string): Record<string, unknown> {
+export function openApiDocument(version: string): oas31.OpenAPIObject {
 	if (cached?.version !== version) cached = { version, doc: generate(version) };
 	return cached.doc;
 }
 
-function generate(version: string): Record<string, unknown> {
+function generate(version: string): oas31.OpenAPIObject {
 	const paths: Record<string, Record<string, ZodOpenApiOperationObject>> = {};
 	for (const op of operations) (paths[op.path] ??= {})[op.method] = operationObject(op);
-	const doc = createDocument({
+	return createDocument({
 		openapi: '3.1.0',
 		info: {
 			title: 'Spanwright API',
@@ -144,5 +144,4 @@ function generate(version: string): Record<string, unknown> {
 			}
 		}
 	});
-	return doc as unknown as Record<string, unknown>;
 }

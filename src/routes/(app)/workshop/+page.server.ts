@@ -9,7 +9,8 @@ import {
 	classModeSchema,
 	confirmSchema,
 	invitationSchema,
-	workshopNameSchema
+	workshopNameSchema,
+	workshopSwitchSchema
 } from '$lib/schemas/workshop';
 import { current, memberActions } from './member-actions.server';
 import { safeRedirectPath } from '$lib/schemas/return-path';
@@ -31,8 +32,11 @@ export const load: PageServerLoad = async ({ locals }) => {
 export const actions: Actions = {
 	switch: async ({ locals, request, url }) => {
 		const actor = requireActor(locals.actor);
-		const id = String((await readForm(request)).get('workshopId') ?? '');
-		await workshops.switchWorkshop(actor, id);
+		const form = await superValidate(await readForm(request), zod4(workshopSwitchSchema), {
+			id: 'workshop-switch'
+		});
+		if (!form.valid) return fail(400, { switchForm: form });
+		await workshops.switchWorkshop(actor, form.data.workshopId);
 		redirect(303, safeRedirectPath(url.searchParams.get('next'), '/projects'));
 	},
 	rename: async ({ locals, request }) => {
