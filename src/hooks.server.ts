@@ -13,13 +13,18 @@ import { HSTS, SECURITY_HEADERS } from '$lib/server/hooks/security-headers';
 import { reportError } from '$lib/server/errors';
 import { registerFastPath } from '$lib/server/fast-path';
 import { sweepOrphanFiles } from '$lib/server/documents';
+import { dbReady } from '$lib/server/db';
 // units beyond the trade's table (unit-table.ts) are read on the server with mathjs
 import '$lib/engine/units/quantity-full';
 
-/** Refuse to start a production server without AUTH_SECRET, rather than fail every request. */
-export const init: ServerInit = () => {
+/**
+ * Refuse to start a production server without AUTH_SECRET, rather than fail every request; open the
+ * database and apply its migrations before the first request.
+ */
+export const init: ServerInit = async () => {
 	if (building) return;
 	authSecret();
+	await dbReady();
 	// the production server (server.js) answers the open compute routes with it, ahead of SvelteKit
 	registerFastPath();
 	// files left by a crash mid-upload or a deleted project; never holds up the start

@@ -14,7 +14,7 @@ const work = mkdtempSync(join(tmpdir(), 'spanwright-list-bench-'));
 process.env.SPANWRIGHT_DATA_DIR = work;
 
 const { getDb, oneRow } = await import('../../src/lib/server/db');
-const { analyses, memberships, users, workshops } = await import('../../src/lib/server/db/schema');
+const { analyses, memberships, users, workshops } = await import('../../src/lib/server/db/tables');
 const { createProject } = await import('../../src/lib/server/projects');
 const { createAnalysis, listAnalyses } = await import('../../src/lib/server/analyses');
 type Actor = import('../../src/lib/server/access').Actor;

@@ -10,7 +10,7 @@ import * as undeleteApi from '../../src/routes/api/v1/analyses/[id]/undelete/+se
 import * as moveApi from '../../src/routes/api/v1/analyses/[id]/move/+server';
 import type { ShelfResult } from '../../src/lib/engine';
 import { getDb } from '../../src/lib/server/db';
-import { analyses, memberships } from '../../src/lib/server/db/schema';
+import { analyses, memberships } from '../../src/lib/server/db/tables';
 import { createProject } from '../../src/lib/server/projects';
 import {
 	deleteAnalysis,

@@ -9,7 +9,7 @@ import * as oneApi from '../../src/routes/api/v1/analyses/[id]/+server';
 import { type ShelfResult } from '../../src/lib/engine';
 import { analyzeShelf, type ShelfRequest } from '../../src/lib/compute';
 import { getDb } from '../../src/lib/server/db';
-import { analyses, users } from '../../src/lib/server/db/schema';
+import { analyses, users } from '../../src/lib/server/db/tables';
 import { createProject } from '../../src/lib/server/projects';
 import { getAnalysis, updateAnalysis } from '../../src/lib/server/analyses';
 

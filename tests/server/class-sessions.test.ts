@@ -1,11 +1,11 @@
 // Class sessions: a teacher's question to a class, answered from phones without accounts. The
 // session, its seats and answers live only in the database and are gone once it ends or expires.
-import { eq, sql } from 'drizzle-orm';
+import { count, eq } from 'drizzle-orm';
 import { describe, expect, it } from 'vitest';
 import { useTempDb } from './support/db';
 import { event, makeUser } from './support/actors';
 import { getDb } from '../../src/lib/server/db';
-import { classAnswers, classSeats, classSessions } from '../../src/lib/server/db/schema';
+import { classAnswers, classSeats, classSessions } from '../../src/lib/server/db/tables';
 import {
 	OPEN_SESSIONS_PER_HOST,
 	SESSION_MINUTES,
@@ -40,15 +40,15 @@ async function status(p: Promise<unknown>) {
 async function rows(sessionId: string) {
 	const db = getDb();
 	const [s] = await db
-		.select({ n: sql<number>`count(*)` })
+		.select({ n: count() })
 		.from(classSessions)
 		.where(eq(classSessions.id, sessionId));
 	const [seats] = await db
-		.select({ n: sql<number>`count(*)` })
+		.select({ n: count() })
 		.from(classSeats)
 		.where(eq(classSeats.sessionId, sessionId));
 	const [answers] = await db
-		.select({ n: sql<number>`count(*)` })
+		.select({ n: count() })
 		.from(classAnswers)
 		.where(eq(classAnswers.sessionId, sessionId));
 	return { sessions: s.n, seats: seats.n, answers: answers.n };

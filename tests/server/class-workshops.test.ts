@@ -21,7 +21,7 @@ import {
 	setClassMode
 } from '../../src/lib/server/workshops';
 import { getDb } from '../../src/lib/server/db';
-import { memberships } from '../../src/lib/server/db/schema';
+import { memberships } from '../../src/lib/server/db/tables';
 
 useTempDb();
 

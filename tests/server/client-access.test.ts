@@ -10,7 +10,7 @@ import { ensurePoppler, pdfText } from './support/pdf';
 import { grantProject, makeWorkshopWithCast } from './support/actors';
 import { saveShelf } from './support/analyses';
 import { getDb } from '../../src/lib/server/db';
-import { recordSends, shareLinks } from '../../src/lib/server/db/schema';
+import { recordSends, shareLinks } from '../../src/lib/server/db/tables';
 import { createProject } from '../../src/lib/server/projects';
 import { getAnalysis } from '../../src/lib/server/analyses';
 import {

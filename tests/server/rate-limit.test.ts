@@ -5,7 +5,7 @@ import { computeLimit } from '../../src/lib/server/hooks/compute-limit';
 import { COMPUTE_REQUESTS } from '../../src/lib/server/rate-limit';
 import { getDb } from '../../src/lib/server/db';
 import { eq } from 'drizzle-orm';
-import { rateLimits } from '../../src/lib/server/db/schema';
+import { rateLimits } from '../../src/lib/server/db/tables';
 import { useTempDb } from './support/db';
 
 useTempDb();

@@ -1,7 +1,7 @@
 import { error } from '@sveltejs/kit';
 import { and, eq } from 'drizzle-orm';
 import { getDb, firstRow } from './db';
-import { memberships, projectAccess, type Role } from './db/schema';
+import { memberships, projectAccess, type Role } from './db/tables';
 import type { LengthUnit } from '$lib/schemas/preferences';
 
 /** Who is acting: the signed-in user, however they proved it (session cookie or API token). */

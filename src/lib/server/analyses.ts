@@ -5,13 +5,20 @@
  */
 import type { LengthUnit } from '$lib/schemas/preferences';
 import { error } from '@sveltejs/kit';
+import type { SQLiteColumn } from 'drizzle-orm/sqlite-core';
 import { and, asc, count, desc, eq, gt, inArray, isNull, sql, type SQL } from 'drizzle-orm';
-import { alias } from 'drizzle-orm/sqlite-core';
 import { canChangeAnalysis, type Actor } from './access';
 import { computeAnalysis, describeAnalysis, describeInput } from '$lib/kinds/registry';
-import { getDb, firstRow, oneRow, transaction } from './db';
+import { dialect, getDb, firstRow, oneRow, transaction } from './db';
 import { analysisTextMatches } from './db/search';
-import { analyses, analysisRevisions, projects, users, type AnalysisKind } from './db/schema';
+import {
+	alias,
+	analyses,
+	analysisRevisions,
+	projects,
+	users,
+	type AnalysisKind
+} from './db/tables';
 import type { ProblemIssue } from './http';
 import { lengthUnitOf } from './preferences';
 import { getProject } from './projects';
@@ -69,6 +76,17 @@ function present<
 	return { ...row, summary: summary || row.summary };
 }
 
+/**
+ * The sort of the list. An analysis without a verdict comes first going up and last going down on
+ * both engines: SQLite's own order (which its list indexes hold), named on PostgreSQL, whose default
+ * is the other way round.
+ */
+function sortOrder(column: SQL | SQLiteColumn, dir: 'asc' | 'desc') {
+	if (dialect === 'pg')
+		return dir === 'asc' ? sql`${column} asc nulls first` : sql`${column} desc nulls last`;
+	return dir === 'asc' ? asc(column) : desc(column);
+}
+
 /** The query of one page's ids, and its filter (for the count); not run here. */
 export function analysisPage(projectId: string, query: AnalysisListQuery) {
 	const where: SQL[] = [eq(analyses.projectId, projectId), isNull(analyses.deletedAt)];
@@ -81,11 +99,7 @@ export function analysisPage(projectId: string, query: AnalysisListQuery) {
 		.select({ id: analyses.id })
 		.from(analyses)
 		.where(filter)
-		.orderBy(
-			query.dir === 'asc' ? asc(column) : desc(column),
-			desc(analyses.updatedAt),
-			asc(analyses.id)
-		)
+		.orderBy(sortOrder(column, query.dir), desc(analyses.updatedAt), asc(analyses.id))
 		.limit(query.perPage)
 		.offset((query.page - 1) * query.perPage);
 	return { filter, page };

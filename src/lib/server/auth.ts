@@ -19,7 +19,7 @@ import { passwordSignIn } from './accounts/sign-in';
 import { throttleMessage } from './accounts/throttle';
 import { findUserByEmail } from './accounts/users';
 import { getDb, type Db } from './db';
-import { accounts, sessions, users, verificationTokens } from './db/schema';
+import { accounts, sessions, users, verificationTokens } from './db/tables';
 import {
 	linkOrigin,
 	MailUnavailable,

@@ -10,7 +10,7 @@ import { and, asc, count, eq, lt } from 'drizzle-orm';
 import { createHash, randomBytes, randomInt } from 'node:crypto';
 import { requireActor, type Actor } from './access';
 import { getDb } from './db';
-import { classAnswers, classSeats, classSessions } from './db/schema';
+import { classAnswers, classSeats, classSessions } from './db/tables';
 import { EXPERIMENTS, answerTo, type Experiment } from '$lib/lab/experiments';
 import { JOIN_CODE_ALPHABET, JOIN_CODE_LENGTH } from '$lib/schemas/class-session';
 

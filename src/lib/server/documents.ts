@@ -4,7 +4,7 @@ import { fileTypeFromBuffer } from 'file-type';
 import sharp from 'sharp';
 import { requireProjectRole, type Actor } from './access';
 import { getDb, firstRow, oneRow } from './db';
-import { analyses, documents, users, type DocumentType } from './db/schema';
+import { analyses, documents, users, type DocumentType } from './db/tables';
 import { getProject } from './projects';
 import { getStore } from './storage';
 import type { DocumentFields, DocumentPatch } from '$lib/schemas/document';

@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import type { Actor } from './access';
 import { getDb, firstRow } from './db';
-import { users } from './db/schema';
+import { users } from './db/tables';
 import { LENGTH_UNITS, type LengthUnit } from '$lib/schemas/preferences';
 
 /** The actor's chosen way of writing lengths (fractional inches to a precision, decimal inches, mm). */

@@ -8,7 +8,7 @@ import { and, asc, desc, eq, isNull } from 'drizzle-orm';
 import { createHash, randomBytes } from 'node:crypto';
 import type { Actor } from './access';
 import { getDb, firstRow, oneRow, transaction } from './db';
-import { projectAccess, projectInvitations, projects, users, workshops } from './db/schema';
+import { projectAccess, projectInvitations, projects, users, workshops } from './db/tables';
 import { getProject } from './projects';
 
 const INVITATION_DAYS = 7;

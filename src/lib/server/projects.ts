@@ -2,7 +2,7 @@ import { and, asc, count, desc, eq, type SQL } from 'drizzle-orm';
 import { requireProjectRole, requireRole, type Actor, type ProjectRole } from './access';
 import { getDb, firstRow, oneRow } from './db';
 import { containsText } from './db/contains';
-import { documents, projects, users } from './db/schema';
+import { documents, projects, users } from './db/tables';
 import { getStore } from './storage';
 import type { ProjectInput, ProjectListQuery } from '$lib/schemas/project';
 import { error } from '@sveltejs/kit';

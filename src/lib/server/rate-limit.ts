@@ -1,6 +1,6 @@
-import { RateLimiterRes, RateLimiterSQLite } from 'rate-limiter-flexible';
+import { RateLimiterPostgres, RateLimiterRes, RateLimiterSQLite } from 'rate-limiter-flexible';
 import type Database from 'better-sqlite3';
-import { getSqlite } from './db';
+import { getOpened, type Opened } from './db';
 import { problem } from './http';
 
 /**
@@ -25,9 +25,8 @@ export const COMPUTE_BUDGET: Budget = {
 	seconds: COMPUTE_WINDOW_S
 };
 
-let current:
-	| { db: Database.Database; client: Database.Database; limiters: Map<string, RateLimiterSQLite> }
-	| undefined;
+type Limiter = RateLimiterSQLite | RateLimiterPostgres;
+let current: { opened: Opened; limiters: Map<string, Limiter> } | undefined;
 
 /**
  * The connection as the limiter sees it: the same database, but each statement it prepares is
@@ -50,22 +49,42 @@ function keepingStatements(db: Database.Database): Database.Database {
 	});
 }
 
-/** The limiter of one budget over the `rate_limit` table, made once per database. */
-export function limiterFor(budget: Budget) {
-	const db = getSqlite();
-	if (current?.db !== db) current = { db, client: keepingStatements(db), limiters: new Map() };
+const sqliteClients = new WeakMap<Database.Database, Database.Database>();
+
+/**
+ * The limiter of one budget over the `rate_limit` table, made once per database: the library's
+ * SQLite store on the SQLite connection, its PostgreSQL store (named prepared statements) on the
+ * pool, so every app server on one PostgreSQL database counts against the same rows.
+ */
+export function limiterFor(budget: Budget): Limiter {
+	const opened = getOpened();
+	if (current?.opened !== opened) current = { opened, limiters: new Map() };
 	let limiter = current.limiters.get(budget.prefix);
 	if (!limiter) {
-		limiter = new RateLimiterSQLite({
-			storeClient: current.client,
-			storeType: 'better-sqlite3',
+		const options = {
 			tableName: 'rate_limit',
 			tableCreated: true, // by the migrations
 			clearExpiredByTimeout: true,
 			keyPrefix: budget.prefix,
 			points: budget.points,
 			duration: budget.seconds
-		});
+		};
+		if (opened.pool) {
+			limiter = new RateLimiterPostgres({
+				...options,
+				storeClient: opened.pool,
+				storeType: 'pool'
+			});
+		} else {
+			const db = opened.sqlite!;
+			let client = sqliteClients.get(db);
+			if (!client) sqliteClients.set(db, (client = keepingStatements(db)));
+			limiter = new RateLimiterSQLite({
+				...options,
+				storeClient: client,
+				storeType: 'better-sqlite3'
+			});
+		}
 		current.limiters.set(budget.prefix, limiter);
 	}
 	return limiter;

@@ -7,7 +7,7 @@
 import { and, desc, eq } from 'drizzle-orm';
 import type { Actor } from './access';
 import { getDb, firstRow } from './db';
-import { projectAccess, recordSends, users } from './db/schema';
+import { projectAccess, recordSends, users } from './db/tables';
 import { letterHtml, mailDown, sendMail } from './mail';
 import { getProject } from './projects';
 import { renderRecordPdf } from './record-pdf';

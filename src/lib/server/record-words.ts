@@ -9,7 +9,7 @@ import type { WallResult } from '$lib/engine/wall/types';
 import type { JointPlan } from '$lib/engine/joinery';
 import type { StabilityResult } from '$lib/engine/stability';
 import { count, type ReaderUnit as LengthUnit } from '$lib/kinds/words';
-import type { AnalysisKind } from './db/schema';
+import type { AnalysisKind } from './db/tables';
 import { describeAnalysis, describeInput } from '$lib/kinds/registry';
 import type { ComparisonResult } from '$lib/kinds/comparison';
 import { aboutLength, describeShelf } from '$lib/kinds/shelf-words';

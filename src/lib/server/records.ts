@@ -8,7 +8,7 @@ import { error } from '@sveltejs/kit';
 import { and, asc, eq, isNull } from 'drizzle-orm';
 import type { Actor } from './access';
 import { getDb, firstRow } from './db';
-import { analyses, projects, workshops, type AnalysisKind } from './db/schema';
+import { analyses, projects, workshops, type AnalysisKind } from './db/tables';
 
 type Project = typeof projects.$inferSelect;
 import { lengthUnitOf } from './preferences';

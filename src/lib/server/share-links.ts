@@ -8,7 +8,7 @@ import { and, desc, eq, gt, isNull } from 'drizzle-orm';
 import { randomBytes } from 'node:crypto';
 import type { Actor } from './access';
 import { getDb, firstRow, oneRow } from './db';
-import { analyses, shareLinks, users } from './db/schema';
+import { analyses, shareLinks, users } from './db/tables';
 import { sha256 } from './project-access';
 import { getProject } from './projects';
 

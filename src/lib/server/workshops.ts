@@ -3,7 +3,7 @@ import { and, asc, count, desc, eq, isNull } from 'drizzle-orm';
 import { createHash, randomBytes } from 'node:crypto';
 import { requireRole, type Actor } from './access';
 import { getDb, firstRow, oneRow, transaction } from './db';
-import { invitations, memberships, users, workshops, type Role } from './db/schema';
+import { invitations, memberships, users, workshops, type Role } from './db/tables';
 
 export interface WorkshopSummary {
 	id: string;

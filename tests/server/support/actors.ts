@@ -1,7 +1,7 @@
 import type { Actor } from '../../../src/lib/server/access';
 import { getDb, oneRow } from '../../../src/lib/server/db';
-import { memberships, projectAccess, users, workshops } from '../../../src/lib/server/db/schema';
-import type { Role } from '../../../src/lib/server/db/schema';
+import { memberships, projectAccess, users, workshops } from '../../../src/lib/server/db/tables';
+import type { Role } from '../../../src/lib/server/db/tables';
 
 let n = 0;
 

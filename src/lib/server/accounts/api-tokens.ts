@@ -2,7 +2,7 @@ import { error } from '@sveltejs/kit';
 import { and, desc, eq, isNull } from 'drizzle-orm';
 import type { Actor } from '../access';
 import { getDb, firstRow, oneRow } from '../db';
-import { apiTokens, users } from '../db/schema';
+import { apiTokens, users } from '../db/tables';
 import { readLengthUnit } from '../preferences';
 import { randomSecret, sha256 } from './secrets';
 

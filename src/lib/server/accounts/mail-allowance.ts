@@ -1,5 +1,5 @@
 import { getDb } from '../db';
-import { signInFailures } from '../db/schema';
+import { signInFailures } from '../db/tables';
 import { recentFailures, refusedUntilOf } from './throttle';
 
 export const MAIL_REQUESTS_PER_WINDOW = 5;

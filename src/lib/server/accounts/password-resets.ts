@@ -1,6 +1,6 @@
 import { and, eq, gt, isNull, or, sql } from 'drizzle-orm';
 import { getDb, firstRow, transaction } from '../db';
-import { apiTokens, passwordResets, signInFailures, users } from '../db/schema';
+import { apiTokens, passwordResets, signInFailures, users } from '../db/tables';
 import { mailReady, sendLater, sendPasswordReset } from '../mail';
 import { allowMailTo } from './mail-allowance';
 import { hashPassword } from './passwords';

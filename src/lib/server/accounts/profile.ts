@@ -4,7 +4,7 @@ import type { LengthUnit } from '../../schemas/preferences';
 import { LENGTH_UNITS } from '../../schemas/preferences';
 import type { Actor } from '../access';
 import { getDb, firstRow } from '../db';
-import { users } from '../db/schema';
+import { users } from '../db/tables';
 
 export async function getProfile(actor: Actor) {
 	const row = await getDb()

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { eq, lt } from 'drizzle-orm';
 import { getDb, firstRow, transaction } from '../db';
-import { endedSessions, users } from '../db/schema';
+import { endedSessions, users } from '../db/tables';
 
 /** What the session token carries that matters here (Auth.js's JWT claims plus our `sid`). */
 export interface SessionClaims {

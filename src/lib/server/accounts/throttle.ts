@@ -1,6 +1,6 @@
 import { and, desc, eq, gt, inArray, lt } from 'drizzle-orm';
 import { getDb, transaction } from '../db';
-import { signInFailures } from '../db/schema';
+import { signInFailures } from '../db/tables';
 
 export const SIGN_IN_WINDOW_MS = 15 * 60 * 1000;
 /** From an account's third failure on (from anywhere), each further attempt waits a little longer. */

@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import type { Actor } from '../access';
 import { getDb, firstRow, isUniqueViolation, oneRow, transaction } from '../db';
-import { users } from '../db/schema';
+import { users } from '../db/tables';
 import { readLengthUnit } from '../preferences';
 import { createWorkshopFor } from '../workshops';
 import { hashPassword } from './passwords';

@@ -1,13 +1,13 @@
 // `npm run dev`: everything a fresh clone needs to show the app with demo data — the data folder,
 // a kept development secret, migrations, the demo scenario (once), the mail catcher, and Vite.
 import { spawn } from 'node:child_process';
-import { dataDir, getDb } from '../db';
+import { dataDir, dbReady } from '../db';
 import { demoIsSeeded, seedDemo } from '../demo/seed';
 import { startMailCatcher } from '../dev/mail-catcher';
 import { ensureAuthSecret } from './secrets';
 
 ensureAuthSecret();
-getDb();
+await dbReady();
 if (!(await demoIsSeeded())) {
 	await seedDemo();
 	console.log('Seeded the demo scenario.');

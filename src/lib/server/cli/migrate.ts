@@ -1,5 +1,11 @@
-// `npm run db:migrate`: apply the migrations in drizzle/ to the configured database.
-import { getDb, dataDir } from '../db';
+// `npm run db:migrate`: apply the migrations to the configured database (drizzle/ to the SQLite
+// file in the data folder; drizzle/pg/ to PostgreSQL when DATABASE_URL names it).
+import { closeDb, dataDir, dbReady, dialect } from '../db';
 
-getDb();
-console.log(`Migrations applied (data folder ${dataDir}).`);
+await dbReady();
+await closeDb();
+console.log(
+	dialect === 'pg'
+		? 'Migrations applied (PostgreSQL, DATABASE_URL).'
+		: `Migrations applied (data folder ${dataDir}).`
+);

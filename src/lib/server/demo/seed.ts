@@ -1,7 +1,7 @@
 import { eq, inArray } from 'drizzle-orm';
 import { createUser } from '../accounts/users';
 import { getDb, firstRow, oneRow } from '../db';
-import { memberships, projectAccess, projects, users, workshops } from '../db/schema';
+import { memberships, projectAccess, projects, users, workshops } from '../db/tables';
 import { DEMO_ACCOUNTS } from './accounts';
 import { seedDemoAnalyses } from './analyses';
 

@@ -1,0 +1,5 @@
+CREATE INDEX "analysis_list_updated" ON "analysis" USING btree ("project_id","updated_at","id","kind","pass","deleted_at") WHERE "analysis"."deleted_at" is null;--> statement-breakpoint
+CREATE INDEX "analysis_list_created" ON "analysis" USING btree ("project_id","created_at","updated_at","id","kind","pass","deleted_at") WHERE "analysis"."deleted_at" is null;--> statement-breakpoint
+CREATE INDEX "analysis_list_name" ON "analysis" USING btree ("project_id",lower("name"),"updated_at","id","kind","pass","deleted_at") WHERE "analysis"."deleted_at" is null;--> statement-breakpoint
+CREATE INDEX "analysis_list_kind" ON "analysis" USING btree ("project_id","kind","updated_at","id","pass","deleted_at") WHERE "analysis"."deleted_at" is null;--> statement-breakpoint
+CREATE INDEX "analysis_list_pass" ON "analysis" USING btree ("project_id","pass","updated_at","id","kind","deleted_at") WHERE "analysis"."deleted_at" is null;
