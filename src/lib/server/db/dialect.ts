@@ -17,7 +17,8 @@ export const dialect: Dialect = dialectOf(process.env.DATABASE_URL);
  * stand in for them. Their query builders take the same calls (select, insert … returning,
  * onConflict…, transaction) and give back the same values (Dates, booleans, parsed JSON): the
  * schemas are proved alike by tests/server/schema-parity.test.ts, and the whole server suite runs on
- * both engines. Only tables.ts and index.ts call this, each once, for the tables and the database.
+ * both engines. Only tables.ts and index.ts call this, each once, for the tables and the database
+ * (and the copy script, db/copy.ts, which reads both engines at once).
  */
 export function sameShape<T>(postgresSide: unknown): T {
 	return postgresSide as T;
