@@ -76,11 +76,21 @@ function cpu(): number {
 	return (user + system) / 1000;
 }
 
-/** Median CPU time of one call, µs: warmed up for 200 ms (so the compiler is done with it),
- * then seven runs of a batch sized to take about 30 ms. */
-function time(fn: () => void): number {
+/**
+ * CPU time of one call, µs: `cold`, the mean over the first 200 ms of calls (what a process that
+ * just started pays, the compiler still at work); `warm`, the median of seven runs of a batch
+ * sized to take about 30 ms, after at least 5,000 calls and 200 ms (the case check takes some
+ * thousands of calls to reach its steady speed: 200 ms alone measured mostly its warm-up).
+ */
+function time(fn: () => void): { warm: number; cold: number } {
 	let t0 = cpu();
-	while (cpu() - t0 < 200) fn();
+	let calls = 0;
+	while (cpu() - t0 < 200) {
+		fn();
+		calls++;
+	}
+	const cold = ((cpu() - t0) / calls) * 1000;
+	for (; calls < 5000; calls++) fn();
 	t0 = cpu();
 	let n = 0;
 	while (cpu() - t0 < 30) {
@@ -93,7 +103,7 @@ function time(fn: () => void): number {
 		for (let i = 0; i < n; i++) fn();
 		runs.push(((cpu() - t) / n) * 1000);
 	}
-	return runs.sort((a, b) => a - b)[3];
+	return { warm: runs.sort((a, b) => a - b)[3], cold };
 }
 
 const rows: {
@@ -157,7 +167,7 @@ const rows: {
 
 const [load] = loadavg();
 console.log(
-	`\nengine rows (issue 12): load average ${load.toFixed(1)} on this machine; CPU time, medians of 7 runs\n`
+	`\nengine rows (issue 12): load average ${load.toFixed(1)} on this machine; CPU time after 5,000 warm-up calls, medians of 7 runs\n`
 );
 console.log(
 	[
@@ -166,13 +176,14 @@ console.log(
 		'goal'.padStart(12),
 		'plain µs'.padStart(10),
 		'ratio'.padStart(8),
-		'  meets'
+		'  meets',
+		'cold µs'.padStart(10)
 	].join('')
 );
 const only = process.argv[2];
 for (const row of rows.filter((r) => !only || r.what.startsWith(only))) {
-	const us = time(row.run);
-	const plain = time(row.plain);
+	const { warm: us, cold } = time(row.run);
+	const plain = time(row.plain).warm;
 	console.log(
 		[
 			row.what.padEnd(48),
@@ -180,11 +191,12 @@ for (const row of rows.filter((r) => !only || r.what.startsWith(only))) {
 			row.goal.padStart(12),
 			plain.toFixed(2).padStart(10),
 			`${(us / plain).toFixed(0)}×`.padStart(8),
-			row.check(us, plain) ? '  yes' : '  no'
+			row.check(us, plain) ? '  yes' : '   no',
+			cold.toFixed(1).padStart(10)
 		].join('')
 	);
 }
 console.log(
-	'\nplain: a 101-point closed-form curve loop (solver and analysis rows) or 12 closed-form sags (case row), in multiplications, timed beside each row.'
+	'\nplain: a 101-point closed-form curve loop (solver and analysis rows) or 12 closed-form sags (case row), in multiplications, timed beside each row.\ncold: the mean over the first 200 ms of calls of a row (the rows run in one process, in this order), for comparison only.'
 );
 if (sink === 42) console.log('');

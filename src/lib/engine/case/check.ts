@@ -4,11 +4,12 @@ import type { JointPlan, JointRequest } from '../joinery/types';
 import { checkStabilitySI } from '../stability/check';
 import { STABILITY_CAUTIONS } from '../stability/cautions';
 import { ENGINE_VERSION } from '../version';
+import { ContentMap } from '../memo';
+import type { ShelfResult } from '../shelf/types';
 import { caseGeometry, partsList } from './geometry';
 import { assumedStocks, jointRequests } from './joints';
 import { caseMargins } from './margins';
-import { analyseShelves, asShelf, shelfRequest, ShelfAnalyses } from './shelves';
-import type { CaseGeometry } from './geometry';
+import { analyseShelves, ShelfAnalyses } from './shelves';
 import { anchoringSuggestion, jointSuggestions, shelfSuggestions } from './suggest';
 import type {
 	CaseDesign,
@@ -26,16 +27,14 @@ const SHELF_CAUTIONS = [
 ];
 
 /** Failing shelves that are the same shelf (same request to the shelf engine), grouped so each
- * suggestion is worked out once and applies to all of them. */
-function sameShelves(failing: CaseShelf[], d: CaseDesign, g: CaseGeometry): CaseShelf[][] {
-	const groups = new Map<string, CaseShelf[]>();
+ * suggestion is worked out once and applies to all of them. ShelfAnalyses gives one analysis
+ * object to every request of the same content, so that object names the group. */
+function sameShelves(failing: CaseShelf[]): CaseShelf[][] {
+	const groups = new Map<ShelfResult, CaseShelf[]>();
 	for (const s of failing) {
-		const design =
-			s.path[0] === 'shelves'
-				? d.shelves[s.path[1] as number]
-				: asShelf(d, s.path[0] as 'top' | 'bottom');
-		const key = JSON.stringify(shelfRequest(d, g, design));
-		groups.set(key, [...(groups.get(key) ?? []), s]);
+		const group = groups.get(s.analysis);
+		if (group) group.push(s);
+		else groups.set(s.analysis, [s]);
 	}
 	return [...groups.values()];
 }
@@ -43,15 +42,21 @@ function sameShelves(failing: CaseShelf[], d: CaseDesign, g: CaseGeometry): Case
 /** A suggestion worked out for the first shelf of a group, written for every shelf of it. */
 function forAll(x: CaseSuggestion, first: CaseShelf, group: CaseShelf[]): CaseSuggestion {
 	const prefix = first.path.join('.');
-	const rebase = (path: DesignPath, to: DesignPath) => [...to, ...path.slice(first.path.length)];
-	const own = (path: DesignPath) => path.slice(0, first.path.length).join('.') === prefix;
-	return {
-		...x,
-		fixes: group.flatMap((s) => x.fixes.map((k) => s.path.join('.') + k.slice(prefix.length))),
-		changes: x.changes.flatMap((c) =>
-			own(c.path) ? group.map((s) => ({ path: rebase(c.path, s.path), value: c.value })) : [c]
-		)
-	};
+	const n = first.path.length;
+	const own = (path: DesignPath) => path.slice(0, n).join('.') === prefix;
+	const keys = group.map((s) => s.path.join('.'));
+	const fixes: string[] = [];
+	for (const key of keys) for (const k of x.fixes) fixes.push(key + k.slice(prefix.length));
+	const changes: CaseSuggestion['changes'] = [];
+	for (const c of x.changes) {
+		if (!own(c.path)) {
+			changes.push(c);
+			continue;
+		}
+		const rest = c.path.slice(n);
+		for (const s of group) changes.push({ path: [...s.path, ...rest], value: c.value });
+	}
+	return { ...x, fixes, changes };
 }
 
 /**
@@ -66,27 +71,26 @@ export function checkCaseSI(d: CaseDesign): CaseResult {
 	const shelves = analyseShelves(d, g, runs);
 	const requests = jointRequests(d, g, shelves);
 	// identical joints (a column of adjustable shelves) are planned once
-	const plans = new Map<string, JointPlan>();
+	const plans = new ContentMap<JointPlan>();
 	const planOnce = (req: JointRequest) => {
-		const key = JSON.stringify(req);
-		let plan = plans.get(key);
-		if (!plan) plans.set(key, (plan = planJointSI(req)));
+		let plan = plans.get(req);
+		if (!plan) plans.set(req, (plan = planJointSI(req)));
 		return plan;
 	};
-	const joints: CaseJoint[] = requests.map(({ req, ...rest }) => ({
-		...rest,
-		plan: planOnce(req)
+	// written out, not spread: adding a key to a spread object is slow on Node 20 (issue 12)
+	const joints: CaseJoint[] = requests.map((r) => ({
+		id: r.id,
+		path: r.path,
+		where: r.where,
+		joints: r.joints,
+		plan: planOnce(r.req)
 	}));
 	const stability = checkStabilitySI(stabilityRequestOf(d, g, shelves));
 	const margins = caseMargins(shelves, joints, stability);
 	const failing = new Set(margins.filter((m) => !m.pass).map((m) => m.key));
 
 	const suggestions: CaseSuggestion[] = [];
-	for (const group of sameShelves(
-		shelves.filter((s) => !s.pass),
-		d,
-		g
-	)) {
+	for (const group of sameShelves(shelves.filter((s) => !s.pass))) {
 		const [first] = group;
 		const label = group.length > 1 ? group.map((s) => s.name).join(', ') : first.name;
 		suggestions.push(

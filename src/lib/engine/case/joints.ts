@@ -10,7 +10,12 @@ export function jointRequests(d: CaseDesign, g: CaseGeometry, shelves: CaseShelf
 	const side = { material: stockOf(d.sides.material).stock, thicknessM: d.sides.thickness };
 	const out: { id: string; path: DesignPath; where: string; joints: number; req: JointRequest }[] =
 		[];
-	const analysed = (path: DesignPath) => shelves.find((s) => s.path.join('.') === path.join('.'));
+	const byPath = new Map<string, CaseShelf>();
+	for (const s of shelves) {
+		const key = s.path.join('.');
+		if (!byPath.has(key)) byPath.set(key, s);
+	}
+	const analysed = (path: DesignPath) => byPath.get(path.join('.'));
 
 	d.shelves.forEach((s, i) => {
 		const path = ['shelves', i];
@@ -99,9 +104,12 @@ export function jointRequests(d: CaseDesign, g: CaseGeometry, shelves: CaseShelf
 }
 
 export function planCaseJoints(d: CaseDesign, g: CaseGeometry, shelves: CaseShelf[]): CaseJoint[] {
-	return jointRequests(d, g, shelves).map(({ req, ...rest }) => ({
-		...rest,
-		plan: planJointSI(req)
+	return jointRequests(d, g, shelves).map((r) => ({
+		id: r.id,
+		path: r.path,
+		where: r.where,
+		joints: r.joints,
+		plan: planJointSI(r.req)
 	}));
 }
 

@@ -2,28 +2,50 @@ import { analyzeInput } from '../shelf/analyze';
 import { InputError } from '../errors';
 import { DEFAULT_SHELF_OPTIONS, type ShelfInput, type ShelfResult } from '../shelf/types';
 import { geometryIssues } from '../shelf/validate';
+import { ContentMap } from '../memo';
 import type { CaseGeometry } from './geometry';
-import type { CaseDesign, CaseShelf, DesignPath } from './types';
+import type { CaseDesign, CaseNosing, CaseShelf, DesignPath } from './types';
 
 type DesignShelf = CaseDesign['shelves'][number];
 
-/** The shelf engine's input for one shelf of the case. */
+/** What a suggestion changes in a shelf before it is analysed again (the rest as designed). */
+export interface ShelfChange {
+	spanM?: number;
+	thickness?: number;
+	nosing?: CaseNosing;
+	ends?: DesignShelf['ends'];
+}
+
+/** The shelf engine's input for one shelf of the case, with a suggestion's changes if any (taken
+ * here rather than from a spread copy of the shelf: adding a key to a spread object is slow on
+ * Node 20, issue 12). */
 export function shelfRequest(
 	d: CaseDesign,
 	g: CaseGeometry,
 	s: DesignShelf,
-	spanM = g.innerWidthM
+	change: ShelfChange = {}
 ): ShelfInput {
+	const nosing = change.nosing ?? s.nosing;
+	const ends = change.ends ?? s.ends;
 	return {
-		span: spanM,
-		depth: g.insideDepthM - (s.nosing?.thickness ?? 0),
-		thickness: s.thickness ?? d.sides.thickness,
+		span: change.spanM ?? g.innerWidthM,
+		depth: g.insideDepthM - (nosing?.thickness ?? 0),
+		thickness: change.thickness ?? s.thickness ?? d.sides.thickness,
 		material: s.material ?? d.sides.material,
 		grain: 'along',
-		support: s.kind === 'fixed' && s.ends === 'fixed' ? 'fixed' : 'simple',
+		support: s.kind === 'fixed' && ends === 'fixed' ? 'fixed' : 'simple',
 		loads: s.loads,
 		selfWeight: true,
-		edges: s.nosing ? [{ side: 'front', ...s.nosing }] : [],
+		edges: nosing
+			? [
+					{
+						side: 'front',
+						material: nosing.material,
+						height: nosing.height,
+						thickness: nosing.thickness
+					}
+				]
+			: [],
 		duration: 'long',
 		service: d.service,
 		limit: d.limit,
@@ -42,17 +64,17 @@ function shelfIssues(input: ShelfInput) {
 
 /** Identical shelves are analysed once per check: a case often repeats one shelf many times. */
 export class ShelfAnalyses {
-	private memo = new Map<string, ShelfResult>();
+	private memo = new ContentMap<ShelfResult>();
 
+	/** The analysis of a request; the same object for every request of the same content. */
 	run(request: ShelfInput, path: DesignPath): ShelfResult {
-		const key = JSON.stringify(request);
-		const hit = this.memo.get(key);
+		const hit = this.memo.get(request);
 		if (hit) return hit;
 		try {
 			const issues = shelfIssues(request);
 			if (issues.length) throw new InputError(issues);
 			const result = analyzeInput(request);
-			this.memo.set(key, result);
+			this.memo.set(request, result);
 			return result;
 		} catch (e) {
 			if (e instanceof InputError) {

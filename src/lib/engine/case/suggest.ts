@@ -3,9 +3,10 @@ import { InputError } from '../errors';
 import { formatLength } from '../units/length';
 import { planJointSI } from '../joinery/plan';
 import type { JointRequest } from '../joinery/types';
+import type { MaxSpanInput } from '../shelf/types';
 import { maxSpanInput, minEdgeInput } from '../shelf/solvers';
 import type { CaseGeometry } from './geometry';
-import { asShelf, shelfRequest, type ShelfAnalyses } from './shelves';
+import { asShelf, shelfRequest, type ShelfAnalyses, type ShelfChange } from './shelves';
 import type { CaseDesign, CaseJoint, CaseShelf, CaseSuggestion, DesignPath } from './types';
 import { METRES_PER_INCH } from '../units/length';
 
@@ -39,8 +40,8 @@ export function shelfSuggestions(
 	const fixes = [`${key}:sag`, `${key}:strength`].filter((k) =>
 		k.endsWith('sag') ? !shelf.analysis.limit.pass : !shelf.analysis.strength.pass
 	);
-	const passes = (alt: DesignShelf, spanM?: number) => {
-		const a = runs.run(shelfRequest(d, g, alt, spanM), shelf.path);
+	const passes = (change: ShelfChange) => {
+		const a = runs.run(shelfRequest(d, g, s, change), shelf.path);
 		return a.limit.pass && a.strength.pass;
 	};
 	const material = s.material ?? d.sides.material;
@@ -49,7 +50,7 @@ export function shelfSuggestions(
 	const thicker = lib?.thicknesses
 		.filter((t) => t.actualM > shelf.thicknessM + 1e-6)
 		.sort((a, b) => a.actualM - b.actualM)
-		.find((t) => passes({ ...s, thickness: t.actualM }));
+		.find((t) => passes({ thickness: t.actualM }));
 	if (thicker)
 		out.push({
 			title: `Make ${label} ${thicker.label} thick`,
@@ -62,15 +63,15 @@ export function shelfSuggestions(
 	if (!s.nosing) {
 		const nosingMaterial = lib?.kind === 'solid' ? material : NOSING_FALLBACK;
 		try {
-			const base = shelfRequest(d, g, {
-				...s,
+			const base = shelfRequest(d, g, s, {
 				nosing: { material: nosingMaterial, height: 0.01, thickness: NOSING_THICKNESS_M }
 			});
-			const found = minEdgeInput({
-				...base,
-				edges: [],
-				strip: { side: 'front', material: nosingMaterial, thickness: NOSING_THICKNESS_M }
-			});
+			base.edges = [];
+			const found = minEdgeInput(
+				Object.assign(base, {
+					strip: { side: 'front' as const, material: nosingMaterial, thickness: NOSING_THICKNESS_M }
+				})
+			);
 			if (found.heightRounded !== null) {
 				const nosing = {
 					material: nosingMaterial,
@@ -82,7 +83,7 @@ export function shelfSuggestions(
 					detail: `A solid-wood strip (${findMaterial(String(nosingMaterial))?.name ?? 'solid wood'}), ${len(nosing.height)} tall and 3/4" thick, glued along the front edge; the panel behind it gets 3/4" shallower.`,
 					fixes,
 					changes: [{ path: [...shelf.path, 'nosing'], value: nosing }],
-					verified: passes({ ...s, nosing })
+					verified: passes({ nosing })
 				});
 			}
 		} catch (e) {
@@ -92,8 +93,9 @@ export function shelfSuggestions(
 	}
 
 	try {
-		const { span: _span, ...rest } = shelfRequest(d, g, s);
-		const longest = maxSpanInput(rest).span;
+		const request: MaxSpanInput = shelfRequest(d, g, s);
+		request.span = undefined;
+		const longest = maxSpanInput(request).span;
 		const width = Math.floor((longest + 2 * d.sides.thickness) / SIXTEENTH) * SIXTEENTH;
 		if (width < d.width - 1e-3 && width - 2 * d.sides.thickness > 0.05)
 			out.push({
@@ -101,7 +103,7 @@ export function shelfSuggestions(
 				detail: `The longest span this shelf carries within the limit is ${len(longest)}; a case ${len(width)} wide, or a divider so that no span exceeds it, keeps every shelf of this make within it.`,
 				fixes,
 				changes: [{ path: ['width'], value: width }],
-				verified: passes(s, width - 2 * d.sides.thickness)
+				verified: passes({ spanM: width - 2 * d.sides.thickness })
 			});
 	} catch (e) {
 		// the span solver found no span: the thickness suggestion above is the one to follow
@@ -157,7 +159,7 @@ export function jointSuggestions(
 	}
 	if (onShelf && (req.demand?.momentNM ?? 0) > 0 && joint.path[0] === 'shelves') {
 		const s = designShelf(d, joint.path);
-		const a = runs.run(shelfRequest(d, g, { ...s, ends: 'simple' }), joint.path);
+		const a = runs.run(shelfRequest(d, g, s, { ends: 'simple' }), joint.path);
 		const plan = planJointSI({ ...req, demand: { ...req.demand, momentNM: 0 } });
 		out.push({
 			title: `Plan the ${joint.where.split(',')[0]} as simply supported`,

@@ -64,7 +64,7 @@ export function contentsPoints(req: StabilityRequest): MassPoint[] {
 export function rearranged(points: MassPoint[], order: 'low' | 'high'): MassPoint[] {
 	const places = points.map((p) => ({ xM: p.xM, zM: p.zM })).sort((a, b) => a.zM - b.zM);
 	const masses = points.map((p) => p.massKg).sort((a, b) => (order === 'low' ? b - a : a - b));
-	return places.map((pl, i) => ({ ...pl, massKg: masses[i] }));
+	return places.map((pl, i) => ({ xM: pl.xM, zM: pl.zM, massKg: masses[i] }));
 }
 
 /** Drawers and doors, shut or open. An open drawer's weight moves forward by its extension; an open

@@ -1,3 +1,4 @@
+import { ContentMap } from '../memo';
 import { anchoringSuggestion, jointSuggestions, shelfSuggestions } from '../case/suggest';
 import { analyseShelves, ShelfAnalyses } from '../case/shelves';
 import { jointRequests, assumedStocks } from '../case/joints';
@@ -187,23 +188,25 @@ function checkOne(
 	});
 
 	const requests = [...jointRequests(d, g, shelves), ...dividerRequests(c, g)];
-	const plans = new Map<string, JointPlan>();
+	const plans = new ContentMap<JointPlan>();
 	const planOnce = (req: JointRequest) => {
-		const key = JSON.stringify(req);
-		let plan = plans.get(key);
-		if (!plan) plans.set(key, (plan = planJointSI(req)));
+		let plan = plans.get(req);
+		if (!plan) plans.set(req, (plan = planJointSI(req)));
 		return plan;
 	};
 	const mine = all.filter((p) => p.caseIndex === ci);
 	// rails between openings join the stiles like the top and bottom rails: two joints each
 	const rails = mine.filter((p) => p.role === 'face-frame rail').length;
-	const joints: CaseJoint[] = requests.map(({ req, ...rest }) => ({
-		...rest,
-		...(rest.id === 'rail-to-stile' && rails > 2
-			? { joints: 2 * rails, where: `${rest.where} (${rails} rails, mid rails included)` }
-			: {}),
-		plan: planOnce(req)
-	}));
+	const joints: CaseJoint[] = requests.map((r) => {
+		const midRails = r.id === 'rail-to-stile' && rails > 2;
+		return {
+			id: r.id,
+			path: r.path,
+			where: midRails ? `${r.where} (${rails} rails, mid rails included)` : r.where,
+			joints: midRails ? 2 * rails : r.joints,
+			plan: planOnce(r.req)
+		};
+	});
 
 	const stability = checkStabilitySI(stabilityRequest(c, g, shelves, mine));
 	const dividers = checkDividers(c, g, xCase, shelves);
