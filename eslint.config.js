@@ -14,7 +14,9 @@ export default ts.config(
 			'drizzle/',
 			'data/',
 			'test-results/',
-			'playwright-report/'
+			'playwright-report/',
+			// the benches' scratch folder (tests/bench/engine-rows.sh bundles into it), as in .gitignore
+			'tests/.tmp/'
 		]
 	},
 	js.configs.recommended,
