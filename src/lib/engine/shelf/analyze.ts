@@ -13,6 +13,7 @@ import {
 	sagAt,
 	segmentOf,
 	segmentPeak,
+	solveAgain,
 	solveBeam,
 	totalLoad,
 	type BeamLoads,
@@ -42,7 +43,7 @@ function merge(a: BeamLoads, b: BeamLoads): BeamLoads {
 export interface Solved {
 	model: ShelfModel;
 	all: BeamSolution;
-	/** the shelf's own weight alone on the instant beam, when solved (short duration) */
+	/** the shelf's own weight alone on the instant beam; null when it weighs nothing */
 	selfWeightInstant: BeamSolution | null;
 	/** the governing sag as one quartic per segment (see SagPieces) */
 	pieces: SagPieces;
@@ -76,6 +77,9 @@ export function instantSolution(model: ShelfModel): BeamSolution {
 export function solveShelf(model: ShelfModel): Solved {
 	const { instant, creep, loads } = beamsOf(model);
 	const all = solveBeam(instant, loads);
+	const perm = model.selfWeight;
+	// the same beam under its own weight alone: its equations are factored already
+	const selfWeightInstant = totalLoad(perm) > 0 ? solveAgain(instant, perm) : null;
 	const xs = breakPoints(instant, loads);
 	const c = new Float64Array(5 * Math.max(0, xs.length - 1));
 	const pieces = { xs, c };
@@ -85,16 +89,14 @@ export function solveShelf(model: ShelfModel): Solved {
 	if (model.input.duration === 'long') {
 		addSagPieces(solveBeam(creep, loads), xs, c);
 		const creepApplies = totalLoad(loads) > 0;
-		return { model, all, selfWeightInstant: null, pieces, longTerm, creepApplies };
+		return { model, all, selfWeightInstant, pieces, longTerm, creepApplies };
 	}
 	addSagPieces(all, xs, c);
-	const perm = model.selfWeight;
-	if (totalLoad(perm) === 0)
-		return { model, all, selfWeightInstant: null, pieces, longTerm, creepApplies: false };
-	const permInstant = solveBeam(instant, perm);
+	if (!selfWeightInstant)
+		return { model, all, selfWeightInstant, pieces, longTerm, creepApplies: false };
 	addSagPieces(solveBeam(creep, perm), xs, c);
-	addSagPieces(permInstant, xs, c, -1);
-	return { model, all, selfWeightInstant: permInstant, pieces, longTerm, creepApplies: true };
+	addSagPieces(selfWeightInstant, xs, c, -1);
+	return { model, all, selfWeightInstant, pieces, longTerm, creepApplies: true };
 }
 
 /**
@@ -112,8 +114,9 @@ export function longTermPieces(model: ShelfModel): SagPieces {
 	addSagPieces(solveBeam(instant, loads), xs, c);
 	const perm = model.selfWeight;
 	if (totalLoad(perm) === 0) return { xs, c };
+	const permInstant = solveAgain(instant, perm);
 	addSagPieces(solveBeam(creep, perm), xs, c);
-	addSagPieces(solveBeam(instant, perm), xs, c, -1);
+	addSagPieces(permInstant, xs, c, -1);
 	return { xs, c };
 }
 
@@ -281,10 +284,7 @@ export function analyzeInput(input: ShelfInput): ShelfResult {
 	const instantSag = sagAt(all, g.at);
 	const bendingOnly = solveBeam(beamOf(model, section.ei, Infinity), all.loads);
 	const bendingSag = sagAt(bendingOnly, g.at);
-	const swSag =
-		totalLoad(model.selfWeight) > 0
-			? sagAt(solved.selfWeightInstant ?? solveBeam(all.model, model.selfWeight), g.at)
-			: 0;
+	const swSag = solved.selfWeightInstant ? sagAt(solved.selfWeightInstant, g.at) : 0;
 	const mm = maxMoment(all, solved.pieces.xs);
 	const { panelStress, strength } = strengthOf(model, mm.moment);
 
@@ -292,12 +292,15 @@ export function analyzeInput(input: ShelfInput): ShelfResult {
 	const curve: [number, number][] = new Array(n);
 	const { xs, c } = solved.pieces;
 	let lowest = 0;
+	// x·0 is 0 for a finite x and NaN otherwise: the curve's part of assertFinite, read here
+	let curveZero = 0;
 	// the points run left to right, so the segment only ever moves forward
 	for (let i = 0, seg = 0; i < n; i++) {
 		const x = (model.length * i) / (n - 1);
 		while (seg < xs.length - 2 && xs[seg + 1] <= x) seg++;
 		const y = pieceAt(c, seg, x - xs[seg]);
 		if (y < lowest) lowest = y;
+		curveZero += x * 0 + y * 0;
 		curve[i] = [x, y];
 	}
 	const uplift = lowest < -Math.max(1e-4, 0.05 * g.sag);
@@ -347,7 +350,7 @@ export function analyzeInput(input: ShelfInput): ShelfResult {
 		material: { id: model.panel.id, name: model.panel.name },
 		warnings: cautions(model, strength.utilisation, uplift)
 	};
-	assertFinite(result);
+	if (finiteZero(result) + curveZero !== 0) findNonFinite(result, 'result');
 	return result;
 }
 
@@ -358,6 +361,14 @@ export function analyzeInput(input: ShelfInput): ShelfResult {
  * NaN in each number of a result in turn and expects this to find it.
  */
 export function assertFinite(r: ShelfResult): void {
+	let z = finiteZero(r);
+	const { curve } = r;
+	for (let i = 0; i < curve.length; i++) z += curve[i][0] * 0 + curve[i][1] * 0;
+	if (z !== 0) findNonFinite(r, 'result');
+}
+
+/** 0 when every number of the result but the curve is finite, NaN otherwise. */
+function finiteZero(r: ShelfResult): number {
 	const { sag, limit, strength, load, section } = r;
 	let z =
 		r.span * 0 +
@@ -377,9 +388,7 @@ export function assertFinite(r: ShelfResult): void {
 	for (const x of r.supports) z += x * 0;
 	for (const s of limit.spans) z += (s.from + s.to + s.sag + s.at + s.allowed) * 0;
 	for (const x of r.reactions) z += (x.at + x.force + x.moment) * 0;
-	const { curve } = r;
-	for (let i = 0; i < curve.length; i++) z += curve[i][0] * 0 + curve[i][1] * 0;
-	if (z !== 0) findNonFinite(r, 'result');
+	return z;
 }
 
 function findNonFinite(value: unknown, path: string): void {

@@ -104,16 +104,9 @@ type Quantity = 'v' | 'psi' | 'm' | 'shear';
 
 /**
  * Write the row of coefficients of the unknowns [M0, V0, C1, C2, R…] of a quantity at x into
- * a[o … o + n − 1] (already zero), and return its load constant.
+ * a[o … o + n − 1] (already zero). The row hangs on the beam only, not on its loads.
  */
-function writeRow(
-	model: BeamModel,
-	loads: BeamLoads,
-	q: Quantity,
-	x: number,
-	a: Float64Array,
-	o: number
-): number {
+function writeRow(model: BeamModel, q: Quantity, x: number, a: Float64Array, o: number): void {
 	const { ei, ga, inner } = model;
 	const shearFlex = Number.isFinite(ga) ? 1 / ga : 0;
 	if (q === 'v') {
@@ -125,9 +118,7 @@ function writeRow(
 			const d = pos(x - inner[j]);
 			a[o + 4 + j] = (-d * d * d) / 6 / ei + d * shearFlex;
 		}
-		return loadF(loads, x) / ei + loadM(loads, x) * shearFlex;
-	}
-	if (q === 'psi') {
+	} else if (q === 'psi') {
 		a[o] = -x / ei;
 		a[o + 1] = (-x * x) / 2 / ei;
 		a[o + 2] = 1;
@@ -135,16 +126,24 @@ function writeRow(
 			const d = pos(x - inner[j]);
 			a[o + 4 + j] = (-d * d) / 2 / ei;
 		}
-		return loadFp(loads, x) / ei;
-	}
-	if (q === 'm') {
+	} else if (q === 'm') {
 		a[o] = 1;
 		a[o + 1] = x;
 		for (let j = 0; j < inner.length; j++) a[o + 4 + j] = pos(x - inner[j]);
-		return loadM(loads, x);
+	} else {
+		a[o + 1] = 1;
+		for (let j = 0; j < inner.length; j++) a[o + 4 + j] = x >= inner[j] ? 1 : 0;
 	}
-	a[o + 1] = 1;
-	for (let j = 0; j < inner.length; j++) a[o + 4 + j] = x >= inner[j] ? 1 : 0;
+}
+
+/** The loads' part of a quantity at x (the constant of its row). */
+function rowConstant(model: BeamModel, loads: BeamLoads, q: Quantity, x: number): number {
+	if (q === 'v') {
+		const shearFlex = Number.isFinite(model.ga) ? 1 / model.ga : 0;
+		return loadF(loads, x) / model.ei + loadM(loads, x) * shearFlex;
+	}
+	if (q === 'psi') return loadFp(loads, x) / model.ei;
+	if (q === 'm') return loadM(loads, x);
 	return loadV(loads, x);
 }
 
@@ -156,38 +155,66 @@ const END_EQUATIONS: Record<EndCondition, [Quantity, Quantity]> = {
 
 /**
  * Gaussian elimination with partial pivoting on an n × n matrix stored row by row; rows are
- * scaled first (the units differ). Overwrites a and b and writes the solution into x.
+ * scaled first (the units differ). Overwrites a with its factors: U on and above the diagonal,
+ * the multipliers below it (rows swapped along with the rest of a row); scale[i] is row i's
+ * scale and swaps[k] the row swapped into place k, so that substitute() can solve for any right
+ * side with the same arithmetic as eliminating it alongside.
  */
-function solveFlat(a: Float64Array, b: Float64Array, n: number, x: Float64Array): void {
+function factor(a: Float64Array, n: number, scale: Float64Array, swaps: Int32Array): void {
 	for (let i = 0; i < n; i++) {
-		let scale = 0;
-		for (let j = 0; j < n; j++) scale = Math.max(scale, Math.abs(a[i * n + j]));
-		if (scale > 0) {
-			for (let j = 0; j < n; j++) a[i * n + j] /= scale;
-			b[i] /= scale;
-		}
+		let s = 0;
+		for (let j = 0; j < n; j++) s = Math.max(s, Math.abs(a[i * n + j]));
+		scale[i] = s;
+		if (s > 0) for (let j = 0; j < n; j++) a[i * n + j] /= s;
 	}
 	for (let k = 0; k < n; k++) {
 		let p = k;
 		for (let i = k + 1; i < n; i++) if (Math.abs(a[i * n + k]) > Math.abs(a[p * n + k])) p = i;
+		swaps[k] = p;
 		if (p !== k) {
 			for (let j = 0; j < n; j++) {
 				const t = a[k * n + j];
 				a[k * n + j] = a[p * n + j];
 				a[p * n + j] = t;
 			}
-			const t = b[k];
-			b[k] = b[p];
-			b[p] = t;
 		}
 		const pivot = a[k * n + k];
 		if (pivot === 0) throw new Error('The supports do not hold the shelf (a mechanism).');
 		for (let i = k + 1; i < n; i++) {
 			const f = a[i * n + k] / pivot;
+			a[i * n + k] = f;
 			if (f === 0) continue;
-			for (let j = k; j < n; j++) a[i * n + j] -= f * a[k * n + j];
-			b[i] -= f * b[k];
+			for (let j = k + 1; j < n; j++) a[i * n + j] -= f * a[k * n + j];
 		}
+	}
+}
+
+/** Solve the factored system for the right side b (overwritten) into x. */
+function substitute(
+	a: Float64Array,
+	n: number,
+	scale: Float64Array,
+	swaps: Int32Array,
+	b: Float64Array,
+	x: Float64Array
+): void {
+	for (let i = 0; i < n; i++) if (scale[i] > 0) b[i] /= scale[i];
+	for (let k = 0; k < n; k++) {
+		const p = swaps[k];
+		if (p !== k) {
+			const t = b[k];
+			b[k] = b[p];
+			b[p] = t;
+		}
+	}
+	// each row takes off its multiples of the pivot rows above it, in the order of elimination
+	for (let i = 1; i < n; i++) {
+		let s = b[i];
+		for (let k = 0; k < i; k++) {
+			const f = a[i * n + k];
+			if (f !== 0) s -= f * b[k];
+		}
+		b[i] = s;
 	}
 	for (let i = n - 1; i >= 0; i--) {
 		let s = b[i];
@@ -196,10 +223,14 @@ function solveFlat(a: Float64Array, b: Float64Array, n: number, x: Float64Array)
 	}
 }
 
-/** Scratch space of the linear solve, reused by every solve (the engine runs on one thread). */
+/** Scratch space of the linear solve, reused by every solve (the engine runs on one thread); it
+ * holds the factors of the last beam solved, for solveAgain. */
 let scratchA = new Float64Array(16 * 16);
 let scratchB = new Float64Array(16);
 let scratchX = new Float64Array(16);
+let scratchScale = new Float64Array(16);
+let scratchSwaps = new Int32Array(16);
+let factored: BeamModel | undefined;
 
 export function solveBeam(model: BeamModel, loads: BeamLoads): BeamSolution {
 	const n = 4 + model.inner.length;
@@ -207,20 +238,43 @@ export function solveBeam(model: BeamModel, loads: BeamLoads): BeamSolution {
 		scratchA = new Float64Array(n * n);
 		scratchB = new Float64Array(n);
 		scratchX = new Float64Array(n);
+		scratchScale = new Float64Array(n);
+		scratchSwaps = new Int32Array(n);
 	}
 	const a = scratchA;
-	const b = scratchB;
 	a.fill(0, 0, n * n);
 	const left = END_EQUATIONS[model.left];
 	const right = END_EQUATIONS[model.right];
-	b[0] = -writeRow(model, loads, left[0], 0, a, 0);
-	b[1] = -writeRow(model, loads, left[1], 0, a, n);
-	b[2] = -writeRow(model, loads, right[0], model.length, a, 2 * n);
-	b[3] = -writeRow(model, loads, right[1], model.length, a, 3 * n);
+	factored = undefined;
+	writeRow(model, left[0], 0, a, 0);
+	writeRow(model, left[1], 0, a, n);
+	writeRow(model, right[0], model.length, a, 2 * n);
+	writeRow(model, right[1], model.length, a, 3 * n);
+	for (let j = 0; j < model.inner.length; j++) writeRow(model, 'v', model.inner[j], a, (4 + j) * n);
+	factor(a, n, scratchScale, scratchSwaps);
+	factored = model;
+	return solveAgain(model, loads);
+}
+
+/**
+ * The beam solved last (by solveBeam, the same object) under other loads: its equations are
+ * factored already, only their right side changes (an analysis solves the instant beam under all
+ * the loads and under the shelf's own weight alone).
+ */
+export function solveAgain(model: BeamModel, loads: BeamLoads): BeamSolution {
+	if (factored !== model) throw new Error('solveAgain: not the beam solved last');
+	const n = 4 + model.inner.length;
+	const b = scratchB;
+	const left = END_EQUATIONS[model.left];
+	const right = END_EQUATIONS[model.right];
+	b[0] = -rowConstant(model, loads, left[0], 0);
+	b[1] = -rowConstant(model, loads, left[1], 0);
+	b[2] = -rowConstant(model, loads, right[0], model.length);
+	b[3] = -rowConstant(model, loads, right[1], model.length);
 	for (let j = 0; j < model.inner.length; j++)
-		b[4 + j] = -writeRow(model, loads, 'v', model.inner[j], a, (4 + j) * n);
+		b[4 + j] = -rowConstant(model, loads, 'v', model.inner[j]);
 	const u = scratchX;
-	solveFlat(a, b, n, u);
+	substitute(scratchA, n, scratchScale, scratchSwaps, b, u);
 	const inner: number[] = new Array(n - 4);
 	for (let j = 4; j < n; j++) inner[j - 4] = u[j];
 	return { model, loads, m0: u[0], v0: u[1], c1: u[2], c2: u[3], inner };

@@ -41,31 +41,39 @@ export interface SectionProperties {
 /** Shear correction factor of a rectangle, 5/6 (Timoshenko beam theory). */
 export const SHEAR_CORRECTION_RECTANGLE = 5 / 6;
 
-function bending(parts: SectionPart[], modulus: (p: SectionPart) => number) {
+/** EI and the neutral axis of the parts with their moduli given as instant (E) or long-term
+ * (E/(1 + k_def)). Written with multiplications and without a callback: it runs on every step of
+ * the thickness and strip searches. */
+function bending(parts: SectionPart[], longTerm: boolean) {
 	let ea = 0;
 	let eay = 0;
-	for (const p of parts) {
-		const e = modulus(p) * p.width * p.height;
+	for (let i = 0; i < parts.length; i++) {
+		const p = parts[i];
+		const e = (longTerm ? p.modulusPa / (1 + p.kdef) : p.modulusPa) * p.width * p.height;
 		ea += e;
 		eay += e * (p.top + p.height / 2);
 	}
 	const na = eay / ea;
 	let ei = 0;
-	for (const p of parts) {
+	for (let i = 0; i < parts.length; i++) {
+		const p = parts[i];
 		const d = p.top + p.height / 2 - na;
-		ei += modulus(p) * ((p.width * p.height ** 3) / 12 + p.width * p.height * d * d);
+		const h = p.height;
+		const modulus = longTerm ? p.modulusPa / (1 + p.kdef) : p.modulusPa;
+		ei += modulus * ((p.width * (h * h * h)) / 12 + p.width * h * d * d);
 	}
 	return { ei, na };
 }
 
 export function sectionProperties(parts: SectionPart[], gravity: number): SectionProperties {
-	const instant = bending(parts, (p) => p.modulusPa);
-	const longTerm = bending(parts, (p) => p.modulusPa / (1 + p.kdef));
+	const instant = bending(parts, false);
+	const longTerm = bending(parts, true);
 	let ga = 0;
 	let gaLong = 0;
 	let area = 0;
 	let weight = 0;
-	for (const p of parts) {
+	for (let i = 0; i < parts.length; i++) {
+		const p = parts[i];
 		const a = p.width * p.height;
 		ga += SHEAR_CORRECTION_RECTANGLE * p.shearModulusPa * a;
 		gaLong += (SHEAR_CORRECTION_RECTANGLE * p.shearModulusPa * a) / (1 + p.kdef);
