@@ -148,7 +148,7 @@ async function both(
 	const before = taken.length;
 	const fast = await send(path, body, { ...headers, 'x-forwarded-for': freshAddress() });
 	expect(taken.slice(before), 'the fast path answered').toEqual([path]);
-	const routed = await send(`${path}?via=app`, body, {
+	const routed = await send(`${path}${path.includes('?') ? '&' : '?'}via=app`, body, {
 		...headers,
 		'x-forwarded-for': freshAddress()
 	});
@@ -201,6 +201,44 @@ describe('the compute fast path answers as the routes do', () => {
 			expect(fast.headers['x-frame-options']).toBe('DENY');
 			expectSame(fast, routed);
 		});
+
+	it('a shorter curve or none (the curve query): the same answer with only the curve changed', async () => {
+		const full = await both('/api/v1/shelf', JSON.stringify(aShelf));
+		const { curve: fullCurve, ...figures } = JSON.parse(full.fast.text);
+		expect(fullCurve).toHaveLength(101);
+		const none = await both('/api/v1/shelf?curve=none', JSON.stringify(aShelf));
+		expect(none.fast.status).toBe(200);
+		expectSame(none.fast, none.routed);
+		expect(JSON.parse(none.fast.text)).toEqual({ ...figures, curve: [] });
+		expect(none.fast.text.length).toBeLessThan(full.fast.text.length / 2);
+		const eleven = await both('/api/v1/shelf?curve=11', JSON.stringify(aShelf));
+		expectSame(eleven.fast, eleven.routed);
+		const { curve, ...same } = JSON.parse(eleven.fast.text);
+		expect(same).toEqual(figures);
+		// every tenth point of the 101, to rounding: the same curve, fewer points
+		expect(curve).toHaveLength(11);
+		curve.forEach(([x, y]: [number, number], i: number) => {
+			expect(x).toBeCloseTo(fullCurve[10 * i][0], 12);
+			expect(y).toBeCloseTo(fullCurve[10 * i][1], 12);
+		});
+		// the solvers' analysis too
+		const span = await both('/api/v1/shelf/max-span?curve=3', JSON.stringify(noSpan));
+		expectSame(span.fast, span.routed);
+		expect(JSON.parse(span.fast.text).analysis.curve).toHaveLength(3);
+	});
+
+	it('a curve query it cannot read: 422 naming it', async () => {
+		for (const value of ['1', '0', '2002', '2.5', 'short', ''])
+			for (const path of ['/api/v1/shelf', '/api/v1/shelf/max-load']) {
+				const body = path.endsWith('max-load')
+					? { ...aShelf, loads: [], load: { kind: 'area' } }
+					: aShelf;
+				const { fast, routed } = await both(`${path}?curve=${value}`, JSON.stringify(body));
+				expect(fast.status).toBe(422);
+				expect(JSON.parse(fast.text).issues[0].path).toEqual(['curve']);
+				expectSame(fast, routed);
+			}
+	});
 
 	it('a body that is not JSON: 400', async () => {
 		const { fast, routed } = await both('/api/v1/shelf', '{span');
@@ -325,6 +363,21 @@ describe('what the fast path leaves to the app', () => {
 	const body = JSON.stringify(aShelf);
 
 	it('another method, path, query or trailing slash', async () => {
+		// a curve query beside another parameter, or on an endpoint without a curve
+		expect(
+			await declined('/api/v1/shelf?curve=none&x=1', {
+				method: 'POST',
+				body,
+				headers: { 'content-type': 'application/json' }
+			})
+		).toBe(200);
+		expect(
+			await declined('/api/v1/joints?curve=none', {
+				method: 'POST',
+				body: JSON.stringify(aJoint),
+				headers: { 'content-type': 'application/json' }
+			})
+		).toBe(200);
 		expect(await declined('/api/v1/materials', { method: 'GET' })).toBe(200);
 		expect(
 			await declined('/api/v1/shelf?x=1', {

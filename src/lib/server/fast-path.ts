@@ -9,7 +9,8 @@ import { limitCompute } from './rate-limit';
 /**
  * The fast path of the open compute API. The production server (server.js) offers every request to
  * it before SvelteKit's handler; it takes only the common case: a POST of a JSON body with a
- * Content-Length to one of the compute paths exactly (no query, no trailing slash), from an address
+ * Content-Length to one of the compute paths exactly (no query but a lone `curve` parameter on the
+ * shelf endpoints, no trailing slash), from an address
  * found as adapter-node finds it. It answers those as the app would, with the same code: the
  * same per-address rate limit (rate-limit.ts, counted before the body is read), the same shared
  * schema and engine call (compute-api.ts), the same problems and status codes (413, 400, 422, 429,
@@ -108,7 +109,8 @@ async function answer(
 	res: ServerResponse,
 	endpoint: ComputeEndpoint,
 	address: string,
-	length: number
+	length: number,
+	query: string | undefined
 ) {
 	try {
 		const limited = await limitCompute(address);
@@ -123,7 +125,11 @@ async function answer(
 		}
 		const read = parseJsonText(text, req.headers['content-type'], endpoint.schema);
 		if (!read.ok) return sendJson(res, read.status, { error: read.error, issues: read.issues });
-		const result = computeAnswer(endpoint, read.data);
+		const result = computeAnswer(
+			endpoint,
+			read.data,
+			query === undefined ? undefined : new URLSearchParams(query)
+		);
 		sendJson(res, result.status, result.body);
 	} catch (error) {
 		const body = reportError({
@@ -141,8 +147,12 @@ async function answer(
 /** Answer the request here and return true, or return false and leave it to SvelteKit. */
 export const fastPath: FastPath = (req, res) => {
 	if (req.method !== 'POST' || !req.url) return false;
-	const endpoint = COMPUTE_ENDPOINTS.get(req.url);
+	// the path exactly, with no query but a lone `curve` parameter on the endpoints that read it
+	const mark = req.url.indexOf('?');
+	const endpoint = COMPUTE_ENDPOINTS.get(mark < 0 ? req.url : req.url.slice(0, mark));
 	if (!endpoint) return false;
+	const query = mark < 0 ? undefined : req.url.slice(mark + 1);
+	if (query !== undefined && !(endpoint.curve && LONE_CURVE.test(query))) return false;
 	const type = req.headers['content-type'];
 	if (!type || !JSON_TYPE.test(type)) return false;
 	const declared = req.headers['content-length'];
@@ -151,9 +161,12 @@ export const fastPath: FastPath = (req, res) => {
 	if (!declared || !(length > 0) || length > s.bodySizeLimit) return false;
 	const address = clientAddress(req, s);
 	if (!address) return false;
-	void answer(req, res, endpoint, address, length);
+	void answer(req, res, endpoint, address, length, query);
 	return true;
 };
+
+/** A query of one `curve` parameter and nothing else (its value is read as the route reads it). */
+const LONE_CURVE = /^curve=[^&#]*$/;
 
 /** Make the fast path available to server.js (called from the app's init hook). */
 export function registerFastPath() {

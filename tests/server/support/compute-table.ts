@@ -77,8 +77,8 @@ export const aWall = {
 };
 
 type Handler = (e: never) => Response | Promise<Response>;
-const post = (h: unknown, body: unknown) =>
-	(h as Handler)(event({ actor: null, method: 'POST', body }) as never);
+const post = (h: unknown, body: unknown, url?: string) =>
+	(h as Handler)(event({ actor: null, method: 'POST', body, url }) as never);
 const get = (h: unknown) => (h as Handler)(event({ actor: null }) as never);
 
 export interface ComputeRow {
@@ -98,6 +98,24 @@ export const computeTable: ComputeRow[] = [
 		label: 'a field wrong',
 		status: 422,
 		call: () => post(shelf.POST, { ...aShelf, span: 'long' })
+	},
+	{
+		route: 'POST /shelf',
+		label: 'without its curve',
+		status: 200,
+		call: () => post(shelf.POST, aShelf, '/api/v1/shelf?curve=none')
+	},
+	{
+		route: 'POST /shelf',
+		label: 'a curve query it cannot read',
+		status: 422,
+		call: () => post(shelf.POST, aShelf, '/api/v1/shelf?curve=1')
+	},
+	{
+		route: 'POST /shelf/max-span',
+		label: 'solved, an 11-point curve',
+		status: 200,
+		call: () => post(maxSpan.POST, noSpan, '/api/v1/shelf/max-span?curve=11')
 	},
 	{
 		route: 'POST /shelf/max-span',

@@ -273,6 +273,10 @@ function cautions(model: ShelfModel, utilisation: number, uplift: boolean): Shel
 	return out;
 }
 
+/** Points at which a result looks for uplift (a shelf lifting off a support), however few points
+ * its curve has: the default curve's (101). */
+const UPLIFT_POINTS = 101;
+
 /** The whole result from a validated request. */
 export function analyzeInput(input: ShelfInput): ShelfResult {
 	const model = buildModel(input);
@@ -291,15 +295,26 @@ export function analyzeInput(input: ShelfInput): ShelfResult {
 	const n = input.options.curvePoints;
 	const curve: [number, number][] = new Array(n);
 	const { xs, c } = solved.pieces;
+	// Uplift is looked for at UPLIFT_POINTS points at least, however few the curve has.
+	const scan = Math.max(n, UPLIFT_POINTS);
 	let lowest = 0;
 	// x·0 is 0 for a finite x and NaN otherwise: the curve's part of assertFinite, read here
 	let curveZero = 0;
 	// the points run left to right, so the segment only ever moves forward
-	for (let i = 0, seg = 0; i < n; i++) {
-		const x = (model.length * i) / (n - 1);
+	for (let i = 0, seg = 0; i < scan; i++) {
+		const x = (model.length * i) / (scan - 1);
 		while (seg < xs.length - 2 && xs[seg + 1] <= x) seg++;
 		const y = pieceAt(c, seg, x - xs[seg]);
 		if (y < lowest) lowest = y;
+		if (scan !== n) continue;
+		curveZero += x * 0 + y * 0;
+		curve[i] = [x, y];
+	}
+	// a shorter curve than the scan: its own points
+	for (let i = 0, seg = 0; scan !== n && i < n; i++) {
+		const x = n > 1 ? (model.length * i) / (n - 1) : 0;
+		while (seg < xs.length - 2 && xs[seg + 1] <= x) seg++;
+		const y = pieceAt(c, seg, x - xs[seg]);
 		curveZero += x * 0 + y * 0;
 		curve[i] = [x, y];
 	}

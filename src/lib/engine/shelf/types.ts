@@ -70,7 +70,8 @@ export interface ShelfOptions {
 	shearDeflection: boolean;
 	/** divide the modulus of rupture by this to get the allowed bending stress */
 	safetyFactor: number;
-	/** points on the deflected curve */
+	/** points on the deflected curve of the result: 0 for none, otherwise at least 2 (the forms
+	 * and the request schema take 101 to 2001; the compute API's `curve` query asks for fewer) */
 	curvePoints: number;
 }
 

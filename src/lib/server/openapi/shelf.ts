@@ -14,6 +14,7 @@ import {
 	shelfAnalysisSchema
 } from '$lib/schemas/responses/shelf';
 import type { z } from 'zod';
+import { curveQuerySchema } from '$lib/server/compute-api';
 import type { ApiOperation } from './types';
 
 const computed = (schema: z.ZodType) => ({
@@ -29,6 +30,7 @@ export const shelfOperations: ApiOperation[] = [
 		summary: 'Analyse a shelf: instant and long-term sag, limit check, stress, reactions, curve',
 		tag: 'shelf',
 		body: shelfRequestSchema,
+		query: curveQuerySchema,
 		auth: 'none',
 		rateLimited: true,
 		responses: computed(shelfAnalysisSchema)
@@ -40,6 +42,7 @@ export const shelfOperations: ApiOperation[] = [
 		summary: 'The longest span that meets the limit (shear, creep and self-weight included)',
 		tag: 'shelf',
 		body: maxSpanRequestSchema,
+		query: curveQuerySchema,
 		auth: 'none',
 		rateLimited: true,
 		responses: computed(maxSpanResultSchema)
@@ -51,6 +54,7 @@ export const shelfOperations: ApiOperation[] = [
 		summary: 'The thinnest stocked (or given) thickness that meets the limit',
 		tag: 'shelf',
 		body: minThicknessRequestSchema,
+		query: curveQuerySchema,
 		auth: 'none',
 		rateLimited: true,
 		responses: computed(minThicknessResultSchema)
@@ -62,6 +66,7 @@ export const shelfOperations: ApiOperation[] = [
 		summary: 'The smallest strip (front, back or below) that makes a shelf meet the limit',
 		tag: 'shelf',
 		body: minEdgeRequestSchema,
+		query: curveQuerySchema,
 		auth: 'none',
 		rateLimited: true,
 		responses: computed(minEdgeResultSchema)
@@ -74,6 +79,7 @@ export const shelfOperations: ApiOperation[] = [
 			'The largest load of a given shape the shelf carries within the limit and its strength',
 		tag: 'shelf',
 		body: maxLoadRequestSchema,
+		query: curveQuerySchema,
 		auth: 'none',
 		rateLimited: true,
 		responses: computed(maxLoadResultSchema)
