@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # npm run bench: the Node benches (vitest bench), then a fresh build, the gzipped JavaScript the
-# shelf check route loads, the browser bench (span input to screen in Chromium), and the compute API
-# against a bare node:http server (tests/bench/api/api.ts).
+# shelf check route loads, the browser bench (span input to screen in Chromium), Lighthouse's mobile
+# scores of the shelf check anyone can try (tests/bench/lighthouse.ts), and the compute API against
+# a bare node:http server (tests/bench/api/api.ts).
 # The engine rows of issue 12 (solvers, analysis, case check beside their goals and plain
 # closed-form loops) come from tests/bench/engine-rows.ts; its list rows (a project's analyses at 200 and
 # 10,000) from tests/bench/list-rows.ts.
@@ -26,4 +27,5 @@ else
 	echo "route-size: tests/bench/route-size.ts not present yet, skipped"
 fi
 npx tsx tests/bench/browser/shelf-input.ts
+npx tsx tests/bench/lighthouse.ts
 npx tsx tests/bench/api/api.ts
