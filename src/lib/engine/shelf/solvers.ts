@@ -69,10 +69,13 @@ export function maxSpanInput(input: MaxSpanInput): MaxSpanResult {
 		for (let i = 0; i < base.length; i++) out[i] = base[i] * s;
 		return out;
 	};
+	// a request parsed without a span has no span key: give it one first, so each try below only
+	// overrides keys (adding a key to a spread copy is slow on Node 20, issue 12)
+	const withSpan: ShelfInput = 'span' in input ? input : { span: undefined, ...input };
 	const at = (total: number): ShelfInput =>
-		typeof input.support === 'object'
-			? { ...input, span: undefined, support: { ...input.support, spans: spansAt(total) } }
-			: { ...input, span: total };
+		typeof withSpan.support === 'object'
+			? { ...withSpan, span: undefined, support: { ...withSpan.support, spans: spansAt(total) } }
+			: { ...withSpan, span: total };
 	// the section, materials and limit do not hang on the span: build them once
 	const model = buildModel(at(1));
 	const g = (total: number) => marginOfModel(relayOut(model, spansAt(total)));
@@ -120,7 +123,10 @@ export interface MinThicknessResult {
 /** The thinnest stocked (or given) thickness that meets the limit. */
 export function minThicknessInput(input: MinThicknessInput): MinThicknessResult {
 	// the request with a thickness in it (tried, then replaced by each candidate's)
-	const shelf: ShelfInput = { ...input, thickness: 0.019 };
+	// key first, then set: a request parsed without a thickness has no thickness key, and adding a
+	// key to a spread copy is slow on Node 20 (issue 12)
+	const shelf: ShelfInput = { thickness: 0.019, ...input } as ShelfInput;
+	shelf.thickness = 0.019;
 	const lib = buildModel(shelf).panel;
 	const candidates = (
 		input.candidates?.map((t) => ({ thickness: t, label: `${(t * 1000).toFixed(1)} mm` })) ??
@@ -176,7 +182,7 @@ export function minThicknessInput(input: MinThicknessInput): MinThicknessResult 
 		label: chosen?.label ?? null,
 		exact,
 		tried,
-		analysis: chosen ? analyzeInput({ ...input, thickness: chosen.thickness }) : null
+		analysis: chosen ? analyzeInput({ ...shelf, thickness: chosen.thickness }) : null
 	};
 }
 
