@@ -11,10 +11,10 @@ import { api, readJson } from '$lib/server/http';
  */
 export function computeRoute(path: string): RequestHandler {
 	const endpoint = computeEndpoint(path);
-	return api(async ({ request, url }) => {
+	return api(async ({ request }) => {
 		const body = await readJson(request, endpoint.schema);
 		if (!body.ok) return body.response;
-		const answer = computeAnswer(endpoint, body.data, url.searchParams);
+		const answer = computeAnswer(endpoint, body.data, new URL(request.url).searchParams);
 		return json(answer.body, { status: answer.status });
 	});
 }
