@@ -13,7 +13,7 @@ import { join } from 'node:path';
 const work = mkdtempSync(join(tmpdir(), 'spanwright-list-bench-'));
 process.env.SPANWRIGHT_DATA_DIR = work;
 
-const { getDb, oneRow } = await import('../../src/lib/server/db');
+const { closeDb, dbReady, getDb, oneRow } = await import('../../src/lib/server/db');
 const { analyses, memberships, users, workshops } = await import('../../src/lib/server/db/tables');
 const { createProject } = await import('../../src/lib/server/projects');
 const { createAnalysis, listAnalyses } = await import('../../src/lib/server/analyses');
@@ -102,6 +102,7 @@ async function time(work: () => Promise<unknown>) {
 	return median(ms);
 }
 
+await dbReady(); // migrated (at once on SQLite; PostgreSQL migrates on open)
 const rows: string[][] = [];
 const { actor: owner, workshopId } = await actor();
 for (const n of [200, 10_000]) {
@@ -134,4 +135,5 @@ console.log(`\nAnalyses list (${engine}, median of ${ROUNDS}, ms)`);
 const width = Math.max(...rows.map((r) => r[0].length));
 for (const [label, ms, goal] of rows)
 	console.log(`  ${label.padEnd(width)}  ${ms.padStart(8)}  goal ${goal}`);
+await closeDb();
 rmSync(work, { recursive: true, force: true });

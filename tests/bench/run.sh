@@ -18,6 +18,8 @@ flock 9
 npx vitest bench --run
 bash tests/bench/engine-rows.sh
 npx tsx tests/bench/list-rows.ts
+# the same rows on PostgreSQL, in a throwaway cluster
+bash tests/support/with-postgres.sh npx tsx tests/bench/list-rows.ts
 npx vite build --logLevel warn
 if [ -f tests/bench/route-size.ts ]; then
 	npx tsx tests/bench/route-size.ts
