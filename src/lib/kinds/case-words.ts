@@ -38,3 +38,10 @@ export function describeCase(r: Pick<CaseResult, 'pass' | 'margins' | 'summary'>
 export function otherChecks(n: number) {
 	return n === 1 ? 'The other check, passing' : `The other ${n} checks, all passing`;
 }
+
+/** The wall screen's headline: every case's checks at once. */
+export function wallHeadline(cases: number, failures: number) {
+	return failures === 0
+		? `Every check across the ${cases} cases passes.`
+		: `${count(failures, 'check')} across the wall fail${failures === 1 ? 's' : ''}; the worst come first.`;
+}

@@ -195,6 +195,17 @@ export function computeParsed<S extends z.ZodType, R>(
 	};
 }
 
+/** Parse, then compute, for a screen: the parsed input and the result, or the issues by field. */
+export function runKind<S extends z.ZodType, R>(
+	spec: KindSpec<S, R>,
+	raw: unknown
+): { ok: true; input: z.output<S>; result: R } | { ok: false; issues: Issue[] } {
+	const parsed = spec.schema.safeParse(raw);
+	if (!parsed.success) return { ok: false, issues: fieldIssues(parsed.error) };
+	const run = spec.compute(parsed.data);
+	return run.ok ? { ok: true, input: parsed.data, result: run.result } : run;
+}
+
 const OPS: Record<AnalysisKind, KindOps> = {
 	shelf: opsOf(shelfKind),
 	comparison: opsOf(comparisonKind),
