@@ -3,7 +3,7 @@
  * as the shelf is and once with one thing changed. Nothing here is a remembered ratio: the words
  * follow whatever the engine answers (16 for a span doubled under books, 8 under one weight).
  */
-import { formatNumber, materials } from '../engine/index';
+import { formatNumber } from '../engine/index';
 import { bendingSag, runLab, shortName, type LabState } from './lab-state';
 
 export type LawVariable = 'span' | 'thickness' | 'depth' | 'material' | 'support' | 'time';
@@ -108,18 +108,4 @@ export function lawsFor(s: LabState, previousMaterial: string | null = null): La
 		ratio: creep
 	});
 	return laws;
-}
-
-/** Every library material's sag for this shelf, stiffest first: the material chart's points. */
-export function materialSags(
-	s: LabState
-): { id: string; name: string; modulusPa: number; sagM: number }[] {
-	return materials
-		.map((m) => ({
-			id: m.id,
-			name: shortName(m.id),
-			modulusPa: m.modulusAlongPa,
-			sagM: runLab({ ...s, material: m.id }).sagM
-		}))
-		.sort((a, b) => a.sagM - b.sagM);
 }

@@ -1,5 +1,3 @@
-import { z } from 'zod';
-
 export const LENGTH_UNITS = ['frac16', 'frac32', 'frac64', 'decimal-in', 'mm'] as const;
 export type LengthUnit = (typeof LENGTH_UNITS)[number];
 
@@ -10,5 +8,3 @@ export const LENGTH_UNIT_LABELS: Record<LengthUnit, string> = {
 	'decimal-in': 'Decimal inches',
 	mm: 'Millimetres'
 };
-
-export const lengthUnitSchema = z.object({ lengthUnit: z.enum(LENGTH_UNITS) });

@@ -18,10 +18,6 @@ export function listCaughtMail(dir = defaultMailDir()): CaughtMail[] {
 		.map((f) => JSON.parse(readFileSync(join(dir, f), 'utf8')) as CaughtMail);
 }
 
-export function readCaughtMail(id: string, dir = defaultMailDir()): CaughtMail | null {
-	return listCaughtMail(dir).find((m) => m.id === id) ?? null;
-}
-
 /** The newest message to this address (with its links), or null. */
 export function latestMailTo(email: string, dir = defaultMailDir()): CaughtMail | null {
 	const to = email.trim().toLowerCase();
