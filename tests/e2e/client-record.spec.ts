@@ -113,6 +113,9 @@ test('a share link opens without an account and answers 404 once closed', async 
 test('the demo client reaches her own project only: a crawl finds no other client', async ({
 	page
 }) => {
+	// forty pages, each waited on until the network is idle: more than the default minute on a busy
+	// two-core machine (the crawl of every role in crawl.spec.ts allows the same)
+	test.setTimeout(180_000);
 	await signIn(page, CLIENT);
 	const seen = new Set<string>();
 	const queue = ['/projects'];
