@@ -5,7 +5,7 @@
 import type { CaseResult } from '../engine/case/types';
 import { count, percent } from './words';
 
-export interface CaseSentences {
+interface CaseSentences {
 	headline: string;
 	summary: string;
 	pass: boolean;

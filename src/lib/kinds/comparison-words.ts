@@ -5,7 +5,7 @@
 import { formatLength } from '../engine/units/length';
 import { count, percent, type ReaderUnit } from './words';
 
-export interface CandidateOutcome {
+interface CandidateOutcome {
 	label: string;
 	pass: boolean;
 	sagM: number;

@@ -15,7 +15,7 @@ import type { EngineRun } from './registry';
 
 export const comparisonSchema = comparisonRequestSchema;
 
-export interface ComparisonCandidateResult {
+interface ComparisonCandidateResult {
 	label: string;
 	material: ShelfResult['material'];
 	thickness: number;

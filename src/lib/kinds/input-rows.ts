@@ -74,7 +74,7 @@ export function shelfSettingRows(
 	return rows;
 }
 
-export function edgesWords(edges: ShelfInput['edges'], unit: ReaderUnit) {
+function edgesWords(edges: ShelfInput['edges'], unit: ReaderUnit) {
 	if (!edges.length) return 'None';
 	const len = (m: number) => formatLength(m, { unit });
 	return edges

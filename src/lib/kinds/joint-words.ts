@@ -14,7 +14,7 @@ const FASTENER_WORDS: Record<JointPlan['fastener'], [string, string]> = {
 	dado: ['dado', 'dados']
 };
 
-export const fastenerCount = (fastener: JointPlan['fastener'], n: number) =>
+const fastenerCount = (fastener: JointPlan['fastener'], n: number) =>
 	count(n, ...FASTENER_WORDS[fastener]);
 
 export interface JointSentences {

@@ -14,7 +14,7 @@ export const ANALYSIS_KINDS = [
 ] as const;
 export type AnalysisKind = (typeof ANALYSIS_KINDS)[number];
 
-export interface KindName {
+interface KindName {
 	/** what a saved analysis of this kind is called in lists and headings */
 	label: string;
 	/** the project page's link to start one, in the trade's words */

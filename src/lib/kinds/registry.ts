@@ -38,7 +38,7 @@ export interface Issue {
 }
 export type EngineRun<R> = { ok: true; result: R } | { ok: false; issues: Issue[] };
 
-export interface KindSpec<S extends z.ZodType, R> {
+interface KindSpec<S extends z.ZodType, R> {
 	schema: S;
 	/** run the engine on a parsed input; engine refusals come back as issues */
 	compute(input: z.output<S>): EngineRun<R>;
@@ -69,7 +69,7 @@ const analyzeParsed = safely(analyzeInput);
 const isBrief = (input: unknown) =>
 	typeof input === 'object' && input !== null && 'duration' in input && input.duration === 'short';
 
-export const shelfKind: KindSpec<typeof shelfRequestSchema, ShelfResult> = {
+const shelfKind: KindSpec<typeof shelfRequestSchema, ShelfResult> = {
 	schema: shelfRequestSchema,
 	compute: (input) => {
 		const run = analyzeParsed(input);
@@ -81,7 +81,7 @@ export const shelfKind: KindSpec<typeof shelfRequestSchema, ShelfResult> = {
 	inputRows: shelfRows
 };
 
-export const comparisonKind: KindSpec<typeof comparisonSchema, ComparisonResult> = {
+const comparisonKind: KindSpec<typeof comparisonSchema, ComparisonResult> = {
 	schema: comparisonSchema,
 	compute: computeComparison,
 	pass: (r) => r.candidates.some((c) => c.pass),
@@ -118,7 +118,7 @@ export const stabilityKind: KindSpec<typeof stabilityShape, StabilityResult> = {
 	inputRows: stabilityRows
 };
 
-export const caseKind: KindSpec<typeof caseDesignSchema, CaseResult> = {
+const caseKind: KindSpec<typeof caseDesignSchema, CaseResult> = {
 	schema: caseDesignSchema,
 	compute: (input) => engine(() => checkCaseSI(input)),
 	pass: (r) => r.pass,
@@ -127,7 +127,7 @@ export const caseKind: KindSpec<typeof caseDesignSchema, CaseResult> = {
 	inputRows: (input) => plainRows(input)
 };
 
-export const wallKind: KindSpec<typeof wallDesignSchema, WallResult> = {
+const wallKind: KindSpec<typeof wallDesignSchema, WallResult> = {
 	schema: wallDesignSchema,
 	compute: (input) => engine(() => checkWall(toWallDesign(input))),
 	pass: (r) => r.pass,
@@ -147,7 +147,7 @@ function plainRows(input: object): [string, string][] {
 
 // ---- the same operations for a kind chosen at run time (the API, the list, the history) ----
 
-export type Computation =
+type Computation =
 	| { ok: true; input: unknown; result: unknown; pass: boolean | null; engineVersion: string }
 	| { ok: false; issues: Issue[] };
 
@@ -180,7 +180,7 @@ function opsOf<S extends z.ZodType, R>(spec: KindSpec<S, R>): KindOps {
 }
 
 /** Compute an input that has already passed this kind's schema (a superforms save). */
-export function computeParsed<S extends z.ZodType, R>(
+function computeParsed<S extends z.ZodType, R>(
 	spec: KindSpec<S, R>,
 	input: z.output<S>
 ): Computation {

@@ -35,7 +35,7 @@ export interface ShelfSentences {
 	pass: boolean;
 }
 
-export interface ShelfWording {
+interface ShelfWording {
 	/** what the load is, for "under the same books" */
 	contents?: string;
 	cantilever?: boolean;

@@ -19,7 +19,7 @@ export interface StabilitySentences {
 }
 
 /** Front edges hold (or the restraint does), and a case that must be anchored is. */
-export function stabilityPasses(r: StabilityResult) {
+function stabilityPasses(r: StabilityResult) {
 	const edgesHold = r.frontEdgeLoads.every((l) => l.passF2057) || r.restraint.adequate;
 	return edgesHold && (!r.anchoring.required || r.restraint.adequate);
 }

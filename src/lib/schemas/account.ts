@@ -13,7 +13,7 @@ export const emailField = z
 	.check(z.email('Enter an e-mail address such as name@example.com.'));
 
 // Long passphrases are welcome; the upper bound only keeps hashing cheap for the server.
-export const newPasswordField = z
+const newPasswordField = z
 	.string()
 	.min(10, 'That is shorter than 10 characters.')
 	.max(200, 'Keep the password under 200 characters.');
@@ -34,7 +34,6 @@ export const signUpSchema = z.object({
 	// where the confirmation link lands (e.g. back at an invitation); only paths on this site
 	redirectTo: z.string().max(500).default('')
 });
-export type SignUpInput = z.infer<typeof signUpSchema>;
 
 export const signInSchema = z.object({
 	email: emailField,
@@ -42,7 +41,6 @@ export const signInSchema = z.object({
 	// where to go after signing in; only paths on this site are honoured (see safeRedirectPath in return-path.ts)
 	redirectTo: z.string().max(500).default('')
 });
-export type SignInInput = z.infer<typeof signInSchema>;
 
 export const signInLinkSchema = z.object({
 	email: emailField,

@@ -6,10 +6,7 @@
 import { z } from 'zod';
 import { edgeSchema, materialSchema, shelfRequestSchema } from './shelf';
 import { lengthField } from './quantity';
-import { ANALYSIS_KINDS as analysisKinds, type AnalysisKind } from '../kinds/names';
-
-/** The kinds a project keeps are named once, in src/lib/kinds/names.ts. */
-export type AnalysisKindName = AnalysisKind;
+import { ANALYSIS_KINDS as analysisKinds } from '../kinds/names';
 
 const analysisName = z
 	.string()
@@ -26,7 +23,7 @@ const {
 void _material;
 void _thickness;
 
-export const comparisonCandidateSchema = z.object({
+const comparisonCandidateSchema = z.object({
 	material: materialSchema,
 	thickness: lengthField({
 		bound: 'positive',

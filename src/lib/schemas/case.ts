@@ -18,7 +18,7 @@ const place = (description: string) =>
 /** How a shelf, top or bottom is joined to the case sides. */
 export const caseJointSchema = z.enum(['biscuit', 'pocket-screw', 'screw', 'dado']);
 
-export const panelSchema = z.object({
+const panelSchema = z.object({
 	material: materialSchema,
 	thickness: thickness('actual thickness')
 });
@@ -34,7 +34,7 @@ const endPanelSchema = z.object({
 	loads: z.array(loadSchema).max(20).default([])
 });
 
-export const nosingSchema = z.object({
+const nosingSchema = z.object({
 	material: materialSchema,
 	/** vertical size of the strip */
 	height: thickness('height of the nosing'),
@@ -60,7 +60,7 @@ export const caseShelfSchema = z.object({
 	itemHeight: place('height of the items on the shelf').optional()
 });
 
-export const faceFrameSchema = z.object({
+const faceFrameSchema = z.object({
 	material: materialSchema,
 	thickness: thickness('thickness of the frame'),
 	stileWidth: thickness('width of a stile'),

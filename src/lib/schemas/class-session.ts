@@ -38,7 +38,7 @@ export const nicknameSchema = z
 export const joinClassSchema = z.object({ nickname: nicknameSchema });
 
 /** The seat token a phone got when it joined (base64url of 24 random bytes). */
-export const seatTokenSchema = z
+const seatTokenSchema = z
 	.string()
 	.regex(/^[\w-]{32}$/, 'Join the session again.')
 	.meta({ description: 'The seat token returned when joining' });

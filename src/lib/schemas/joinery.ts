@@ -8,10 +8,10 @@ import { STOCK_HOLDING } from '../../../reference/stock-holding';
 import type { JointRequest } from '../engine/joinery/types';
 import { lengthField, quantityField } from './quantity';
 
-export const stockIds = STOCK_HOLDING.map((s) => s.id);
+const stockIds = STOCK_HOLDING.map((s) => s.id);
 
 /** A stock id (the shelf materials' ids where they match) or a stock by kind and specific gravity. */
-export const stockSchema = z.union([
+const stockSchema = z.union([
 	z.enum(stockIds as [string, ...string[]]),
 	z.object({
 		name: z.string().trim().min(1).max(80).optional(),
@@ -20,12 +20,12 @@ export const stockSchema = z.union([
 	})
 ]);
 
-export const jointStockSchema = z.object({
+const jointStockSchema = z.object({
 	material: stockSchema,
 	thickness: lengthField({ max: 0.3, description: 'actual thickness of the piece' })
 });
 
-export const jointKindSchema = z.enum([
+const jointKindSchema = z.enum([
 	'shelf-to-side',
 	'top-to-side',
 	'bottom-to-side',
@@ -33,16 +33,16 @@ export const jointKindSchema = z.enum([
 	'frame-to-case',
 	'divider-to-shelf'
 ]);
-export const fastenerKindSchema = z.enum(['biscuit', 'pocket-screw', 'screw', 'shelf-pin', 'dado']);
+const fastenerKindSchema = z.enum(['biscuit', 'pocket-screw', 'screw', 'shelf-pin', 'dado']);
 
-export const jointDemandSchema = z.object({
+const jointDemandSchema = z.object({
 	/** the reaction this joint carries (from the shelf analysis), e.g. `45 lbf` */
 	shear: quantityField('force', { bound: 'nonnegative', max: 1e6 }).optional(),
 	/** the end moment of a shelf taken as fixed, e.g. `150 lbf in`; its size counts, not its sign */
 	moment: quantityField('moment', { bound: 'any', max: 1e6 }).optional()
 });
 
-export const jointOptionsSchema = z.object({
+const jointOptionsSchema = z.object({
 	count: z.number().int().min(1).max(200).optional(),
 	screwGauge: z.number().int().min(4).max(14).optional(),
 	screwLength: lengthField({ max: 0.3 }).optional(),

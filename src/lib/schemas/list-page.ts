@@ -16,7 +16,7 @@ export const projectPageQuerySchema = z.object({
 });
 export type ProjectPageQuery = z.output<typeof projectPageQuerySchema>;
 
-export const ANALYSIS_PAGE_SORTS = ['updated', 'name', 'kind', 'pass'] as const;
+const ANALYSIS_PAGE_SORTS = ['updated', 'name', 'kind', 'pass'] as const;
 export const analysisPageQuerySchema = z.object({
 	q,
 	kind: z.enum(ANALYSIS_KINDS).optional().catch(undefined),

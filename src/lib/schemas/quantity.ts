@@ -5,9 +5,9 @@
 import { z } from 'zod';
 import { expectedFor, tryParseQuantity, type QuantityKind } from '../engine/units';
 
-export type Bound = 'positive' | 'nonnegative' | 'any';
+type Bound = 'positive' | 'nonnegative' | 'any';
 
-export interface QuantityFieldOptions {
+interface QuantityFieldOptions {
 	bound?: Bound;
 	/** largest sensible value in SI units (guards against typos such as 900 m for 900 mm) */
 	max?: number;
@@ -36,7 +36,7 @@ const SI_SYMBOL: Record<QuantityKind, string> = {
 };
 
 /** 1e11, 3000, 0.3: a bound as short as it is exact. */
-export function boundText(value: number): string {
+function boundText(value: number): string {
 	return Math.abs(value) >= 1e5 ? value.toExponential().replace('e+', 'e') : String(value);
 }
 

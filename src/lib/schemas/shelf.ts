@@ -18,7 +18,7 @@ const positiveLength = (max: number, description?: string) =>
 const position = (description: string) =>
 	lengthField({ bound: 'nonnegative', max: MAX_SPAN_M * 12, description });
 
-export const customMaterialSchema = z.object({
+const customMaterialSchema = z.object({
 	name: z.string().trim().min(1).max(80),
 	/** modulus of elasticity with the grain (or of the panel's face grain) */
 	modulus: quantityField('modulus', { max: 1e11 }),
@@ -38,7 +38,7 @@ export const materialSchema = z.union([z.string().trim().min(1).max(60), customM
 		'Expected a library material id (GET /api/v1/materials) or { name, modulus, rupture, density }.'
 });
 
-export const supportSchema = z.union(
+const supportSchema = z.union(
 	[
 		z.enum(['simple', 'fixed', 'cantilever']),
 		z.object({
@@ -62,19 +62,19 @@ export const supportSchema = z.union(
 	}
 );
 
-export const areaLoadSchema = z.object({
+const areaLoadSchema = z.object({
 	kind: z.literal('area'),
 	/** over the whole top of the shelf, e.g. `40 lbf/ft^2` */
 	pressure: quantityField('pressure', { bound: 'nonnegative', max: 1e6 })
 });
-export const lineLoadSchema = z.object({
+const lineLoadSchema = z.object({
 	kind: z.literal('line'),
 	/** along the shelf, e.g. `20 lbf/ft` */
 	intensity: quantityField('lineLoad', { bound: 'nonnegative', max: 1e7 }),
 	from: position('start, measured from the left end (the wall for a cantilever)').optional(),
 	to: position('end, measured from the left end (the wall for a cantilever)').optional()
 });
-export const pointLoadSchema = z.object({
+const pointLoadSchema = z.object({
 	kind: z.literal('point'),
 	force: quantityField('force', { bound: 'nonnegative', max: 1e6 }),
 	at: position('position, measured from the left end (the wall for a cantilever)')
@@ -96,7 +96,7 @@ export const edgeSchema = z.object({
 });
 
 /** The limits offered by name: the engine's one list (engine/shelf/limits.ts). */
-export const namedLimits = Object.keys(DEFLECTION_LIMITS) as [NamedLimit, ...NamedLimit[]];
+const namedLimits = Object.keys(DEFLECTION_LIMITS) as [NamedLimit, ...NamedLimit[]];
 
 /**
  * "0.02in-per-ft" was offered until it was found to have no publisher. Analyses saved with it
@@ -122,7 +122,7 @@ export const limitSchema = z.union(
 	}
 );
 
-export const optionsSchema = z.object({
+const optionsSchema = z.object({
 	/** add shear deflection to bending (default true) */
 	shearDeflection: z.boolean().default(true),
 	/** divide the modulus of rupture by this to get the allowed bending stress (default 3) */
@@ -219,7 +219,6 @@ export type MinThicknessRequest = z.input<typeof minThicknessRequestSchema>;
 export type MinEdgeRequest = z.input<typeof minEdgeRequestSchema>;
 export type MaxLoadRequest = z.input<typeof maxLoadRequestSchema>;
 /** a material as people and programs write it: an id, or figures as quantity strings */
-export type MaterialInput = z.input<typeof materialSchema>;
 export type {
 	CustomMaterial,
 	EdgeInput,

@@ -27,7 +27,7 @@ const partSchema = z.object({
 	centreFromFront: place('distance of the part’s centre behind the case front')
 });
 
-export const constructionSchema = z.union([
+const constructionSchema = z.union([
 	z.object({
 		weight: weight('weight of the empty case'),
 		centreHeight: place('height of its centre of gravity (default: half the height)').optional(),

@@ -26,7 +26,7 @@ const frontSchema = z.object({
 	gap: gap('gap between fronts').default(0.125 * INCH)
 });
 
-export const dividerSchema = z.object({
+const dividerSchema = z.object({
 	name: z.string().trim().max(80).optional(),
 	/** its centre, from the case's outside left face */
 	at: place('centre of the divider from the case’s left face'),
@@ -37,7 +37,7 @@ export const dividerSchema = z.object({
 	joint: caseJointSchema.default('dado')
 });
 
-export const drawerOpeningSchema = z.object({
+const drawerOpeningSchema = z.object({
 	name: z.string().trim().max(80).optional(),
 	bay: z.number().int().min(0).max(20).optional(),
 	bottom: place('height of the opening’s bottom above the floor'),
@@ -67,7 +67,7 @@ export const drawerOpeningSchema = z.object({
 	}).optional()
 });
 
-export const doorOpeningSchema = z.object({
+const doorOpeningSchema = z.object({
 	name: z.string().trim().max(80).optional(),
 	bay: z.number().int().min(0).max(20).optional(),
 	bottom: place('height of the opening’s bottom above the floor'),
@@ -77,7 +77,7 @@ export const doorOpeningSchema = z.object({
 	front: frontSchema
 });
 
-export const wallCaseSchema = caseDesignShape
+const wallCaseSchema = caseDesignShape
 	.omit({ drawers: true, doors: true, base: true, shelves: true })
 	.extend({
 		shelves: z
@@ -98,7 +98,7 @@ export const wallCaseSchema = caseDesignShape
 			.optional()
 	});
 
-export const sheetStockSchema = z.object({
+const sheetStockSchema = z.object({
 	/** a material id (or a material's name) as used in the wall */
 	material: z.string().trim().min(1).max(80),
 	length: lengthField({ max: 6, description: 'sheet length, along its grain' }).default(96 * INCH),
@@ -107,13 +107,13 @@ export const sheetStockSchema = z.object({
 	keepGrain: z.boolean().optional()
 });
 
-export const sheetOptionsSchema = z.object({
+const sheetOptionsSchema = z.object({
 	kerf: gap('saw kerf').default(0.125 * INCH),
 	trim: gap('trim off each factory edge').default(0.25 * INCH),
 	stocks: z.array(sheetStockSchema).max(20).default([])
 });
 
-export const wallDesignShape = z.object({
+const wallDesignShape = z.object({
 	name: z.string().trim().max(120).optional(),
 	cases: z.array(wallCaseSchema).min(1).max(12),
 	sharedFaceFrame: z.boolean().default(false),
@@ -125,7 +125,7 @@ export const wallDesignShape = z.object({
 });
 
 export type WallDesignInput = z.input<typeof wallDesignShape>;
-export type WallDesignParsed = z.output<typeof wallDesignShape>;
+type WallDesignParsed = z.output<typeof wallDesignShape>;
 
 /** Checks across fields: parts must fit inside their case. */
 export const wallDesignSchema = wallDesignShape.superRefine((w, ctx) => {

@@ -19,12 +19,12 @@ export interface Actor {
 
 const RANK: Record<Role, number> = { viewer: 1, student: 2, editor: 3, owner: 4 };
 
-export function roleAtLeast(role: Role, needed: Role) {
+function roleAtLeast(role: Role, needed: Role) {
 	return RANK[role] >= RANK[needed];
 }
 
 /** The actor's role in a workshop, or null when they are not a member. */
-export async function roleIn(actor: Actor, workshopId: string): Promise<Role | null> {
+async function roleIn(actor: Actor, workshopId: string): Promise<Role | null> {
 	const row = await getDb()
 		.select({ role: memberships.role })
 		.from(memberships)
@@ -75,11 +75,6 @@ export function canEdit(role: ProjectRole) {
 	return PROJECT_RANK[role] >= PROJECT_RANK.editor;
 }
 
-/** True for the roles that save new analyses in a project (a student, an editor, an owner). */
-export function canAddAnalyses(role: ProjectRole) {
-	return PROJECT_RANK[role] >= PROJECT_RANK.student;
-}
-
 /**
  * Whether someone with this role may change (rename, recompute, move, delete) one analysis:
  * editors and owners any, a student only one they created.
@@ -93,7 +88,7 @@ export function canChangeAnalysis(
 }
 
 /** The actor's role in a project: their workshop role, else 'client' when invited to it, else null. */
-export async function projectRoleIn(
+async function projectRoleIn(
 	actor: Actor,
 	project: { id: string; workshopId: string }
 ): Promise<ProjectRole | null> {

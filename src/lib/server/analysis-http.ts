@@ -23,7 +23,7 @@ export function versionTag(version: number) {
 }
 
 /** The version named by If-Match (`"v3"`, `W/"v3"` or `3`), undefined when absent or unreadable. */
-export function versionFromIfMatch(request: Request): number | undefined {
+function versionFromIfMatch(request: Request): number | undefined {
 	const header = request.headers.get('if-match');
 	const m = header?.trim().match(/^(?:W\/)?"?v?(\d+)"?$/);
 	return m ? Number(m[1]) : undefined;

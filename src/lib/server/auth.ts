@@ -31,7 +31,7 @@ import {
 } from './mail';
 
 /** Thrown by the password check when the throttle refuses; carries the wait for the message. */
-export class SignInThrottled extends CredentialsSignin {
+class SignInThrottled extends CredentialsSignin {
 	code = 'throttled';
 	constructor(readonly retryAfterMinutes: number) {
 		super(throttleMessage(retryAfterMinutes));
@@ -39,11 +39,11 @@ export class SignInThrottled extends CredentialsSignin {
 }
 
 /** Thrown when the password is right but the address has not been confirmed by a mailed link. */
-export class EmailUnconfirmed extends CredentialsSignin {
+class EmailUnconfirmed extends CredentialsSignin {
 	code = 'unconfirmed';
 }
 
-export const SIGN_IN_LINK_MAX_AGE_S = 60 * 60;
+const SIGN_IN_LINK_MAX_AGE_S = 60 * 60;
 
 const DEV_SECRET = 'spanwright-dev-only-secret-never-use-in-production';
 let warnedDevSecret = false;
@@ -222,7 +222,7 @@ async function runAuthAction(
 	throw new Error('Auth.js finished without a redirect');
 }
 
-export type PasswordSignInOutcome =
+type PasswordSignInOutcome =
 	| { ok: true; location: string }
 	| { ok: false; status: 400 | 429; message: string; unconfirmed?: true };
 

@@ -10,8 +10,8 @@ import { consume, limiterFor, tooMany, type Budget } from './rate-limit';
 
 export const CLASS_JOIN_BUDGET: Budget = { prefix: 'class-join', points: 120, seconds: 600 };
 export const CLASS_MISS_BUDGET: Budget = { prefix: 'class-miss', points: 20, seconds: 600 };
-export const CLASS_ANSWER_BUDGET: Budget = { prefix: 'class-answer', points: 600, seconds: 60 };
-export const SEAT_ANSWER_BUDGET: Budget = { prefix: 'class-seat', points: 20, seconds: 60 };
+const CLASS_ANSWER_BUDGET: Budget = { prefix: 'class-answer', points: 600, seconds: 60 };
+const SEAT_ANSWER_BUDGET: Budget = { prefix: 'class-seat', points: 20, seconds: 60 };
 
 const wait = (what: string) => (seconds: number) =>
 	`Too many ${what} from your address. Try again in ${seconds} s.`;

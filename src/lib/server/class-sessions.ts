@@ -19,7 +19,7 @@ export const SESSION_MINUTES = 120;
 /** Sessions one teacher may have open at once. */
 export const OPEN_SESSIONS_PER_HOST = 3;
 /** Seats in one session: a large lecture, not a flood. */
-export const SEATS_PER_SESSION = 200;
+const SEATS_PER_SESSION = 200;
 
 type SessionRow = typeof classSessions.$inferSelect;
 
@@ -39,7 +39,7 @@ function experimentOf(id: string): Experiment {
 }
 
 /** Delete every session whose time has run out, with its seats and answers (by cascade). */
-export async function sweepClassSessions(now = new Date()) {
+async function sweepClassSessions(now = new Date()) {
 	await getDb().delete(classSessions).where(lt(classSessions.expiresAt, now));
 }
 

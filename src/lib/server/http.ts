@@ -23,7 +23,7 @@ export const MAX_BODY_BYTES = 256 * 1024;
 /** A JSON media type: application/json or application/<anything>+json. */
 export const JSON_TYPE = /^application\/(?:[\w.+-]+\+)?json\s*(?:;|$)/i;
 
-export type JsonRead<T> =
+type JsonRead<T> =
 	{ ok: true; data: T } | { ok: false; status: number; error: string; issues: ProblemIssue[] };
 
 /**

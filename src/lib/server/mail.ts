@@ -5,7 +5,7 @@ import nodemailer, { type Transporter } from 'nodemailer';
  * in dev and tests that is the local catcher on 127.0.0.1:2525. Read at send time so tests can point
  * it at a catcher on a free port.
  */
-export const DEFAULT_SMTP_URL = 'smtp://127.0.0.1:2525';
+const DEFAULT_SMTP_URL = 'smtp://127.0.0.1:2525';
 
 export function smtpUrl() {
 	return process.env.SMTP_URL || DEFAULT_SMTP_URL;
@@ -31,7 +31,7 @@ function transporter(): Transporter {
 	return transport.transporter;
 }
 
-export interface OutgoingMail {
+interface OutgoingMail {
 	to: string;
 	subject: string;
 	text: string;

@@ -16,7 +16,7 @@ import { aboutLength, describeShelf } from '$lib/kinds/shelf-words';
 
 const pct = (share: number) => `${Math.round(Math.abs(share) * 100)}%`;
 
-export interface RecordWords {
+interface RecordWords {
 	verdict: string;
 	inputs: [string, string][];
 	steps: string[];

@@ -277,7 +277,7 @@ export async function findInvitation(token: string) {
 
 /** Accept an invitation: the signed-in account must be the one it was sent to. */
 /** What accepting did: joined with the invited role, changed an existing role, or kept it. */
-export type InvitationOutcome =
+type InvitationOutcome =
 	| { kind: 'joined'; role: Role }
 	| { kind: 'role-changed'; from: Role; role: Role }
 	| { kind: 'unchanged'; role: Role }

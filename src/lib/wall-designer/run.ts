@@ -12,7 +12,7 @@ import { toSheetRequest, toWallDesign, wallDesignSchema } from '../schemas/wall'
 import type { UserLengthUnit } from '../workbench/lengths';
 import { toInput, type WallDraft } from './draft';
 
-export type WallRun =
+type WallRun =
 	| { ok: true; design: WallDesign; shop: WallShop; sheets: SheetPlan }
 	| { ok: false; issues: FieldIssue[] };
 

@@ -23,7 +23,7 @@ export interface ComparisonDraft {
 	candidates: CandidateDraft[];
 }
 
-export const NOSING_MATERIAL = 'red-oak';
+const NOSING_MATERIAL = 'red-oak';
 const NOSING_THICKNESS_M = 0.75 * METRES_PER_INCH; // a common nosing (common practice, no source)
 
 export function candidate(material: string, unit: UserLengthUnit): CandidateDraft {

@@ -40,7 +40,7 @@ export function compareErrors(
 }
 
 /** Where a marked field is: its control's id and the words the summary names it by. */
-export function comparePlace(key: string, draft: ComparisonDraft) {
+function comparePlace(key: string, draft: ComparisonDraft) {
 	const own = /^(\d+)\.(\w+)$/.exec(key);
 	if (own) {
 		const field = Object.values(CANDIDATE_FIELDS).find(([f]) => f === own[2]);

@@ -63,7 +63,7 @@ const within = (m: number) => m > 0 && m <= MAX_SPAN_M;
  * span out of range, a load no longer on the shelf): the checks of the span that reading
  * `at(request, spanM)` again would make, on numbers already read.
  */
-export function inputAt(input: ShelfInput, spanM: number): ShelfInput | null {
+function inputAt(input: ShelfInput, spanM: number): ShelfInput | null {
 	if (!within(spanM)) return null;
 	const support = input.support;
 	let next: ShelfInput;

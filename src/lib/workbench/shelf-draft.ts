@@ -15,17 +15,17 @@ import { formatQuantityExact } from '../engine/units/quantity';
 import { withLoadUnit, withUnitMark } from '../components/quantity-input/reading';
 import { lengthText, loadUnitsFor, type UserLengthUnit } from './lengths';
 
-export type SupportChoice = 'simple' | 'fixed' | 'cantilever' | 'continuous';
+type SupportChoice = 'simple' | 'fixed' | 'cantilever' | 'continuous';
 export type LoadKind = 'area' | 'line' | 'point';
 /** The limits offered by name: the engine's one list. */
 export const LIMIT_CHOICES = Object.keys(DEFLECTION_LIMITS) as NamedLimit[];
-export type LimitChoice = NamedLimit | 'ratio';
+type LimitChoice = NamedLimit | 'ratio';
 
 /** Said beside the limit of an analysis saved with the retired 0.02" per foot preset. */
 export const RETIRED_LIMIT_NOTE =
 	'This analysis was saved with the 0.02" per foot limit, which is no longer offered because it has no published source. It is read as L/600, which allows exactly the same sag.';
 
-export interface StripDraft {
+interface StripDraft {
 	on: boolean;
 	material: string;
 	height: string;
@@ -243,7 +243,7 @@ function numberOr(v: unknown, format: (n: number) => string): string {
 export type FieldKey = keyof ShelfDraft | `spans.${number}`;
 
 /** Where each field of the form is, for the list of marked fields at the top of the screen. */
-export const FIELD_PLACES: Partial<Record<keyof ShelfDraft, { id: string; label: string }>> = {
+const FIELD_PLACES: Partial<Record<keyof ShelfDraft, { id: string; label: string }>> = {
 	span: { id: 'shelf-span', label: 'Span' },
 	depth: { id: 'shelf-depth', label: 'Depth' },
 	thickness: { id: 'shelf-thickness', label: 'Thickness' },

@@ -11,7 +11,7 @@ import type { UserLengthUnit } from './lengths';
 
 export type AnchorChoice = 'none' | 'strap' | 'bracket' | 'screws-through-back';
 
-export interface ShelfLoadDraft {
+interface ShelfLoadDraft {
 	/** height of the shelf surface above the floor */
 	height: string;
 	/** what it holds */

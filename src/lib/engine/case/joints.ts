@@ -1,9 +1,8 @@
 import { G_M_PER_S2 } from '../joinery/units';
-import { planJointSI } from '../joinery/plan';
 import type { JointRequest } from '../joinery/types';
 import { densityOf, stockOf, type CaseGeometry } from './geometry';
 import { endDemand } from './shelves';
-import type { CaseDesign, CaseJoint, CaseShelf, DesignPath } from './types';
+import type { CaseDesign, CaseShelf, DesignPath } from './types';
 
 /** The joint requests of the case, each with the design element it belongs to. */
 export function jointRequests(d: CaseDesign, g: CaseGeometry, shelves: CaseShelf[]) {
@@ -101,16 +100,6 @@ export function jointRequests(d: CaseDesign, g: CaseGeometry, shelves: CaseShelf
 		});
 	}
 	return out;
-}
-
-export function planCaseJoints(d: CaseDesign, g: CaseGeometry, shelves: CaseShelf[]): CaseJoint[] {
-	return jointRequests(d, g, shelves).map((r) => ({
-		id: r.id,
-		path: r.path,
-		where: r.where,
-		joints: r.joints,
-		plan: planJointSI(r.req)
-	}));
 }
 
 /** Whether any stock in the design was given by figures, so its fastener holding is assumed. */

@@ -10,12 +10,12 @@ import type { StabilityResult } from '../stability/types';
  */
 export type CaseJointKind = 'biscuit' | 'pocket-screw' | 'screw' | 'dado';
 
-export interface CasePanel {
+interface CasePanel {
 	material: ShelfMaterialInput;
 	thickness: number;
 }
 
-export interface CaseEndPanel {
+interface CaseEndPanel {
 	/** default: the sides' material and thickness */
 	material?: ShelfMaterialInput;
 	thickness?: number;
@@ -52,7 +52,7 @@ export interface CaseShelfDesign {
 	itemHeight?: number;
 }
 
-export interface CaseFaceFrame {
+interface CaseFaceFrame {
 	material: ShelfMaterialInput;
 	thickness: number;
 	stileWidth: number;
@@ -63,7 +63,7 @@ export interface CaseFaceFrame {
 	attach: 'biscuit' | 'pocket-screw';
 }
 
-export interface CaseDrawer {
+interface CaseDrawer {
 	/** height of the drawer above the floor */
 	height: number;
 	/** weight of the empty drawer, N */
@@ -73,7 +73,7 @@ export interface CaseDrawer {
 	extension?: number;
 }
 
-export interface CaseDoor {
+interface CaseDoor {
 	weight: number;
 	width: number;
 	centreHeight: number;

@@ -37,7 +37,7 @@ export interface CutList {
 }
 
 /** A, B, …, Z, AA, AB, … */
-export function markOf(i: number): string {
+function markOf(i: number): string {
 	let s = '';
 	let n = i + 1;
 	while (n > 0) {

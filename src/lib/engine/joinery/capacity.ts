@@ -15,7 +15,7 @@ import {
 	type StockKind
 } from '../../../../reference/stock-holding';
 import type { StockMaterial } from './types';
-import { N_PER_LBF, PA_PER_PSI, inches } from './units';
+import { N_PER_LBF, inches } from './units';
 import { InputError } from '../errors';
 import { positive } from './validate';
 
@@ -59,14 +59,13 @@ export function resolveStock(material: StockMaterial, field: string): ResolvedSt
 	};
 }
 
-export const isPanelKind = (k: StockKind) =>
-	k === 'plywood' || k === 'mdf' || k === 'particleboard';
+const isPanelKind = (k: StockKind) => k === 'plywood' || k === 'mdf' || k === 'particleboard';
 /** Particleboard and MDF hold screws by their own standard's figures; plywood by the NDS as wood. */
 const isFibrePanel = (s: ResolvedStock) => s.kind === 'mdf' || s.kind === 'particleboard';
 
 export type Grain = 'side' | 'end' | 'panel-face' | 'panel-edge';
 
-export interface Withdrawal {
+interface Withdrawal {
 	designN: number;
 	ultimateN: number;
 	basis: string;
@@ -133,7 +132,7 @@ export function dowelBearingPsi(g: number): number {
 	return DOWEL_BEARING_COEFF_PSI * g ** DOWEL_BEARING_EXPONENT;
 }
 
-export interface LateralInput {
+interface LateralInput {
 	diameterIn: number;
 	/** side member bearing length, in */
 	lsIn: number;
@@ -173,7 +172,7 @@ export function yieldLimitLb(i: LateralInput): { zLb: number; mode: string; rd: 
 	return { zLb: best[1], mode: best[0], rd };
 }
 
-export interface Lateral {
+interface Lateral {
 	designN: number;
 	/** 5% offset yield: the yield limit without the reduction term Rd */
 	yieldN: number;
@@ -205,6 +204,3 @@ export function screwLateral(
 		basis: `NDS 2018 Table 12.3.1A yield limit (mode ${z.mode}, Rd ${z.rd.toFixed(2)}) × C_D 0.9${endGrainFactor < 1 ? ' × C_eg 0.67' : ''}`
 	};
 }
-
-/** Convert a Wood Handbook bearing stress figure (Pa) — kept here so callers do not mix units. */
-export const psiToPa = (psi: number) => psi * PA_PER_PSI;

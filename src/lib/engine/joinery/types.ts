@@ -13,19 +13,19 @@ export type FastenerKind = 'biscuit' | 'pocket-screw' | 'screw' | 'shelf-pin' | 
 /** A stock by its id in reference/stock-holding.ts, or given by its kind and specific gravity. */
 export type StockMaterial = string | { name?: string; kind: StockKind; specificGravity: number };
 
-export interface JointStock {
+interface JointStock {
 	material: StockMaterial;
 	thicknessM: number;
 }
 
 /** What the joint must carry, from the shelf analysis: the reaction at this end and, for a shelf
  * taken as fixed, the end moment. */
-export interface JointDemand {
+interface JointDemand {
 	shearN?: number;
 	momentNM?: number;
 }
 
-export interface JointOptions {
+interface JointOptions {
 	/** fix the number of fasteners instead of planning it */
 	count?: number;
 	screwGauge?: number;

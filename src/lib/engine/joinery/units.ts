@@ -3,12 +3,11 @@
  * engine: the engine's one set of constants (units/), under the short names these files use.
  */
 import { METRES_PER_INCH } from '../units/length';
-import { NEWTONS_PER_LBF, PASCALS_PER_PSI, STANDARD_GRAVITY } from '../units/quantity';
+import { NEWTONS_PER_LBF, STANDARD_GRAVITY } from '../units/quantity';
 
 export {
 	METRES_PER_INCH as M_PER_IN,
 	NEWTONS_PER_LBF as N_PER_LBF,
-	PASCALS_PER_PSI as PA_PER_PSI,
 	STANDARD_GRAVITY as G_M_PER_S2
 };
 

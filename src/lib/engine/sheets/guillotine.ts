@@ -3,7 +3,7 @@
  * saw can do): some straight line crosses the whole piece without passing through a part and
  * splits the parts in two groups, and each side again, down to single parts.
  */
-export interface Rect {
+interface Rect {
 	xM: number;
 	yM: number;
 	wM: number;

@@ -26,7 +26,7 @@ export interface SheetStock {
 	keepGrain: boolean;
 }
 
-export interface SheetOptions {
+interface SheetOptions {
 	kerfM: number;
 	/** cut off each factory edge before any part */
 	trimM: number;

@@ -20,20 +20,20 @@ export interface Item {
 }
 
 /** A part as laid: x along the sheet's length, y across. */
-export interface Laid {
+interface Laid {
 	item: Item;
 	x: number;
 	y: number;
 	turned: boolean;
 }
 
-export interface PackedPart extends Laid {
+interface PackedPart extends Laid {
 	/** from the corner of the usable (trimmed) sheet */
 	px: number;
 	py: number;
 }
 
-export interface Stack {
+interface Stack {
 	/** from the usable sheet's corner, and its width along the sheet (its first part's length) */
 	x: number;
 	w: number;

@@ -5,7 +5,7 @@
  */
 
 /** A part of the case whose weight counts: by its mass, or by size and density. */
-export interface WeighedPart {
+interface WeighedPart {
 	name?: string;
 	massKg?: number;
 	/** with densityKgPerM3: the panel's three dimensions */
@@ -20,7 +20,7 @@ export interface WeighedPart {
 export type Construction =
 	{ massKg: number; centreHeightM?: number; centreFromFrontM?: number } | { parts: WeighedPart[] };
 
-export interface ShelfContents {
+interface ShelfContents {
 	massKg: number;
 	/** height of the shelf surface above the floor */
 	heightM: number;
@@ -41,7 +41,7 @@ export interface Drawer {
 	centreFromFrontM?: number;
 }
 
-export interface Door {
+interface Door {
 	massKg: number;
 	widthM: number;
 	centreHeightM: number;
@@ -49,7 +49,7 @@ export interface Door {
 
 export type AnchorKind = 'none' | 'strap' | 'bracket' | 'screws-through-back';
 
-export interface Anchoring {
+interface Anchoring {
 	kind: AnchorKind;
 	/** the restraint's height above the floor (default: the case top) */
 	heightM?: number;
@@ -73,7 +73,7 @@ export interface StabilityRequest {
 	seismicRegion?: boolean;
 }
 
-export interface CentreOfGravity {
+interface CentreOfGravity {
 	massKg: number;
 	heightM: number;
 	fromFrontM: number;

@@ -19,7 +19,7 @@ export interface UnitTarget {
 }
 
 /** Reads a normalised quantity text to SI for the target, or undefined if it cannot. */
-export type FullUnitParser = (text: string, target: UnitTarget) => number | undefined;
+type FullUnitParser = (text: string, target: UnitTarget) => number | undefined;
 
 let fullParser: FullUnitParser | undefined;
 

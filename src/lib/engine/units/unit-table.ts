@@ -15,11 +15,11 @@ export type TableKind = 'force' | 'pressure' | 'lineLoad' | 'modulus' | 'density
 // NIST SP 811 (2008 ed.), Appendix B.8, "Factors for units listed alphabetically" (from memory).
 
 /** 1 lb = 0.45359237 kg, exact (international avoirdupois pound, 1959). */
-export const KG_PER_LB = 0.45359237;
+const KG_PER_LB = 0.45359237;
 /** 1 kip = 1000 lbf = 4448.2216152605 N (NIST SP 811 B.8: kip, 4.448 222 E+03 N). */
-export const NEWTONS_PER_KIP = 1000 * NEWTONS_PER_LBF;
+const NEWTONS_PER_KIP = 1000 * NEWTONS_PER_LBF;
 /** 1 kgf = 9.80665 N, exact from standard gravity (NIST SP 811 B.8: kilogram-force). */
-export const NEWTONS_PER_KGF = STANDARD_GRAVITY;
+const NEWTONS_PER_KGF = STANDARD_GRAVITY;
 
 const IN = METRES_PER_INCH; // 0.0254 m, exact (international inch, 1959)
 const FT = METRES_PER_FOOT; // 0.3048 m, exact (international foot, 1959)
@@ -123,7 +123,7 @@ export const UNIT_TABLE: Readonly<Record<TableKind, Readonly<Record<string, numb
 };
 
 /** `lbf / ft ^2` → `lbf/ft^2`, `N   m` → `N m`. */
-export function canonicalUnit(unit: string): string {
+function canonicalUnit(unit: string): string {
 	return unit
 		.trim()
 		.replace(/\s*([/^])\s*/g, '$1')

@@ -16,7 +16,7 @@ import type { CaseMargin } from '../case/types';
 import type { WallCaseGeometry } from './geometry';
 import type { WallCaseDesign, WallShelfCheck } from './types';
 
-export const DIVIDER_SAFETY_FACTOR = 3;
+const DIVIDER_SAFETY_FACTOR = 3;
 const SERVICE = { dry: 0, humid: 1, wet: 2 } as const;
 
 export interface DividerCheck {

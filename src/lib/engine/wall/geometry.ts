@@ -16,7 +16,7 @@ export function asCaseDesign(c: WallCaseDesign): CaseDesign {
 	};
 }
 
-export interface PlacedDivider {
+interface PlacedDivider {
 	index: number;
 	design: DividerDesign;
 	/** centre from the case's outside left face */

@@ -36,11 +36,11 @@ export function hingesFor(heightM: number): number {
 }
 
 /** Brackets or straps per anchored case (common practice, no source), two screws each. */
-export const ANCHORS_PER_CASE = 2;
+const ANCHORS_PER_CASE = 2;
 /** A back is fastened about every 6" around its edge (common practice, no source). */
-export const BACK_FASTENER_SPACING_M = 6 * INCH;
+const BACK_FASTENER_SPACING_M = 6 * INCH;
 /** A drawer front is screwed to its box from inside with 4 screws (common practice, no source). */
-export const FRONT_SCREWS = 4;
+const FRONT_SCREWS = 4;
 
 export function hardwareList(w: WallDesign, r: WallResult): HardwareLine[] {
 	const lines = new Map<string, HardwareLine>();

@@ -17,7 +17,7 @@ import { METRES_PER_INCH } from '../units/length';
 
 const INCH = METRES_PER_INCH;
 /** An anchor strip (nailer) under the top at the back, 3" wide (common practice, no source). */
-export const ANCHOR_STRIP_WIDTH_M = 3 * INCH;
+const ANCHOR_STRIP_WIDTH_M = 3 * INCH;
 const len = (m: number) => formatLength(m, { unit: 'frac16' });
 
 /** Parts that carry load keep their grain along their length; faces keep it for looks. */

@@ -5,7 +5,7 @@ import type { WallCaseDesign, WallDesign } from './types';
 
 /** A board longer than this is made in pieces joined over a support (a choice of this tool: an
  * 8' sheet less trim). */
-export const LONGEST_BOARD_M = 2.4;
+const LONGEST_BOARD_M = 2.4;
 
 function pieces(total: number) {
 	const n = Math.max(1, Math.ceil(total / LONGEST_BOARD_M - 1e-9));

@@ -13,7 +13,7 @@ type CaseShelfDesign = CaseDesign['shelves'][number];
 
 /** A shelf of a wall case: in one bay between a side and a divider (or two dividers), or across
  * the whole case when `bay` is left out (resting on any divider whose top meets its underside). */
-export interface WallShelfDesign extends CaseShelfDesign {
+interface WallShelfDesign extends CaseShelfDesign {
 	bay?: number;
 }
 
@@ -31,7 +31,7 @@ export interface DividerDesign {
 	joint: CaseJointKind;
 }
 
-export interface DrawerBoxDesign {
+interface DrawerBoxDesign {
 	material: Material;
 	thickness: number;
 	bottom: { material: Material; thickness: number };
@@ -44,7 +44,7 @@ export interface DrawerBoxDesign {
 	heightClearance: number;
 }
 
-export interface SlideDesign {
+interface SlideDesign {
 	/** room for the slide on each side, as the slide maker states it (1/2" is usual) */
 	sideClearance: number;
 	/** slide length; the box is made this deep */
@@ -52,7 +52,7 @@ export interface SlideDesign {
 	extension: 'full' | 'three-quarter';
 }
 
-export interface FrontDesign {
+interface FrontDesign {
 	material: Material;
 	thickness: number;
 	mount: 'overlay' | 'inset';
@@ -90,7 +90,7 @@ export interface DoorOpeningDesign {
 	front: FrontDesign;
 }
 
-export interface BaseDesign {
+interface BaseDesign {
 	height: number;
 	setback: number;
 	/** a separate plinth the box stands on (the sides stop at the base), or sides that run to the

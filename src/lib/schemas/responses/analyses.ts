@@ -17,7 +17,7 @@ const base = {
 	updatedByName: z.string().nullable()
 };
 
-export const analysisListItemSchema = z.object(base).meta({ id: 'AnalysisListItem' });
+const analysisListItemSchema = z.object(base).meta({ id: 'AnalysisListItem' });
 
 export const analysisSchema = z
 	.object({

@@ -4,7 +4,7 @@ import { pageOf, projectRoleSchema, roleSchema, timestamp } from './common';
 
 export const healthSchema = z.object({ status: z.literal('ok'), version: z.string() });
 
-export const workshopSummarySchema = z
+const workshopSummarySchema = z
 	.object({
 		id: z.string(),
 		name: z.string(),
@@ -68,7 +68,7 @@ export const meSchema = z.object({
 	workshops: z.array(workshopSummarySchema)
 });
 
-export const apiTokenSchema = z
+const apiTokenSchema = z
 	.object({
 		id: z.string(),
 		name: z.string(),

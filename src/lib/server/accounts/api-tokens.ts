@@ -6,7 +6,7 @@ import { apiTokens, users } from '../db/tables';
 import { readLengthUnit } from '../preferences';
 import { randomSecret, sha256 } from './secrets';
 
-export interface ApiTokenSummary {
+interface ApiTokenSummary {
 	id: string;
 	name: string;
 	prefix: string;

@@ -2,7 +2,7 @@ import { getDb } from '../db';
 import { signInFailures } from '../db/tables';
 import { recentFailures, refusedUntilOf } from './throttle';
 
-export const MAIL_REQUESTS_PER_WINDOW = 5;
+const MAIL_REQUESTS_PER_WINDOW = 5;
 
 /**
  * Count one request to mail this address (a sign-in link, a reset link) and say whether it may be

@@ -4,7 +4,7 @@ import { getDb, firstRow, transaction } from '../db';
 import { endedSessions, users } from '../db/tables';
 
 /** What the session token carries that matters here (Auth.js's JWT claims plus our `sid`). */
-export interface SessionClaims {
+interface SessionClaims {
 	sub?: string;
 	iat?: number;
 	exp?: number;

@@ -11,7 +11,7 @@ export async function verifyPassword(email: string, password: string): Promise<A
 	return ok && user?.email ? { id: user.id, email: user.email, name: user.name } : null;
 }
 
-export type PasswordSignInResult =
+type PasswordSignInResult =
 	| { ok: true; user: AccountUser }
 	| { ok: false; reason: 'wrong' }
 	| { ok: false; reason: 'unverified' }

@@ -2,9 +2,9 @@ import { and, desc, eq, gt, inArray, lt } from 'drizzle-orm';
 import { getDb, transaction } from '../db';
 import { signInFailures } from '../db/tables';
 
-export const SIGN_IN_WINDOW_MS = 15 * 60 * 1000;
+const SIGN_IN_WINDOW_MS = 15 * 60 * 1000;
 /** From an account's third failure on (from anywhere), each further attempt waits a little longer. */
-export const SLOW_AFTER_FAILURES = 3;
+const SLOW_AFTER_FAILURES = 3;
 /**
  * Five failures for one account from one client address within the window, and that address may
  * not try that account again until the window has moved on. The account's owner, elsewhere, still
@@ -13,9 +13,9 @@ export const SLOW_AFTER_FAILURES = 3;
 export const REFUSE_AFTER_FAILURES = 5;
 // Per client address, over all accounts, the bar is higher: a school or a shop may share one
 // address among many people (behind a proxy, see ADDRESS_HEADER in the README).
-export const REFUSE_AFTER_FAILURES_PER_CLIENT = 20;
+const REFUSE_AFTER_FAILURES_PER_CLIENT = 20;
 
-export type SignInGate =
+type SignInGate =
 	| { state: 'open' }
 	| { state: 'slow'; delayMs: number }
 	| { state: 'refused'; retryAfterMinutes: number };

@@ -63,7 +63,7 @@ function tablesOf(dialect: Dialect): Tables {
 
 const BATCH = 200;
 
-export interface TableCheck {
+interface TableCheck {
 	table: string;
 	source: number;
 	target: number;

@@ -4,7 +4,7 @@ import { dialect } from './dialect';
 import { containsText } from './contains';
 
 /** The shortest search the trigram index can answer; shorter ones are read row by row. */
-export const TRIGRAM = 3;
+const TRIGRAM = 3;
 
 /** FTS5's string literal: the text in double quotes, a double quote doubled. */
 function ftsString(text: string) {

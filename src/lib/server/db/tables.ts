@@ -34,9 +34,6 @@ export const {
 	classAnswers
 } = active;
 
-/** Every table of the active engine, by name (the copy script and the parity test walk them). */
-export const allTables = active;
-
 export {
 	ANALYSIS_KINDS,
 	DOCUMENT_TYPES,

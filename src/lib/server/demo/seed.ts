@@ -7,7 +7,7 @@ import { seedDemoAnalyses } from './analyses';
 
 // The demo scenario (invented): Quillfeather Casework, a two-person built-in shop with an apprentice, and Dana
 // Whitlock, a client invited to her library wall alone: she never sees the shop's other clients.
-export const DEMO_WORKSHOP = 'Quillfeather Casework';
+const DEMO_WORKSHOP = 'Quillfeather Casework';
 
 const DEMO_PROJECTS = [
 	{

@@ -21,7 +21,7 @@ export const operations: ApiOperation[] = [
 ];
 
 /** The session cookie Auth.js sets over HTTPS (plain http in development drops the prefix). */
-export const SESSION_COOKIE = '__Secure-authjs.session-token';
+const SESSION_COOKIE = '__Secure-authjs.session-token';
 
 /** Refusals every operation of a sort can give, added so no operation forgets them. */
 function commonRefusals(op: ApiOperation): Record<number, string> {

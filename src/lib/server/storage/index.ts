@@ -10,7 +10,7 @@ export type { FileStore } from './types';
  * The configured store: an S3-compatible bucket when S3_BUCKET is set (S3_ENDPOINT, S3_REGION,
  * S3_ACCESS_KEY_ID, S3_SECRET_ACCESS_KEY), otherwise the uploads folder of the data folder.
  */
-export function storeFromEnvironment(env: NodeJS.ProcessEnv = process.env): FileStore {
+function storeFromEnvironment(env: NodeJS.ProcessEnv = process.env): FileStore {
 	if (env.S3_BUCKET)
 		return s3Store({
 			bucket: env.S3_BUCKET,

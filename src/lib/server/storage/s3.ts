@@ -8,7 +8,7 @@ import {
 } from '@aws-sdk/client-s3';
 import { checkKey, type FileStore } from './types';
 
-export interface S3Settings {
+interface S3Settings {
 	endpoint?: string;
 	region: string;
 	bucket: string;

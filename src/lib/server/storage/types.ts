@@ -15,7 +15,7 @@ export interface FileStore {
 }
 
 /** A key made only of what the server writes: folders of [a-z0-9-], no dots at the start. */
-export const SAFE_KEY = /^[a-z0-9-]+(\/[a-z0-9-]+(\.[a-z0-9]+)?)+$/;
+const SAFE_KEY = /^[a-z0-9-]+(\/[a-z0-9-]+(\.[a-z0-9]+)?)+$/;
 
 export function checkKey(key: string) {
 	if (!SAFE_KEY.test(key)) throw new Error(`Refused a storage key that the server did not make.`);
