@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 import { STOCK_HOLDING } from '../../../reference/stock-holding';
-import type { JointRequest } from '../engine/joinery/types';
+import { FASTENER_KINDS, JOINT_KINDS, type JointRequest } from '../engine/joinery/types';
 import { lengthField, quantityField } from './quantity';
 
 const stockIds = STOCK_HOLDING.map((s) => s.id);
@@ -25,15 +25,8 @@ const jointStockSchema = z.object({
 	thickness: lengthField({ max: 0.3, description: 'actual thickness of the piece' })
 });
 
-const jointKindSchema = z.enum([
-	'shelf-to-side',
-	'top-to-side',
-	'bottom-to-side',
-	'rail-to-stile',
-	'frame-to-case',
-	'divider-to-shelf'
-]);
-const fastenerKindSchema = z.enum(['biscuit', 'pocket-screw', 'screw', 'shelf-pin', 'dado']);
+const jointKindSchema = z.enum(JOINT_KINDS);
+const fastenerKindSchema = z.enum(FASTENER_KINDS);
 
 const jointDemandSchema = z.object({
 	/** the reaction this joint carries (from the shelf analysis), e.g. `45 lbf` */

@@ -6,6 +6,7 @@
 import { z } from 'zod';
 import { STANDARD_GRAVITY } from '../engine/units';
 import type { StabilityRequest } from '../engine/stability/types';
+import { fittingsRequest } from '../engine/stability/fittings';
 import { lengthField, quantityField } from './quantity';
 
 const MAX_CASE_M = 5;
@@ -121,23 +122,7 @@ export function toStabilityRequest(s: Parsed): StabilityRequest {
 			itemHeightM: x.itemHeight,
 			centreFromFrontM: x.centreFromFront
 		})),
-		drawers: s.drawers?.map((d) => ({
-			heightM: d.height,
-			massKg: d.weight / STANDARD_GRAVITY,
-			contentsKg: kg(d.contentsWeight),
-			extensionM: d.extension
-		})),
-		doors: s.doors?.map((d) => ({
-			massKg: d.weight / STANDARD_GRAVITY,
-			widthM: d.width,
-			centreHeightM: d.centreHeight
-		})),
-		base: { setbackM: s.base?.setback ?? 0 },
-		floorTiltDeg: s.floorTiltDeg ?? 0,
-		anchoring: s.anchoring
-			? { kind: s.anchoring.kind, heightM: s.anchoring.height, intoStuds: s.anchoring.intoStuds }
-			: { kind: 'none' },
-		seismicRegion: s.seismicRegion ?? false
+		...fittingsRequest(s)
 	};
 }
 

@@ -1,5 +1,6 @@
 import { G_M_PER_S2 } from '../joinery/units';
 import type { StabilityRequest } from '../stability/types';
+import { fittingsRequest } from '../stability/fittings';
 import { densityOf, type CaseGeometry } from './geometry';
 import type { CaseDesign, CaseShelf } from './types';
 
@@ -166,22 +167,6 @@ export function stabilityRequestOf(
 			itemHeightM: x.itemHeight,
 			centreFromFrontM: x.centreFromFront
 		})),
-		drawers: d.drawers?.map((dr) => ({
-			heightM: dr.height,
-			massKg: kg(dr.weight),
-			contentsKg: dr.contentsWeight === undefined ? undefined : kg(dr.contentsWeight),
-			extensionM: dr.extension
-		})),
-		doors: d.doors?.map((door) => ({
-			massKg: kg(door.weight),
-			widthM: door.width,
-			centreHeightM: door.centreHeight
-		})),
-		base: { setbackM: d.base?.setback ?? 0 },
-		floorTiltDeg: d.floorTiltDeg ?? 0,
-		anchoring: d.anchoring
-			? { kind: d.anchoring.kind, heightM: d.anchoring.height, intoStuds: d.anchoring.intoStuds }
-			: { kind: 'none' },
-		seismicRegion: d.seismicRegion ?? false
+		...fittingsRequest(d)
 	};
 }

@@ -4,18 +4,10 @@ import { GOOD_PRACTICE, JOINT_CAUTIONS } from './cautions';
 import type { FastenerPart, PlanContext } from './part';
 import { planPocketScrews, planThroughScrews } from './screws';
 import { planDado, planShelfPins } from './supports';
-import type { FastenerKind, JointKind, JointPlan, JointRequest } from './types';
+import { JOINT_KINDS, type FastenerKind, type JointPlan, type JointRequest } from './types';
 import { InputError } from '../errors';
 import { nonNegative, positive } from './validate';
 
-const KINDS: JointKind[] = [
-	'shelf-to-side',
-	'top-to-side',
-	'bottom-to-side',
-	'rail-to-stile',
-	'frame-to-case',
-	'divider-to-shelf'
-];
 const PLANNERS: Record<FastenerKind, (ctx: PlanContext) => FastenerPart> = {
 	biscuit: planBiscuits,
 	'pocket-screw': planPocketScrews,
@@ -30,7 +22,8 @@ const PLANNERS: Record<FastenerKind, (ctx: PlanContext) => FastenerPart> = {
  * carries the cautions.
  */
 export function planJointSI(req: JointRequest): JointPlan {
-	if (!KINDS.includes(req.kind)) throw InputError.at('kind', `expected one of ${KINDS.join(', ')}`);
+	if (!(JOINT_KINDS as readonly string[]).includes(req.kind))
+		throw InputError.at('kind', `expected one of ${JOINT_KINDS.join(', ')}`);
 	const planner = PLANNERS[req.fastener];
 	if (!planner)
 		throw InputError.at('fastener', `expected one of ${Object.keys(PLANNERS).join(', ')}`);

@@ -1,14 +1,18 @@
 import type { StockKind } from '../../../../reference/stock-holding';
 
-export type JointKind =
-	| 'shelf-to-side'
-	| 'top-to-side'
-	| 'bottom-to-side'
-	| 'rail-to-stile'
-	| 'frame-to-case'
-	| 'divider-to-shelf';
+/** The joints the planner knows, named once (the request schema reads this list). */
+export const JOINT_KINDS = [
+	'shelf-to-side',
+	'top-to-side',
+	'bottom-to-side',
+	'rail-to-stile',
+	'frame-to-case',
+	'divider-to-shelf'
+] as const;
+export type JointKind = (typeof JOINT_KINDS)[number];
 
-export type FastenerKind = 'biscuit' | 'pocket-screw' | 'screw' | 'shelf-pin' | 'dado';
+export const FASTENER_KINDS = ['biscuit', 'pocket-screw', 'screw', 'shelf-pin', 'dado'] as const;
+export type FastenerKind = (typeof FASTENER_KINDS)[number];
 
 /** A stock by its id in reference/stock-holding.ts, or given by its kind and specific gravity. */
 export type StockMaterial = string | { name?: string; kind: StockKind; specificGravity: number };
