@@ -69,8 +69,15 @@ export const comparisonRequestSchema = z
 export type ComparisonRequest = z.input<typeof comparisonRequestSchema>;
 export type ComparisonInput = z.output<typeof comparisonRequestSchema>;
 
-/** The shelf request of candidate i: the shared shelf with this candidate's stock and edges. */
-export function comparisonShelf(input: ComparisonInput, i: number) {
+/** The shelf request of candidate i: the shared shelf with this candidate's stock and edges (for a
+ * comparison as sent or as parsed). */
+export function comparisonShelf<
+	Shelf extends { edges?: unknown },
+	Candidate extends { material: unknown; thickness: unknown; edges?: Shelf['edges'] }
+>(
+	input: { shelf: Shelf; candidates: Candidate[] },
+	i: number
+): Shelf & Pick<Candidate, 'material' | 'thickness'> {
 	const c = input.candidates[i];
 	return {
 		...input.shelf,

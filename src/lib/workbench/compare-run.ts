@@ -12,7 +12,7 @@ import type { InputIssue } from '../engine/errors';
 import { analyzeInput, geometryIssues, safely } from '../engine/shelf';
 import type { MaxSpanResult } from '../engine/shelf';
 import type { SafeResult, ShelfInput, ShelfResult } from '../engine/shelf/types';
-import type { ComparisonRequest } from '../schemas/analysis';
+import { comparisonShelf, type ComparisonRequest } from '../schemas/analysis';
 import { parseRequest } from '../schemas/parse';
 import { MAX_SPAN_M, shelfRequestSchema, type ShelfRequest } from '../schemas/shelf';
 
@@ -28,15 +28,9 @@ export interface CandidateRun {
 	issues: InputIssue[];
 }
 
-/** The shelf request of candidate i (the same merge as comparisonShelf in the schema module). */
+/** The shelf request of candidate i, as sent. */
 export function candidateRequest(req: ComparisonRequest, i: number): ShelfRequest {
-	const c = req.candidates[i];
-	return {
-		...req.shelf,
-		material: c.material,
-		thickness: c.thickness,
-		edges: c.edges ?? req.shelf.edges
-	};
+	return comparisonShelf(req, i);
 }
 
 /** Spans for the chart: from a third of the current span to past the longest span found. */
