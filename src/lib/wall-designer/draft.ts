@@ -9,9 +9,20 @@ import { withLoadUnit, withUnitMark } from '../components/quantity-input/reading
 import { formatLength, tryParseLength } from '../engine/units/length';
 import { lengthText, type UserLengthUnit } from '../workbench/lengths';
 
-/** The wall as typed: the schema's input with every length a text. */
-export type WallDraft = WallDesignInput;
-export type CaseDraft = WallDraft['cases'][number];
+type WallCaseInput = WallDesignInput['cases'][number];
+/**
+ * A number field as the user types it: the number once it reads as one, the text until then (the
+ * schema refuses the text and names the field).
+ */
+type Typed = number | string;
+/** A case as typed: the schema's input, its floor's lean kept as typed. */
+export type CaseDraft = Omit<WallCaseInput, 'floorTiltDeg'> & { floorTiltDeg?: Typed };
+/** The wall as typed: the schema's input with every length a text, its number fields as typed. */
+export type WallDraft = Omit<WallDesignInput, 'cases' | 'bandingWaste'> & {
+	cases: CaseDraft[];
+	bandingWaste?: Typed;
+};
+type LoadDraft = NonNullable<NonNullable<CaseDraft['shelves']>[number]['loads']>[number];
 
 /** Keys whose values are lengths (a number there is metres in a stored design). */
 export const LENGTH_KEYS = new Set([
@@ -53,20 +64,25 @@ const PSF_PA = 47.88025898033584; // lbf/ft² in pascals
 const exactNumber = (x: number) => String(Number(x.toPrecision(15)));
 
 /** A stored load (SI numbers) as text in the user's load units; texts stay as typed. */
-function loadText(load: Record<string, unknown>, unit: UserLengthUnit): Record<string, unknown> {
+function loadText(load: LoadDraft, unit: UserLengthUnit): LoadDraft {
 	const metric = unit === 'mm';
-	const out = { ...load };
-	if (typeof out.pressure === 'number')
-		out.pressure = metric
-			? `${exactNumber(out.pressure / 1000)} kPa`
-			: `${exactNumber(out.pressure / PSF_PA)} lbf/ft^2`;
-	if (typeof out.intensity === 'number')
-		out.intensity = metric
-			? `${exactNumber(out.intensity)} N/m`
-			: `${exactNumber(out.intensity / (LBF_N / 0.3048))} lbf/ft`;
-	if (typeof out.force === 'number')
-		out.force = metric ? `${exactNumber(out.force)} N` : `${exactNumber(out.force / LBF_N)} lbf`;
-	return out;
+	if (load.kind === 'area' && typeof load.pressure === 'number') {
+		const pa = load.pressure;
+		const pressure = metric
+			? `${exactNumber(pa / 1000)} kPa`
+			: `${exactNumber(pa / PSF_PA)} lbf/ft^2`;
+		return { ...load, pressure };
+	}
+	if (load.kind === 'line' && typeof load.intensity === 'number') {
+		const nPerM = load.intensity;
+		const intensity = metric
+			? `${exactNumber(nPerM)} N/m`
+			: `${exactNumber(nPerM / (LBF_N / 0.3048))} lbf/ft`;
+		return { ...load, intensity };
+	}
+	if (load.kind === 'point' && typeof load.force === 'number')
+		return { ...load, force: forceText(load.force, unit) };
+	return load;
 }
 
 /** A weight in newtons as text in the user's units. */
@@ -129,8 +145,7 @@ export function fromDesign(design: unknown, unit: UserLengthUnit): WallDraft {
 	) as WallDraft;
 	for (const c of draft.cases) {
 		for (const sh of c.shelves ?? [])
-			if (Array.isArray(sh.loads))
-				sh.loads = sh.loads.map((l) => loadText(l as Record<string, unknown>, unit)) as never;
+			if (Array.isArray(sh.loads)) sh.loads = sh.loads.map((l) => loadText(l, unit));
 		for (const o of c.drawers ?? [])
 			if (typeof o.contentsWeight === 'number')
 				o.contentsWeight = forceText(o.contentsWeight, unit);
@@ -180,24 +195,25 @@ export function newDoor(unit: UserLengthUnit) {
 	};
 }
 
-/** The schema's input: a bare number typed in a length field is in the user's unit. */
-export function toInput(draft: WallDraft, unit: UserLengthUnit): WallDesignInput {
+/**
+ * What the schema reads: a bare number typed in a length field is in the user's unit, in a load or
+ * a weight in the user's load units (never SI).
+ */
+export function toInput(draft: WallDraft, unit: UserLengthUnit): WallDraft {
 	const input = mapLengths(draft, '', (v) =>
 		typeof v === 'string' ? withUnitMark(v, unit) : v
-	) as WallDesignInput;
-	// a bare number in a load or a weight is in the user's load units, never SI
-	const bare = (v: unknown, kind: 'pressure' | 'lineLoad' | 'force') =>
+	) as WallDraft;
+	const bare = <V>(v: V, kind: 'pressure' | 'lineLoad' | 'force') =>
 		typeof v === 'string' ? withLoadUnit(v, kind, unit) : v;
+	const loadInput = (l: LoadDraft): LoadDraft =>
+		l.kind === 'area'
+			? { ...l, pressure: bare(l.pressure, 'pressure') }
+			: l.kind === 'line'
+				? { ...l, intensity: bare(l.intensity, 'lineLoad') }
+				: { ...l, force: bare(l.force, 'force') };
 	for (const c of input.cases) {
-		for (const sh of c.shelves ?? [])
-			sh.loads = sh.loads?.map((l) => {
-				const x = { ...l } as Record<string, unknown>;
-				if ('pressure' in x) x.pressure = bare(x.pressure, 'pressure');
-				if ('intensity' in x) x.intensity = bare(x.intensity, 'lineLoad');
-				if ('force' in x) x.force = bare(x.force, 'force');
-				return x as never;
-			});
-		for (const o of c.drawers ?? []) o.contentsWeight = bare(o.contentsWeight, 'force') as never;
+		for (const sh of c.shelves ?? []) sh.loads = sh.loads?.map(loadInput);
+		for (const o of c.drawers ?? []) o.contentsWeight = bare(o.contentsWeight, 'force');
 	}
 	return input;
 }

@@ -32,3 +32,5 @@ export function sideView({ heightM, depthM }: SideViewInput) {
 		z: (m: number) => floor - m * k
 	};
 }
+
+export type SideView = ReturnType<typeof sideView>;

@@ -1,0 +1,1 @@
+export { default as ChoiceField } from './ChoiceField.svelte';

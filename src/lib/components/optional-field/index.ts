@@ -1,0 +1,1 @@
+export { default as OptionalField } from './OptionalField.svelte';
