@@ -3,7 +3,8 @@
 // name, searched (a long and a short search), and one save into the full project. Each figure is the
 // median of ROUNDS calls, beside the goal (< 20 ms at any page, flat in N). Reports; never fails on a
 // slow number. Runs on the database the app would use (a temporary SQLite file unless DATABASE_URL
-// says otherwise).
+// says otherwise). On PostgreSQL it runs ANALYZE after each bulk load, as autovacuum would, and
+// BENCH_LIST_EXPLAIN=1 prints the plan of each page's query.
 //
 //   npx tsx tests/bench/list-rows.ts
 import { mkdtempSync, rmSync } from 'node:fs';
@@ -13,10 +14,12 @@ import { join } from 'node:path';
 const work = mkdtempSync(join(tmpdir(), 'spanwright-list-bench-'));
 process.env.SPANWRIGHT_DATA_DIR = work;
 
-const { closeDb, dbReady, getDb, oneRow } = await import('../../src/lib/server/db');
+const { closeDb, dbReady, dialect, getDb, getOpened, oneRow } =
+	await import('../../src/lib/server/db');
 const { analyses, memberships, users, workshops } = await import('../../src/lib/server/db/tables');
 const { createProject } = await import('../../src/lib/server/projects');
-const { createAnalysis, listAnalyses } = await import('../../src/lib/server/analyses');
+const { analysisPage, createAnalysis, listAnalyses } =
+	await import('../../src/lib/server/analyses');
 type Actor = import('../../src/lib/server/access').Actor;
 type Query = import('../../src/lib/schemas/analysis').AnalysisListQuery;
 
@@ -83,6 +86,9 @@ async function projectWith(owner: Actor, workshopId: string, n: number) {
 			});
 		await getDb().insert(analyses).values(batch);
 	}
+	// as PostgreSQL's autovacuum would after a bulk load: statistics, so that its planner knows the
+	// table's size and picks the list indexes (SQLite's planner needs none for these)
+	if (dialect === 'pg') await getOpened().pool!.query('analyze analysis');
 	return project.id;
 }
 
@@ -120,6 +126,12 @@ for (const n of [200, 10_000]) {
 		['search "12" (two letters: no index)', { ...base, q: '12' }]
 	];
 	for (const [label, query] of cases) {
+		if (process.env.BENCH_LIST_EXPLAIN && dialect === 'pg') {
+			// BENCH_LIST_EXPLAIN=1: the plan of each page's query, to see which index it reads
+			const { sql: text, params } = analysisPage(projectId, query).page.toSQL();
+			const plan = await getOpened().pool!.query(`explain ${text}`, params);
+			console.log(`\n${label} at ${n}:\n  ${plan.rows.map((r) => r['QUERY PLAN']).join('\n  ')}`);
+		}
 		const ms = await time(() => listAnalyses(owner, projectId, query));
 		rows.push([`list at ${n.toLocaleString('en')}: ${label}`, ms.toFixed(2), `< ${GOAL_MS}`]);
 	}

@@ -66,22 +66,30 @@ export function clientAddress(req: IncomingMessage, s = read()): string | undefi
 	return req.socket?.remoteAddress;
 }
 
+let securityHeaders: Readonly<Record<string, string>> | undefined;
+
+/** The security headers every answer carries, written out once; each answer adds to a copy. */
 const baseHeaders = (): Record<string, string> => {
-	const headers: Record<string, string> = {};
-	for (const [name, value] of Object.entries(SECURITY_HEADERS)) headers[name.toLowerCase()] = value;
-	if (!dev) headers['strict-transport-security'] = HSTS;
-	return headers;
+	if (!securityHeaders) {
+		const headers: Record<string, string> = {};
+		for (const [name, value] of Object.entries(SECURITY_HEADERS))
+			headers[name.toLowerCase()] = value;
+		if (!dev) headers['strict-transport-security'] = HSTS;
+		securityHeaders = Object.freeze(headers);
+	}
+	return { ...securityHeaders };
 };
 
 /** A JSON answer, as SvelteKit's json() and the security-headers hook would write it. */
 function sendJson(res: ServerResponse, status: number, body: unknown, unread = false) {
-	const text = JSON.stringify(body);
+	// encoded once: its length and what is sent
+	const bytes = Buffer.from(JSON.stringify(body));
 	const headers = baseHeaders();
-	headers['content-length'] = String(Buffer.byteLength(text));
+	headers['content-length'] = String(bytes.length);
 	headers['content-type'] = 'application/json';
 	if (unread) headers['connection'] = 'close';
 	res.writeHead(status, headers);
-	res.end(text);
+	res.end(bytes);
 }
 
 /** A Response from the app's own code (the rate limiter's 429), with the same added headers. */

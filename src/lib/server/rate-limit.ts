@@ -1,13 +1,20 @@
-import { RateLimiterPostgres, RateLimiterRes, RateLimiterSQLite } from 'rate-limiter-flexible';
+import {
+	RateLimiterMemory,
+	RateLimiterPostgres,
+	RateLimiterRes,
+	RateLimiterSQLite
+} from 'rate-limiter-flexible';
 import type Database from 'better-sqlite3';
 import { getOpened, type Opened } from './db';
 import { problem } from './http';
 
 /**
  * The open compute routes (/shelf*, /joints, /stability, /cases/check) are free to call without an
- * account, so each client address gets a budget: COMPUTE_REQUESTS per COMPUTE_WINDOW_S seconds,
- * counted in the database (the `rate_limit` table) so that several app instances share it.
- * Common practice, no source: generous for a person or a script, small for a flood.
+ * account, so each client address gets a budget: COMPUTE_REQUESTS per COMPUTE_WINDOW_S seconds.
+ * On PostgreSQL it is counted in the database (the `rate_limit` table) so that several app servers
+ * share it; on SQLite, where one server owns the database file, in that server's memory (the same
+ * counts without a write per request). Common practice, no source: generous for a person or a
+ * script, small for a flood.
  */
 export const COMPUTE_REQUESTS = 120;
 export const COMPUTE_WINDOW_S = 60;
@@ -17,15 +24,18 @@ export interface Budget {
 	prefix: string;
 	points: number;
 	seconds: number;
+	/** counted on every request of a hot path: on SQLite in the server's memory, not the table */
+	perRequest?: boolean;
 }
 
 export const COMPUTE_BUDGET: Budget = {
 	prefix: 'compute',
 	points: COMPUTE_REQUESTS,
-	seconds: COMPUTE_WINDOW_S
+	seconds: COMPUTE_WINDOW_S,
+	perRequest: true
 };
 
-type Limiter = RateLimiterSQLite | RateLimiterPostgres;
+type Limiter = RateLimiterSQLite | RateLimiterPostgres | RateLimiterMemory;
 let current: { opened: Opened; limiters: Map<string, Limiter> } | undefined;
 
 /**
@@ -52,9 +62,15 @@ function keepingStatements(db: Database.Database): Database.Database {
 const sqliteClients = new WeakMap<Database.Database, Database.Database>();
 
 /**
- * The limiter of one budget over the `rate_limit` table, made once per database: the library's
+ * The limiter of one budget, made once per database: over the `rate_limit` table, the library's
  * SQLite store on the SQLite connection, its PostgreSQL store (named prepared statements) on the
  * pool, so every app server on one PostgreSQL database counts against the same rows.
+ *
+ * A per-request budget (the compute routes) is counted differently: on SQLite in this process's
+ * memory, which is the same count since only one server opens the file (a restart starts the
+ * window afresh); on PostgreSQL in the table as above, but an address already over its budget is
+ * refused from memory until that window ends, with the wait the table gave, instead of asking
+ * the database again on every refused request.
  */
 export function limiterFor(budget: Budget): Limiter {
 	const opened = getOpened();
@@ -73,7 +89,15 @@ export function limiterFor(budget: Budget): Limiter {
 			limiter = new RateLimiterPostgres({
 				...options,
 				storeClient: opened.pool,
-				storeType: 'pool'
+				storeType: 'pool',
+				// refused from memory after the first refusal the table gives, until its window ends
+				...(budget.perRequest ? { inMemoryBlockOnConsumed: budget.points + 1 } : {})
+			});
+		} else if (budget.perRequest) {
+			limiter = new RateLimiterMemory({
+				keyPrefix: budget.prefix,
+				points: budget.points,
+				duration: budget.seconds
 			});
 		} else {
 			const db = opened.sqlite!;

@@ -2,7 +2,8 @@
 // bare node:http JSON server (bare-server.mjs) answering the same bytes, both loaded in turn by
 // autocannon at 50 connections in the same run. Every request carries its own X-Forwarded-For from
 // a pool of 5,000 addresses (the app is started with ADDRESS_HEADER=x-forwarded-for), so the real
-// per-address rate limit counts every request in the database and none is refused: many clients,
+// per-address rate limit counts every request (on SQLite in the server's memory, as deployed with
+// SQLite) and none is refused: many clients,
 // not one client over its budget. A second row asks for the answer without its curve
 // (`?curve=none`, about a third of the bytes), the bare server answering those bytes. Reports, never
 // fails on a slow number.

@@ -280,6 +280,65 @@ export function solveAgain(model: BeamModel, loads: BeamLoads): BeamSolution {
 	return { model, loads, m0: u[0], v0: u[1], c1: u[2], c2: u[3], inner };
 }
 
+/**
+ * The same beam without shear deflection (κGA = ∞) under the same loads. A statically determinate
+ * beam (no inner support, two of its four end equations statics: simple, cantilever) carries the
+ * same moments and shears either way, so only C1 and C2 are fitted again, from its two kinematic
+ * end equations, instead of a new solve; any other beam is solved again. `general` forces the
+ * solve (tests/engine/shelf-shortcuts.property.test.ts compares the two).
+ */
+export function withoutShear(s: BeamSolution, general = false): BeamSolution {
+	const { model, loads, m0, v0 } = s;
+	const bending: BeamModel = {
+		length: model.length,
+		left: model.left,
+		right: model.right,
+		inner: model.inner,
+		ei: model.ei,
+		ga: Infinity
+	};
+	if (!Number.isFinite(model.ga))
+		return { model: bending, loads, m0, v0, c1: s.c1, c2: s.c2, inner: s.inner };
+	const left = END_EQUATIONS[model.left];
+	const right = END_EQUATIONS[model.right];
+	if (general || model.inner.length > 0) return solveBeam(bending, loads);
+	// each kinematic row (v or ψ at an end): k1·C1 + k2·C2 + r = 0, r its value with C1 = C2 = 0
+	let found = 0;
+	let a1 = 0;
+	let a2 = 0;
+	let ar = 0;
+	let b1 = 0;
+	let b2 = 0;
+	let br = 0;
+	for (let i = 0; i < 4; i++) {
+		const q = i < 2 ? left[i] : right[i - 2];
+		if (q !== 'v' && q !== 'psi') continue;
+		const x = i < 2 ? 0 : model.length;
+		const k1 = q === 'v' ? x : 1;
+		const k2 = q === 'v' ? 1 : 0;
+		const r =
+			q === 'v'
+				? (loadF(loads, x) - (m0 * x * x) / 2 - (v0 * x * x * x) / 6) / model.ei
+				: (loadFp(loads, x) - m0 * x - (v0 * x * x) / 2) / model.ei;
+		if (found === 0) {
+			a1 = k1;
+			a2 = k2;
+			ar = r;
+		} else {
+			b1 = k1;
+			b2 = k2;
+			br = r;
+		}
+		found++;
+	}
+	const det = a1 * b2 - b1 * a2;
+	// not two kinematic equations (a fixed shelf: statically indeterminate): solve it
+	if (found !== 2 || det === 0) return solveBeam(bending, loads);
+	const c1 = (-ar * b2 + br * a2) / det;
+	const c2 = (-a1 * br + b1 * ar) / det;
+	return { model: bending, loads, m0, v0, c1, c2, inner: [] };
+}
+
 /** Sag at x, m (downward positive). */
 export function sagAt(s: BeamSolution, x: number): number {
 	const { ei, ga, inner } = s.model;
@@ -320,9 +379,10 @@ export function reactions(s: BeamSolution): { at: number; force: number; moment:
 	const { length, left, right, inner } = s.model;
 	const out: { at: number; force: number; moment: number }[] = [];
 	if (left !== 'free') out.push({ at: 0, force: s.v0, moment: left === 'fixed' ? s.m0 : 0 });
-	inner.forEach((x, j) => out.push({ at: x, force: s.inner[j], moment: 0 }));
+	for (let j = 0; j < inner.length; j++) out.push({ at: inner[j], force: s.inner[j], moment: 0 });
 	if (right !== 'free') {
-		const sum = out.reduce((a, r) => a + r.force, 0);
+		let sum = 0;
+		for (let j = 0; j < out.length; j++) sum += out[j].force;
 		out.push({
 			at: length,
 			force: totalLoad(s.loads) - sum,

@@ -229,25 +229,33 @@ export const analyses = pgTable(
 			.$defaultFn(() => new Date())
 	},
 	(t) => {
-		// the same list indexes as SQLite's (schema.ts): every sort key and filter of the list
+		// the same list indexes as SQLite's (schema.ts): every sort key and filter of the list, each
+		// column in the order the list's ORDER BY names it (analyses.ts, sortOrder: a column going up
+		// puts nulls first, going down last; then updated_at going down and id going up), since
+		// PostgreSQL reads an index in place of a sort only when the nulls' places agree too. A list
+		// the other way reads the index backwards and sorts only the rows of equal sort key.
 		const live = sql`${t.deletedAt} is null`;
-		const rest = [t.updatedAt, t.id, t.kind, t.pass, t.deletedAt] as const;
+		// made afresh for each index: an index takes a column's order and resets it
+		const newest = () => [t.updatedAt.desc().nullsLast(), t.id.asc()] as const;
+		const ties = () => [t.updatedAt.desc().nullsFirst(), t.id.asc()] as const;
 		return [
 			index('analysis_project').on(t.projectId),
 			index('analysis_list_updated')
-				.on(t.projectId, ...rest)
+				.on(t.projectId, ...newest(), t.kind, t.pass, t.deletedAt)
 				.where(live),
 			index('analysis_list_created')
-				.on(t.projectId, t.createdAt, ...rest)
+				.on(t.projectId, t.createdAt.desc().nullsLast(), ...ties(), t.kind, t.pass, t.deletedAt)
 				.where(live),
 			index('analysis_list_name')
-				.on(t.projectId, sql`lower(${t.name})`, ...rest)
+				.on(t.projectId, sql`lower(${t.name}) nulls first`, ...ties(), t.kind, t.pass, t.deletedAt)
 				.where(live),
+			// filtered by kind (or verdict) the list is newest first; sorted by it, the index gives
+			// the kinds in order and the rows of one kind are sorted
 			index('analysis_list_kind')
-				.on(t.projectId, t.kind, t.updatedAt, t.id, t.pass, t.deletedAt)
+				.on(t.projectId, t.kind.asc().nullsFirst(), ...newest(), t.pass, t.deletedAt)
 				.where(live),
 			index('analysis_list_pass')
-				.on(t.projectId, t.pass, t.updatedAt, t.id, t.kind, t.deletedAt)
+				.on(t.projectId, t.pass.asc().nullsFirst(), ...newest(), t.kind, t.deletedAt)
 				.where(live)
 		];
 	}
