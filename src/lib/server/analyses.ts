@@ -303,10 +303,9 @@ export async function updateAnalysis(
 	return (await getAnalysis(actor, id)).analysis;
 }
 
-/** Every version of an analysis, newest first, with who saved it. */
-export async function listRevisions(actor: Actor, id: string) {
-	const { analysis } = await getAnalysis(actor, id);
-	const rows = await getDb()
+/** Saved versions of analyses, with who saved each. */
+function revisions(where: SQL | undefined) {
+	return getDb()
 		.select({
 			version: analysisRevisions.version,
 			name: analysisRevisions.name,
@@ -318,8 +317,30 @@ export async function listRevisions(actor: Actor, id: string) {
 		})
 		.from(analysisRevisions)
 		.leftJoin(users, eq(users.id, analysisRevisions.changedBy))
-		.where(eq(analysisRevisions.analysisId, id))
-		.orderBy(desc(analysisRevisions.version));
+		.where(where);
+}
+
+/** An analysis of this project that is not deleted (its id and name), or undefined. */
+export async function analysisInProject(projectId: string, analysisId: string) {
+	return await getDb()
+		.select({ id: analyses.id, name: analyses.name })
+		.from(analyses)
+		.where(
+			and(
+				eq(analyses.id, analysisId),
+				eq(analyses.projectId, projectId),
+				isNull(analyses.deletedAt)
+			)
+		)
+		.then(firstRow);
+}
+
+/** Every version of an analysis, newest first, with who saved it. */
+export async function listRevisions(actor: Actor, id: string) {
+	const { analysis } = await getAnalysis(actor, id);
+	const rows = await revisions(eq(analysisRevisions.analysisId, id)).orderBy(
+		desc(analysisRevisions.version)
+	);
 	const unit = await lengthUnitOf(actor);
 	return rows.map(({ input, result, ...r }) => ({
 		...r,
@@ -331,20 +352,9 @@ export async function listRevisions(actor: Actor, id: string) {
 /** One earlier version: its inputs (stored and as readable rows), result and summary. */
 export async function getRevision(actor: Actor, id: string, version: number) {
 	const { analysis, project, role } = await getAnalysis(actor, id);
-	const row = await getDb()
-		.select({
-			version: analysisRevisions.version,
-			name: analysisRevisions.name,
-			input: analysisRevisions.input,
-			result: analysisRevisions.result,
-			engineVersion: analysisRevisions.engineVersion,
-			createdAt: analysisRevisions.createdAt,
-			changedByName: users.name
-		})
-		.from(analysisRevisions)
-		.leftJoin(users, eq(users.id, analysisRevisions.changedBy))
-		.where(and(eq(analysisRevisions.analysisId, id), eq(analysisRevisions.version, version)))
-		.then(firstRow);
+	const row = await revisions(
+		and(eq(analysisRevisions.analysisId, id), eq(analysisRevisions.version, version))
+	).then(firstRow);
 	if (!row) error(404, 'Not found.');
 	const unit = await lengthUnitOf(actor);
 	return {

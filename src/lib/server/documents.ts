@@ -4,7 +4,8 @@ import { fileTypeFromBuffer } from 'file-type';
 import sharp from 'sharp';
 import { requireProjectRole, type Actor } from './access';
 import { getDb, firstRow, oneRow } from './db';
-import { analyses, documents, users, type DocumentType } from './db/tables';
+import { documents, users, type DocumentType } from './db/tables';
+import { analysisInProject } from './analyses';
 import { getProject } from './projects';
 import { getStore } from './storage';
 import type { DocumentFields, DocumentPatch } from '$lib/schemas/document';
@@ -184,18 +185,8 @@ async function projectBytesInUse(projectId: string) {
 
 async function checkAnalysis(projectId: string, analysisId: string | null) {
 	if (!analysisId) return;
-	const found = await getDb()
-		.select({ id: analyses.id })
-		.from(analyses)
-		.where(
-			and(
-				eq(analyses.id, analysisId),
-				eq(analyses.projectId, projectId),
-				isNull(analyses.deletedAt)
-			)
-		)
-		.then(firstRow);
-	if (!found) refuse(422, 'Choose one of this project’s analyses.');
+	if (!(await analysisInProject(projectId, analysisId)))
+		refuse(422, 'Choose one of this project’s analyses.');
 }
 
 /** Add a file to a project (editors): checked, cleaned, stored under random keys, then recorded. */

@@ -16,44 +16,20 @@ import { getProject } from './projects';
 import { GENERAL_CAUTION, GLOSSARY, isUnverified, recordWords } from './record-words';
 import { openShareLink } from './share-links';
 import type { LengthUnit } from '$lib/schemas/preferences';
+import type { RecordItemView, RecordView } from '$lib/components/record/types';
 import { kindLabel } from '$lib/kinds/names';
 
-export interface RecordItem {
-	id: string;
+/** The record as the page receives it, with the server's own types for the kind and dates. */
+export interface RecordItem extends Omit<RecordItemView, 'kind' | 'updatedAt'> {
 	kind: AnalysisKind;
-	kindLabel: string;
-	name: string;
-	version: number;
-	engineVersion: string;
 	updatedAt: Date;
-	pass: boolean | null;
-	verdict: string;
-	inputs: [string, string][];
-	steps: string[];
-	cautions: string[];
-	/** note numbers of this item's sources */
-	notes: number[];
-	/** stored SI input and result, for the measured drawing */
-	input: unknown;
-	result: unknown;
 }
 
-export interface RecordNote {
-	n: number;
-	text: string;
-	unverified: boolean;
-}
+export type RecordNote = RecordView['notes'][number];
 
-export interface RecordDoc {
-	shop: string;
-	project: { id: string; name: string; client: string };
-	scope: 'project' | 'analysis';
+export interface RecordDoc extends Omit<RecordView, 'date' | 'items'> {
 	date: Date;
-	unit: LengthUnit;
 	items: RecordItem[];
-	cautions: string[];
-	notes: RecordNote[];
-	glossary: [string, string][];
 }
 
 type Row = typeof analyses.$inferSelect;

@@ -10,6 +10,7 @@ import type { Actor } from './access';
 import { getDb, firstRow, oneRow } from './db';
 import { analyses, shareLinks, users } from './db/tables';
 import { sha256 } from './project-access';
+import { analysisInProject } from './analyses';
 import { getProject } from './projects';
 
 const DAY_MS = 86_400_000;
@@ -38,17 +39,7 @@ export async function createShareLink(
 }
 
 async function analysisOf(projectId: string, analysisId: string) {
-	const row = await getDb()
-		.select({ id: analyses.id, name: analyses.name })
-		.from(analyses)
-		.where(
-			and(
-				eq(analyses.id, analysisId),
-				eq(analyses.projectId, projectId),
-				isNull(analyses.deletedAt)
-			)
-		)
-		.then(firstRow);
+	const row = await analysisInProject(projectId, analysisId);
 	if (!row) error(404, 'Not found.');
 	return row;
 }

@@ -14,7 +14,9 @@ export interface RecordItemView {
 	inputs: [string, string][];
 	steps: string[];
 	cautions: string[];
+	/** note numbers of this item's sources */
 	notes: number[];
+	/** stored SI input and result, for the measured drawing */
 	input: unknown;
 	result: unknown;
 }

@@ -2,8 +2,6 @@ import { fail, redirect } from '@sveltejs/kit';
 import { message, superValidate } from 'sveltekit-superforms';
 import { zod4 } from 'sveltekit-superforms/adapters';
 import { requireActor } from '$lib/server/access';
-import { sendInvitation } from '$lib/server/invitation-mail';
-import { linkOrigin, MAIL_UNAVAILABLE_MESSAGE } from '$lib/server/mail';
 import * as workshops from '$lib/server/workshops';
 import {
 	classModeSchema,
@@ -12,6 +10,7 @@ import {
 	workshopNameSchema,
 	workshopSwitchSchema
 } from '$lib/schemas/workshop';
+import { invite } from './invite-action.server';
 import { current, memberActions } from './member-actions.server';
 import { safeRedirectPath } from '$lib/schemas/return-path';
 import type { Actions, PageServerLoad } from './$types';
@@ -68,31 +67,7 @@ export const actions: Actions = {
 		await workshops.createWorkshopFor(actor.id, form.data.name);
 		redirect(303, '/workshop');
 	},
-	invite: async ({ locals, request, url }) => {
-		const { actor, ws } = await current(locals);
-		const form = await superValidate(await readForm(request), zod4(invitationSchema), {
-			id: 'invite'
-		});
-		if (!form.valid) return fail(400, { inviteForm: form });
-		const { invitation, token } = await workshops.createInvitation(
-			actor,
-			ws.id,
-			form.data.email,
-			form.data.role
-		);
-		const sent = await sendInvitation({
-			to: form.data.email,
-			from: actor,
-			workshopName: ws.name,
-			role: form.data.role,
-			link: `${linkOrigin(url)}/invite/${token}`
-		});
-		if (!sent) {
-			await workshops.revokeInvitation(actor, ws.id, invitation.id);
-			return message(form, MAIL_UNAVAILABLE_MESSAGE, { status: 503 });
-		}
-		return message(form, `Invitation sent to ${form.data.email}.`);
-	},
+	invite,
 	...memberActions,
 	// without JavaScript the first press asks again on the page (the dialog does it in the browser)
 	delete: async ({ locals, request }) => {

@@ -8,6 +8,7 @@ import { throttleMessage } from '$lib/server/accounts/throttle';
 import { mailSignInLink, signInWithPassword } from '$lib/server/auth';
 import { DEMO_ACCOUNTS } from '$lib/server/demo/accounts';
 import { MAIL_UNAVAILABLE_MESSAGE, mailDown } from '$lib/server/mail';
+import { linkMailedMessage } from '../link-mailed.server';
 import type { Actions, PageServerLoad } from './$types';
 import { readForm } from '$lib/server/form-body';
 
@@ -82,15 +83,9 @@ export const actions: Actions = {
 		const mailed = await mailSignInLink(event, { email: form.data.email, redirectTo }).catch(
 			mailDown
 		);
-		if (!mailed) return message(form, MAIL_UNAVAILABLE_MESSAGE, { status: 503 });
-		if (!mailed.ok)
-			return message(
-				form,
-				`We have sent several links to that address already; try again in ${mailed.retryAfterMinutes} minutes.`,
-				{ status: 429 }
-			);
-		return message(
+		return linkMailedMessage(
 			form,
+			mailed,
 			`If ${form.data.email} has an account, a sign-in link is on its way. It works once, within an hour.`
 		);
 	}
