@@ -7,11 +7,10 @@
 // the shelf check anyone can try). Those pages are fetched without cookies, so what is kept holds
 // nobody's data. Everything else goes to the network first; data is never stored here.
 import { build, files, version } from '$service-worker';
+import { OFFLINE_PAGES } from '$lib/offline/pages';
 
 const sw = self as unknown as ServiceWorkerGlobalScope;
 const CACHE = `spanwright-${version}`;
-/** public pages that work offline once visited (the install fetches them) */
-const OFFLINE_PAGES = ['/lab', '/try'];
 const ASSETS = new Set([...build, ...files]);
 
 sw.addEventListener('install', (event) => {
