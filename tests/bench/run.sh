@@ -21,13 +21,7 @@ npx tsx tests/bench/list-rows.ts
 # the same rows on PostgreSQL, in a throwaway cluster
 bash tests/support/with-postgres.sh npx tsx tests/bench/list-rows.ts
 npx vite build --logLevel warn
-if [ -f tests/bench/route-size.ts ]; then
-	npx tsx tests/bench/route-size.ts
-else
-	# hook: tests/bench/route-size.ts (the shelf route's gzipped JS from the build manifest) is
-	# written separately; it runs here once it exists.
-	echo "route-size: tests/bench/route-size.ts not present yet, skipped"
-fi
+npx tsx tests/bench/route-size.ts
 npx tsx tests/bench/browser/shelf-input.ts
 npx tsx tests/bench/lighthouse.ts
 npx tsx tests/bench/api/api.ts
